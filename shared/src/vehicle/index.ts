@@ -1,0 +1,2 @@
+export * from './vehicle.js';
+export * from './validate-vehicle.js';
