@@ -34,9 +34,14 @@ for (const bench of BENCHES) {
 const format = (n: number) => (n < 10 ? n.toFixed(3) : n.toFixed(1));
 console.log(`\n| benchmark | p50 | p95 | p99 | goal | within goal |\n|---|---|---|---|---|---|`);
 for (const f of figures) {
-  console.log(`| ${f.name} | ${format(f.p50)} ${f.unit} | ${format(f.p95)} ${f.unit} | ${format(f.p99)} ${f.unit} | ${f.goal} ${f.unit} | ${f.p99 <= f.goal ? 'yes' : 'NO'} |`);
+  console.log(
+    `| ${f.name} | ${format(f.p50)} ${f.unit} | ${format(f.p95)} ${f.unit} | ${format(f.p99)} ${f.unit} | ${f.goal} ${f.unit} | ${f.p99 <= f.goal ? 'yes' : 'NO'} |`,
+  );
 }
 const machine = `${cpus().length} × ${cpus()[0]?.model ?? 'unknown CPU'}, Node ${process.versions.node}`;
 console.log(`\nMachine: ${machine}`);
 mkdirSync(join(projectRoot, '.test-output'), { recursive: true });
-writeFileSync(join(projectRoot, '.test-output', 'benchmarks.json'), JSON.stringify({ machine, at: new Date().toISOString(), figures }, null, 2));
+writeFileSync(
+  join(projectRoot, '.test-output', 'benchmarks.json'),
+  JSON.stringify({ machine, at: new Date().toISOString(), figures }, null, 2),
+);

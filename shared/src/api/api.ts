@@ -20,7 +20,17 @@ export interface DisplaySettings {
   locale: Locale;
 }
 
-export const DEFAULT_DISPLAY_SETTINGS: DisplaySettings = { textScale: 100, theme: 'day', gloveMode: false, locale: 'en' };
+export const DEFAULT_DISPLAY_SETTINGS: DisplaySettings = {
+  textScale: 100,
+  theme: 'day',
+  gloveMode: false,
+  locale: 'en',
+};
+
+export interface OrganizationSummary {
+  id: string;
+  name: string;
+}
 
 export interface UserSummary {
   id: string;
@@ -76,6 +86,8 @@ export interface VehicleRequest {
   plate: string;
   config: VehicleConfig;
   status?: VehicleStatus;
+  // Why the vehicle is out of service; cleared when it returns to service.
+  statusReason?: string | null;
 }
 
 export interface VehicleResponse {

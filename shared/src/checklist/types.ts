@@ -62,7 +62,16 @@ export interface ChecklistVehicle {
 }
 
 // Zones in walk-around route order.
-export const ZONE_KEYS = ['front', 'cab', 'air_brakes', 'left_side', 'rear', 'right_side', 'coupling', 'trailer'] as const;
+export const ZONE_KEYS = [
+  'front',
+  'cab',
+  'air_brakes',
+  'left_side',
+  'rear',
+  'right_side',
+  'coupling',
+  'trailer',
+] as const;
 export type ZoneKey = (typeof ZONE_KEYS)[number];
 
 export const ITEM_CATEGORIES = [

@@ -138,11 +138,7 @@ export function unitFits(quantity: Quantity, unit: Unit): boolean {
 export class UnitError extends Error {}
 
 // Converts a value in any unit of the quantity's dimension into the quantity's canonical unit.
-export function toCanonical<Q extends Quantity>(
-  quantity: Q,
-  value: number,
-  unit: string,
-): Measure<CanonicalUnit<Q>> {
+export function toCanonical<Q extends Quantity>(quantity: Q, value: number, unit: string): Measure<CanonicalUnit<Q>> {
   const parsed = parseUnit(unit);
   if (!parsed) {
     throw new UnitError(`Unknown unit "${unit}". Use one of: ${UNITS.join(', ')}.`);

@@ -26,6 +26,8 @@ export interface VehicleInput {
   config: VehicleConfig;
 }
 
+const LONG_STROKE_SIZES: readonly number[] = [12, 16, 20, 24, 30];
+
 // 17 characters, no I, O or Q (ISO 3779 / 49 CFR 565.15).
 const VIN_PATTERN = /^[A-HJ-NPR-Z0-9]{17}$/;
 
@@ -99,9 +101,9 @@ export function validateVehicleConfig(kind: VehicleKind, config: VehicleConfig):
         }
         if (!oneOf(CHAMBER_STROKES, axle.chamber.stroke)) {
           add(`${at}.chamber.stroke`, 'Choose standard or long stroke.');
-        } else if (axle.chamber.stroke === 'long' && axle.chamber.size === 36) {
-          // 49 CFR 393.47(e) lists no long-stroke type 36.
-          add(`${at}.chamber.stroke`, 'Type 36 chambers come in standard stroke only.');
+        } else if (axle.chamber.stroke === 'long' && !LONG_STROKE_SIZES.includes(axle.chamber.size)) {
+          // The 49 CFR 393.47(e) table lists long-stroke limits for types 12 to 30 only.
+          add(`${at}.chamber.stroke`, `Long stroke is listed for chamber types ${LONG_STROKE_SIZES.join(', ')} only.`);
         }
         if (
           axle.chamber.ratedStroke3In &&

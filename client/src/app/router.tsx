@@ -1,0 +1,109 @@
+import type { QueryClient } from '@tanstack/react-query';
+import type { ComponentType } from 'react';
+import type { LoaderFunction, LoaderFunctionArgs, RouteObject } from 'react-router';
+import type { Role } from '@yardcall/shared';
+import { AppShell } from './layout/app-shell';
+import { RootError, RouteError, RouteLoading } from './layout/route-status';
+import { NotFound } from './layout/not-found';
+import { redirectToRoleHome, requireRole } from './guards';
+
+interface ScreenModule {
+  Component: ComponentType;
+  loader?: LoaderFunction;
+}
+
+// A screen behind the role check, in its own chunk. Its data is fetched only once the check
+// passes, so a signed-out visitor or another role never fires the screen's calls.
+function guardedScreen(
+  queryClient: QueryClient,
+  path: string,
+  roles: readonly Role[],
+  load: () => Promise<ScreenModule>,
+): RouteObject {
+  const guard = requireRole(queryClient, roles);
+  return {
+    path,
+    loader: async (args: LoaderFunctionArgs) => {
+      const redirect = await guard(args);
+      if (redirect) return redirect;
+      const screen = await load();
+      return screen.loader ? screen.loader(args) : null;
+    },
+    lazy: async () => ({ Component: (await load()).Component }),
+  };
+}
+
+function publicScreen(path: string, load: () => Promise<ComponentType>): RouteObject {
+  return { path, lazy: async () => ({ Component: await load() }) };
+}
+
+// Every screen is its own chunk: a driver's first load carries no admin or supervisor code.
+export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
+  const screen = (path: string, roles: readonly Role[], load: () => Promise<ScreenModule>) =>
+    guardedScreen(queryClient, path, roles, load);
+  return [
+    {
+      path: '/',
+      Component: AppShell,
+      ErrorBoundary: RootError,
+      HydrateFallback: RouteLoading,
+      children: [
+        {
+          // Errors below the shell keep the header, so settings and sign-out stay in reach.
+          ErrorBoundary: RouteError,
+          children: [
+            { index: true, loader: redirectToRoleHome(queryClient) },
+            publicScreen('sign-in', async () => (await import('@/features/auth/routes/sign-in')).SignInRoute),
+            publicScreen(
+              'invite/:token',
+              async () => (await import('@/features/auth/routes/accept-invitation')).AcceptInvitationRoute,
+            ),
+            publicScreen('settings', async () => (await import('@/features/settings/routes/settings')).SettingsRoute),
+
+            screen('driver', ['driver'], async () => ({
+              Component: (await import('@/features/home/routes/driver-home')).DriverHome,
+            })),
+            screen('driver/start', ['driver'], async () => {
+              const route = await import('./routes/start-inspection');
+              return { Component: route.StartInspectionRoute, loader: route.startInspectionLoader(queryClient) };
+            }),
+            screen('mechanic', ['mechanic'], async () => ({
+              Component: (await import('@/features/home/routes/mechanic-home')).MechanicHome,
+            })),
+            screen('supervisor', ['supervisor'], async () => {
+              const route = await import('./routes/supervisor-home');
+              return { Component: route.SupervisorHomeRoute, loader: route.supervisorHomeLoader(queryClient) };
+            }),
+            screen('trainer', ['trainer'], async () => {
+              const route = await import('./routes/trainer-home');
+              return { Component: route.TrainerHomeRoute, loader: route.trainerHomeLoader(queryClient) };
+            }),
+            screen('vehicles', ['admin', 'supervisor', 'mechanic'], async () => {
+              const route = await import('@/features/vehicles/routes/vehicles');
+              return { Component: route.VehiclesRoute, loader: route.vehiclesLoader(queryClient) };
+            }),
+            screen('vehicles/new', ['admin'], async () => ({
+              Component: (await import('@/features/vehicles/routes/vehicle-new')).VehicleNewRoute,
+            })),
+            screen('vehicles/:vehicleId', ['admin'], async () => {
+              const route = await import('@/features/vehicles/routes/vehicle-edit');
+              return { Component: route.VehicleEditRoute, loader: route.vehicleEditLoader(queryClient) };
+            }),
+            screen('admin', ['admin'], async () => ({
+              Component: (await import('@/features/home/routes/admin-home')).AdminHome,
+            })),
+            screen('admin/users', ['admin'], async () => {
+              const route = await import('@/features/users/routes/users');
+              return { Component: route.UsersRoute, loader: route.usersLoader(queryClient) };
+            }),
+            screen('admin/outbox', ['admin'], async () => {
+              const route = await import('@/features/users/routes/outbox');
+              return { Component: route.OutboxRoute, loader: route.outboxLoader(queryClient) };
+            }),
+            { path: '*', Component: NotFound },
+          ],
+        },
+      ],
+    },
+  ];
+}

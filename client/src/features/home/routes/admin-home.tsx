@@ -1,0 +1,26 @@
+import { useTranslation } from 'react-i18next';
+import { LinkButton } from '@/components/ui/button';
+import { HomePage } from '../components/home-page';
+
+export function AdminHome() {
+  const { t } = useTranslation();
+  const links = [
+    { to: '/admin/users', label: t('admin.users'), hint: t('admin.usersHint') },
+    { to: '/vehicles', label: t('admin.vehicles'), hint: t('admin.vehiclesHint') },
+    { to: '/admin/outbox', label: t('admin.outbox'), hint: t('admin.outboxHint') },
+  ];
+  return (
+    <HomePage role="admin" title={t('admin.title')} lead={t('admin.lead')}>
+      <nav aria-label={t('admin.title')}>
+        <ul className="grid grid-cols-1 gap-tap-gap md:grid-cols-3">
+          {links.map((link) => (
+            <li key={link.to} className="flex flex-col gap-2 rounded-xl border-2 border-line bg-surface p-4">
+              <LinkButton to={link.to}>{link.label}</LinkButton>
+              <p className="text-muted">{link.hint}</p>
+            </li>
+          ))}
+        </ul>
+      </nav>
+    </HomePage>
+  );
+}

@@ -1,0 +1,18 @@
+import '@fontsource/atkinson-hyperlegible/400.css';
+import '@fontsource/atkinson-hyperlegible/700.css';
+import './index.css';
+import { StrictMode } from 'react';
+import { createRoot } from 'react-dom/client';
+import { App } from '@/app/app';
+import { applyDisplaySettings, readCachedDisplaySettings } from '@/lib/display-settings';
+
+// Before the first paint: the last settings used on this device (text size, theme, language).
+applyDisplaySettings(readCachedDisplaySettings());
+
+const root = document.getElementById('root');
+if (!root) throw new Error('index.html has no #root element.');
+createRoot(root).render(
+  <StrictMode>
+    <App />
+  </StrictMode>,
+);

@@ -1,0 +1,55 @@
+import { Module } from '@nestjs/common';
+import { ConfigModule, ConfigService } from '@nestjs/config';
+import { APP_FILTER, APP_PIPE } from '@nestjs/core';
+import { ServeStaticModule } from '@nestjs/serve-static';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import { AuthModule } from './auth/auth.module';
+import { ApiExceptionFilter } from './common/api-exception.filter';
+import { createValidationPipe } from './common/validation';
+import { validateEnv, type AppEnv } from './config/env.validation';
+import { buildDataSourceOptions } from './database/data-source';
+import { HealthModule } from './health/health.module';
+import { MailModule } from './mail/mail.module';
+import { OrganizationsModule } from './organizations/organizations.module';
+import { UsersModule } from './users/users.module';
+import { VehiclesModule } from './vehicles/vehicles.module';
+
+// The environment is the only configuration source (no .env file), checked once at boot. forRoot answers a
+// promise that a bad value rejects; NestFactory.create then rejects with that sentence. The no-op catch only
+// keeps Node from calling the rejection unhandled before Nest awaits it.
+const configModule = ConfigModule.forRoot({ isGlobal: true, ignoreEnvFile: true, validate: validateEnv });
+void configModule.catch(() => undefined);
+
+@Module({
+  imports: [
+    configModule,
+    TypeOrmModule.forRootAsync({
+      inject: [ConfigService],
+      useFactory: (config: ConfigService<AppEnv, true>) => ({
+        ...buildDataSourceOptions(config.get('DATABASE_URL', { infer: true })),
+        // Fail fast at boot instead of retrying for half a minute.
+        retryAttempts: 2,
+        retryDelay: 500,
+      }),
+    }),
+    ServeStaticModule.forRootAsync({
+      inject: [ConfigService],
+      useFactory: (config: ConfigService<AppEnv, true>) => {
+        const clientDist = config.get('CLIENT_DIST', { infer: true });
+        // The SPA gets every path outside /api; /api paths fall through to the API (and its 404).
+        return clientDist ? [{ rootPath: clientDist, exclude: /^\/api(\/|$)/ }] : [];
+      },
+    }),
+    AuthModule,
+    OrganizationsModule,
+    UsersModule,
+    VehiclesModule,
+    MailModule,
+    HealthModule,
+  ],
+  providers: [
+    { provide: APP_PIPE, useFactory: createValidationPipe },
+    { provide: APP_FILTER, useClass: ApiExceptionFilter },
+  ],
+})
+export class AppModule {}

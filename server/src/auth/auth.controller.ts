@@ -1,0 +1,56 @@
+import { Body, Controller, Get, HttpCode, HttpStatus, Patch, Post, UseGuards } from '@nestjs/common';
+import {
+  ApiBearerAuth,
+  ApiOkResponse,
+  ApiOperation,
+  ApiTags,
+  ApiTooManyRequestsResponse,
+  ApiUnauthorizedResponse,
+} from '@nestjs/swagger';
+import type { LoginResponse, UserSummary } from '@yardcall/shared';
+import { ApiErrorBodyDto } from '../common/dto/api-error-body.dto';
+import { UserSummaryDto } from '../users/dto/user-summary.dto';
+import type { AuthUser } from './auth-user';
+import { AuthService } from './auth.service';
+import { CurrentUser } from './decorators/current-user.decorator';
+import { Public } from './decorators/public.decorator';
+import { UpdateDisplaySettingsDto } from './dto/display-settings.dto';
+import { LoginResponseDto } from './dto/login-response.dto';
+import { LoginDto } from './dto/login.dto';
+import { LoginThrottlerGuard } from './guards/login-throttler.guard';
+
+@ApiTags('auth')
+@Controller('auth')
+export class AuthController {
+  constructor(private readonly auth: AuthService) {}
+
+  @Public()
+  @UseGuards(LoginThrottlerGuard)
+  @Post('login')
+  @HttpCode(HttpStatus.OK)
+  @ApiOperation({ summary: 'Sign in with e-mail and password; answers an access token and the user.' })
+  @ApiOkResponse({ type: LoginResponseDto })
+  @ApiUnauthorizedResponse({ type: ApiErrorBodyDto, description: 'Email or password is wrong.' })
+  @ApiTooManyRequestsResponse({ type: ApiErrorBodyDto, description: 'Too many attempts for this e-mail address.' })
+  login(@Body() body: LoginDto): Promise<LoginResponse> {
+    return this.auth.login(body.email, body.password);
+  }
+
+  @ApiBearerAuth()
+  @Get('me')
+  @ApiOperation({ summary: 'The signed-in user.' })
+  @ApiOkResponse({ type: UserSummaryDto })
+  @ApiUnauthorizedResponse({ type: ApiErrorBodyDto })
+  me(@CurrentUser() user: AuthUser): Promise<UserSummary> {
+    return this.auth.me(user.id);
+  }
+
+  @ApiBearerAuth()
+  @Patch('me/settings')
+  @ApiOperation({ summary: "Change the signed-in user's display settings (only the fields sent)." })
+  @ApiOkResponse({ type: UserSummaryDto })
+  @ApiUnauthorizedResponse({ type: ApiErrorBodyDto })
+  updateSettings(@CurrentUser() user: AuthUser, @Body() body: UpdateDisplaySettingsDto): Promise<UserSummary> {
+    return this.auth.updateSettings(user.id, body);
+  }
+}

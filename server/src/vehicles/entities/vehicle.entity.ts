@@ -1,0 +1,63 @@
+import {
+  VEHICLE_KINDS,
+  VEHICLE_STATUSES,
+  type VehicleConfig,
+  type VehicleKind,
+  type VehicleStatus,
+} from '@yardcall/shared';
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  Index,
+  JoinColumn,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+  UpdateDateColumn,
+} from 'typeorm';
+import { Organization } from '../../organizations/entities/organization.entity';
+
+// Unit numbers are unique per organisation whatever their case; the functional index lives in the migration.
+@Index('UQ_vehicles_org_unit_number_lower', { synchronize: false })
+@Entity({ name: 'vehicles' })
+export class Vehicle {
+  @PrimaryGeneratedColumn('uuid')
+  id: string;
+
+  @Column({ name: 'organization_id', type: 'uuid' })
+  organizationId: string;
+
+  @ManyToOne(() => Organization, { onDelete: 'RESTRICT', nullable: false })
+  @JoinColumn({ name: 'organization_id' })
+  organization?: Organization;
+
+  @Column({ name: 'unit_number', type: 'varchar', length: 20 })
+  unitNumber: string;
+
+  @Column({ type: 'enum', enum: [...VEHICLE_KINDS], enumName: 'vehicle_kind' })
+  kind: VehicleKind;
+
+  @Column({ type: 'varchar', length: 17 })
+  vin: string;
+
+  @Column({ type: 'varchar', length: 12 })
+  plate: string;
+
+  @Column({ type: 'enum', enum: [...VEHICLE_STATUSES], enumName: 'vehicle_status', default: 'in_service' })
+  status: VehicleStatus;
+
+  @Column({ name: 'status_reason', type: 'text', nullable: true })
+  statusReason: string | null;
+
+  @Column({ name: 'status_since', type: 'timestamptz', default: () => 'now()' })
+  statusSince: Date;
+
+  @Column({ type: 'jsonb' })
+  config: VehicleConfig;
+
+  @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
+  createdAt: Date;
+
+  @UpdateDateColumn({ name: 'updated_at', type: 'timestamptz' })
+  updatedAt: Date;
+}

@@ -1,0 +1,60 @@
+import { spawn } from 'node:child_process';
+import { fileURLToPath } from 'node:url';
+import { describe, expect, it } from 'vitest';
+
+const CLI = fileURLToPath(new URL('./interpret.ts', import.meta.url));
+
+function runCli(input: string): Promise<{ lines: unknown[]; code: number | null }> {
+  return new Promise((resolve, reject) => {
+    const child = spawn(process.execPath, ['--import', 'tsx', CLI], { stdio: ['pipe', 'pipe', 'pipe'] });
+    let out = '';
+    let err = '';
+    child.stdout.on('data', (chunk: Buffer) => (out += chunk.toString()));
+    child.stderr.on('data', (chunk: Buffer) => (err += chunk.toString()));
+    child.on('error', reject);
+    child.on('close', (code) => {
+      if (err.trim() !== '') reject(new Error(err));
+      else
+        resolve({
+          lines: out
+            .trim()
+            .split('\n')
+            .map((l) => JSON.parse(l) as unknown),
+          code,
+        });
+    });
+    child.stdin.end(input);
+  });
+}
+
+describe('interpret CLI', () => {
+  it('answers every line in order, reporting bad lines and going on', async () => {
+    const input = [
+      { text: 'looks good', expect: { type: 'check' }, locale: 'en' },
+      'not json',
+      { text: 'for thirty seconds', expect: { type: 'measure', quantity: 'tread_depth' }, locale: 'en' },
+      { text: 'tiene una fuga', expect: { type: 'check' }, locale: 'es' },
+      { text: 'repeat that', expect: { type: 'check' }, locale: 'en' },
+      { text: 'um', expect: { type: 'check' }, locale: 'en' },
+      { text: 'x', expect: { type: 'measure', quantity: 'weight' }, locale: 'en' },
+      { text: 'ciento cinco', expect: { type: 'measure', quantity: 'tire_pressure' }, locale: 'es' },
+      { text: 'good', expect: { type: 'check' }, locale: 'fr' },
+      { text: 'n/a', expect: { type: 'check' }, locale: 'en' },
+    ]
+      .map((line) => (typeof line === 'string' ? line : JSON.stringify(line)))
+      .join('\n');
+    const { lines, code } = await runCli(`${input}\n`);
+    expect(code).toBe(0);
+    expect(lines).toHaveLength(10);
+    expect(lines[0]).toEqual({ kind: 'answer', answer: 'pass' });
+    expect(lines[1]).toHaveProperty('error');
+    expect(lines[2]).toEqual({ kind: 'answer', measurement: { quantity: 'tread_depth', value: 4, unit: 'in/32' } });
+    expect(lines[3]).toEqual({ kind: 'answer', answer: 'defect', detail: 'tiene una fuga' });
+    expect(lines[4]).toEqual({ kind: 'command', command: 'repeat' });
+    expect(lines[5]).toMatchObject({ kind: 'unclear' });
+    expect(lines[6]).toHaveProperty('error');
+    expect(lines[7]).toEqual({ kind: 'answer', measurement: { quantity: 'tire_pressure', value: 105, unit: 'psi' } });
+    expect(lines[8]).toHaveProperty('error');
+    expect(lines[9]).toEqual({ kind: 'answer', answer: 'not_applicable' });
+  }, 30_000);
+});

@@ -1,0 +1,248 @@
+import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import type { Expectation, Locale } from '../checklist/index.js';
+import { QUANTITIES, type Quantity } from '../units/index.js';
+import { interpretUtterance } from './interpret-utterance.js';
+import { interpretConfirmation } from './interpret-confirmation.js';
+import { confirmOutOfLimitPrompt, measurementToWords, readBackMeasurement, unclearPrompt } from './read-back.js';
+import { UNCLEAR_REASONS, type Interpretation, type SpokenMeasurement } from './types.js';
+
+const check: Expectation = { type: 'check' };
+const measure = (quantity: Quantity): Expectation => ({ type: 'measure', quantity });
+const say = (text: string, expectation: Expectation = check, locale: Locale = 'en'): Interpretation =>
+  interpretUtterance([{ transcript: text }], expectation, locale);
+
+describe('interpretUtterance', () => {
+  it('takes the many ways of saying fine as a pass', () => {
+    for (const text of ['good', 'looks good', 'checks out', 'yep', 'no problems', 'good to go']) {
+      expect(say(text)).toMatchObject({ kind: 'answer', answer: 'pass' });
+    }
+    for (const text of ['bien', 'todo bien', 'está bien', 'correcto', 'sin problemas']) {
+      expect(say(text, check, 'es')).toMatchObject({ kind: 'answer', answer: 'pass' });
+    }
+  });
+
+  it('takes a negated problem as a pass', () => {
+    expect(say('no leaks')).toMatchObject({ answer: 'pass' });
+    expect(say('nothing loose')).toMatchObject({ answer: 'pass' });
+    expect(say('sin fugas', check, 'es')).toMatchObject({ answer: 'pass' });
+    expect(say('nada suelto', check, 'es')).toMatchObject({ answer: 'pass' });
+  });
+
+  it('never takes a negated good word as a pass', () => {
+    for (const text of ['not good', 'not okay', 'no not good', 'isnt right'])
+      expect(say(text)).not.toMatchObject({ answer: 'pass' });
+    expect(say('no está bien', check, 'es')).not.toMatchObject({ answer: 'pass' });
+  });
+
+  it('reports a defect with what was said about it, even next to a good word', () => {
+    expect(say('defect cracked lens')).toEqual({
+      kind: 'answer',
+      answer: 'defect',
+      detail: 'cracked lens',
+      heard: 'defect cracked lens',
+    });
+    expect(say('good except the lens is cracked')).toMatchObject({ answer: 'defect', detail: 'the lens is cracked' });
+    expect(say('tiene una fuga', check, 'es')).toMatchObject({ answer: 'defect', detail: 'tiene una fuga' });
+  });
+
+  it('treats a no before a pause as an answer, not a negation', () => {
+    expect(say('no, it is leaking')).toMatchObject({ answer: 'defect' });
+    expect(say('no, está roto', check, 'es')).toMatchObject({ answer: 'defect' });
+    expect(say('no está roto', check, 'es')).toMatchObject({ answer: 'pass' });
+  });
+
+  it('finds hesitations, hedges and half sentences unclear', () => {
+    expect(say('um')).toMatchObject({ kind: 'unclear', reason: 'filler' });
+    expect(say('este pues', check, 'es')).toMatchObject({ kind: 'unclear', reason: 'filler' });
+    expect(say('good but')).toMatchObject({ kind: 'unclear', reason: 'incomplete' });
+    expect(say('probably fine')).toMatchObject({ kind: 'unclear', reason: 'hedged' });
+    expect(say('the lens is')).toMatchObject({ kind: 'unclear' });
+    expect(say('')).toMatchObject({ kind: 'unclear', reason: 'empty' });
+  });
+
+  it('hears commands, including a language switch in either language', () => {
+    expect(say('okay repeat that please')).toMatchObject({ kind: 'command', command: 'repeat' });
+    expect(say('go back')).toMatchObject({ command: 'back' });
+    expect(say('stop recording')).toMatchObject({ command: 'end_note' });
+    expect(say('en español')).toEqual({ kind: 'command', command: 'language', locale: 'es', heard: 'en español' });
+    expect(say('cambiar a inglés', check, 'es')).toMatchObject({ command: 'language', locale: 'en' });
+  });
+
+  it('reads measurements in words, digits, fractions and gauge style into canonical units', () => {
+    expect(say('for thirty seconds', measure('tread_depth'))).toMatchObject({
+      measurement: { value: 4, unit: 'in/32' },
+    });
+    expect(say("tread's at six", measure('tread_depth'))).toMatchObject({ measurement: { value: 6 } });
+    expect(say('one ten', measure('tire_pressure'))).toMatchObject({ measurement: { value: 110, unit: 'psi' } });
+    expect(say('7 bar', measure('tire_pressure'))).toMatchObject({ measurement: { value: 101.5264 } });
+    expect(say('one and three quarter inches', measure('pushrod_stroke'))).toMatchObject({
+      measurement: { value: 1.75, unit: 'in' },
+    });
+    expect(say('dos pulgadas', measure('steering_lash'), 'es')).toMatchObject({ measurement: { value: 2 } });
+    expect(say('cinco de 32', measure('tread_depth'), 'es')).toMatchObject({ measurement: { value: 5 } });
+    expect(say('two psi a minute', measure('leak_rate'))).toMatchObject({ measurement: { value: 2, unit: 'psi/min' } });
+  });
+
+  it('finds a value far outside the sensible range unclear', () => {
+    expect(say('90/32', measure('tread_depth'))).toMatchObject({ kind: 'unclear', reason: 'implausible' });
+    expect(say('ten degrees', measure('steering_lash'))).toMatchObject({ kind: 'unclear', reason: 'unit_mismatch' });
+  });
+
+  it('needs a value on a measure item and good or defect on a check item', () => {
+    expect(say('good', measure('tread_depth'))).toMatchObject({ kind: 'unclear', reason: 'value_needed' });
+    expect(say('one ten')).toMatchObject({ kind: 'unclear', reason: 'number_for_check' });
+    expect(say('no aplica', measure('tread_depth'), 'es')).toMatchObject({ answer: 'not_applicable' });
+  });
+
+  it('finds hypotheses that disagree between a pass and a problem unclear', () => {
+    const got = interpretUtterance(
+      [
+        { transcript: 'looks good', confidence: 0.8 },
+        { transcript: 'looks cut', confidence: 0.3 },
+      ],
+      check,
+      'en',
+    );
+    expect(got).toMatchObject({ kind: 'unclear', reason: 'disagreement' });
+  });
+
+  it('keeps the best value unless a close hypothesis hears another', () => {
+    const far = [
+      { transcript: 'five thirty seconds', confidence: 0.9 },
+      { transcript: 'nine thirty seconds', confidence: 0.3 },
+    ];
+    expect(interpretUtterance(far, measure('tread_depth'), 'en')).toMatchObject({ measurement: { value: 5 } });
+    const close = [
+      { transcript: 'five thirty seconds', confidence: 0.6 },
+      { transcript: 'nine thirty seconds', confidence: 0.55 },
+    ];
+    expect(interpretUtterance(close, measure('tread_depth'), 'en')).toMatchObject({
+      kind: 'unclear',
+      reason: 'disagreement',
+    });
+  });
+
+  it('never answers pass to noise', () => {
+    fc.assert(
+      fc.property(fc.string({ maxLength: 30 }), fc.constantFrom<Locale>('en', 'es'), (noise, locale) => {
+        const got = interpretUtterance([{ transcript: noise }], measure('tread_depth'), locale);
+        expect(got.kind === 'answer' && got.answer === 'pass').toBe(false);
+      }),
+    );
+  });
+});
+
+const SAMPLES: Record<Quantity, number[]> = {
+  tread_depth: [0, 1, 2, 4, 5, 11, 32],
+  tire_pressure: [0, 85, 105, 110, 125],
+  air_pressure: [55, 60, 100, 120, 135],
+  lining_thickness: [0.0625, 0.125, 0.1875, 0.25, 0.5, 0.75],
+  pushrod_stroke: [1, 1.25, 1.375, 1.75, 2, 2.5],
+  steering_lash: [0.5, 2, 2.25, 2.375, 4.25, 5.75],
+  slack_angle: [45, 90, 100],
+  leak_rate: [0, 1, 2, 3.5],
+};
+
+describe('read-backs', () => {
+  it('says the value the way the trade says it', () => {
+    const m: SpokenMeasurement = {
+      quantity: 'tread_depth',
+      value: 5,
+      unit: 'in/32',
+      said: { value: 5, unit: 'in/32' },
+    };
+    expect(readBackMeasurement(m, 'en')).toBe('Five thirty-seconds. Is that right?');
+    expect(readBackMeasurement(m, 'es')).toBe('Cinco treintaidosavos. ¿Es correcto?');
+    expect(measurementToWords(1.75, 'in', 'en')).toBe('one and three quarter inches');
+    expect(measurementToWords(1.75, 'in', 'es')).toBe('una pulgada y tres cuartos');
+    expect(measurementToWords(4, 'mm', 'en')).toBe('four millimetres');
+  });
+
+  for (const locale of ['en', 'es'] as const) {
+    it(`reads back every quantity in ${locale} in words that are heard as the same value`, () => {
+      for (const quantity of QUANTITIES) {
+        for (const value of SAMPLES[quantity]) {
+          const heard = say(measurementToWords(value, canonical(quantity), locale), measure(quantity), locale);
+          expect(heard, `${quantity} ${value}`).toMatchObject({ kind: 'measurement', measurement: { value } });
+        }
+      }
+    });
+  }
+
+  it('asks to confirm an out-of-limit value with the limit in the sentence', () => {
+    const m: SpokenMeasurement = {
+      quantity: 'tread_depth',
+      value: 2,
+      unit: 'in/32',
+      said: { value: 2, unit: 'in/32' },
+    };
+    const prompt = confirmOutOfLimitPrompt(m, 'A steer tire needs at least 4/32.', 'en');
+    expect(prompt).toContain('two thirty-seconds');
+    expect(prompt).toContain('A steer tire needs at least 4/32.');
+  });
+
+  it('has a re-ask sentence for every unclear reason in both languages', () => {
+    for (const reason of UNCLEAR_REASONS) {
+      expect(unclearPrompt(reason, 'en')).toMatch(/\w/);
+      expect(unclearPrompt(reason, 'es')).toMatch(/\w/);
+    }
+  });
+});
+
+function canonical(quantity: Quantity): 'in/32' | 'psi' | 'in' | 'deg' | 'psi/min' {
+  const units = {
+    tread_depth: 'in/32',
+    tire_pressure: 'psi',
+    air_pressure: 'psi',
+    lining_thickness: 'in',
+    pushrod_stroke: 'in',
+    steering_lash: 'in',
+    slack_angle: 'deg',
+    leak_rate: 'psi/min',
+  } as const;
+  return units[quantity];
+}
+
+describe('interpretConfirmation', () => {
+  const pending: SpokenMeasurement = {
+    quantity: 'tread_depth',
+    value: 2,
+    unit: 'in/32',
+    said: { value: 2, unit: 'in/32' },
+  };
+
+  it('confirms on yes and corrects on no, with the new value when said', () => {
+    expect(interpretConfirmation([{ transcript: 'yes' }], 'en', pending)).toMatchObject({ kind: 'confirm' });
+    expect(interpretConfirmation([{ transcript: 'sí, correcto' }], 'es', pending)).toMatchObject({ kind: 'confirm' });
+    expect(interpretConfirmation([{ transcript: 'no' }], 'en', pending)).toEqual({ kind: 'correct', heard: 'no' });
+    expect(interpretConfirmation([{ transcript: 'no its six' }], 'en', pending)).toMatchObject({
+      kind: 'correct',
+      measurement: { value: 6 },
+    });
+    expect(interpretConfirmation([{ transcript: 'seis' }], 'es', pending)).toMatchObject({
+      kind: 'correct',
+      measurement: { value: 6 },
+    });
+  });
+
+  it('confirms when the same value is said again and is unclear otherwise', () => {
+    expect(interpretConfirmation([{ transcript: 'yes two thirty seconds' }], 'en', pending)).toMatchObject({
+      kind: 'confirm',
+    });
+    expect(interpretConfirmation([{ transcript: 'um' }], 'en', pending)).toMatchObject({ kind: 'unclear' });
+    expect(
+      interpretConfirmation(
+        [
+          { transcript: 'yes', confidence: 0.6 },
+          { transcript: 'no', confidence: 0.5 },
+        ],
+        'en',
+        pending,
+      ),
+    ).toMatchObject({
+      kind: 'unclear',
+      reason: 'disagreement',
+    });
+  });
+});

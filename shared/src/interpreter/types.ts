@@ -1,0 +1,85 @@
+// What the interpreter hears and what it decides the driver meant.
+import type { Locale } from '../checklist/index.js';
+import type { CanonicalUnit, Quantity, Unit } from '../units/index.js';
+
+// One hypothesis of the recogniser, best first unless confidences say otherwise.
+export interface Alternative {
+  transcript: string;
+  confidence?: number;
+}
+
+export const COMMANDS = [
+  'repeat',
+  'back',
+  'skip',
+  'pause',
+  'resume',
+  'note',
+  'end_note',
+  'help',
+  'where',
+  'finish',
+  'language',
+] as const;
+export type Command = (typeof COMMANDS)[number];
+
+export const UNCLEAR_REASONS = [
+  // Nothing was heard, or only hesitation.
+  'empty',
+  'filler',
+  // Words that carry no answer the interpreter knows.
+  'not_understood',
+  // "maybe", "not sure", "más o menos".
+  'hedged',
+  // "not bad": neither a pass nor a problem.
+  'vague',
+  // "good but...": a contrast with nothing after it.
+  'incomplete',
+  // A lone "no": no problem, or not good?
+  'ambiguous',
+  // The hypotheses disagree between a pass and a problem, or between values.
+  'disagreement',
+  // A measure item answered "good" without a value.
+  'value_needed',
+  // A check item answered with a bare number.
+  'number_for_check',
+  // Two different values in one answer.
+  'several_values',
+  // A value with no unit where the item cannot imply one.
+  'unit_needed',
+  // A unit that does not measure this quantity (degrees for steering lash).
+  'unit_mismatch',
+  // A value far outside any sensible range for the quantity.
+  'implausible',
+] as const;
+export type UnclearReason = (typeof UNCLEAR_REASONS)[number];
+
+export interface SpokenMeasurement<Q extends Quantity = Quantity> {
+  quantity: Q;
+  // In the quantity's canonical unit, rounded to 4 decimals.
+  value: number;
+  unit: CanonicalUnit<Q>;
+  // As the driver said it, so the read-back repeats their words ("four millimetres").
+  said: { value: number; unit: Unit };
+}
+
+interface Heard {
+  // The hypothesis the interpretation came from.
+  heard: string;
+  confidence?: number;
+}
+
+export type Interpretation =
+  | ({ kind: 'answer'; answer: 'pass' | 'not_applicable' } & Heard)
+  | ({ kind: 'answer'; answer: 'defect'; detail?: string } & Heard)
+  | ({ kind: 'measurement'; measurement: SpokenMeasurement } & Heard)
+  | ({ kind: 'command'; command: Exclude<Command, 'language'> } & Heard)
+  | ({ kind: 'command'; command: 'language'; locale: Locale } & Heard)
+  | ({ kind: 'unclear'; reason: UnclearReason } & Partial<Heard>);
+
+export type ConfirmationResult =
+  | ({ kind: 'confirm' } & Heard)
+  // A correction, with the new value when the driver said one ("no, six").
+  | ({ kind: 'correct'; measurement?: SpokenMeasurement } & Heard)
+  | ({ kind: 'command'; command: Exclude<Command, 'language'> } & Heard)
+  | ({ kind: 'unclear'; reason: UnclearReason } & Partial<Heard>);

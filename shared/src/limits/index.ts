@@ -1,0 +1,2 @@
+export * from './limits-table.js';
+export * from './evaluate-measurement.js';

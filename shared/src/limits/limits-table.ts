@@ -1,0 +1,426 @@
+// The one table of the limits Yardcall judges measurements against, each row with its source.
+import type { AirCheck, BrakeShoe, ChamberCode, MeasurementContext } from '../checklist/types.js';
+import type { Quantity } from '../units/index.js';
+import type { AxlePosition, BrakeType, SteeringType } from '../vehicle/index.js';
+
+// published: a regulation or manual text; common_practice: a trade rule of thumb; from_memory: text not seen.
+export type LimitBasis = 'published' | 'common_practice' | 'from_memory';
+
+// at_least / not_greater_than: the limit itself passes. more_than / less_than: the limit itself fails.
+export type BoundKind = 'at_least' | 'more_than' | 'not_greater_than' | 'less_than';
+
+export type LimitValue =
+  | number
+  // The vehicle's own figure, e.g. the tire's cold-inflation spec.
+  | { fromContext: 'specPsi' | 'sidewallMaxPsi' }
+  // Rim travel for a rotation of the steering wheel: pi x diameter x degrees / 360 (393.209(b)(2)).
+  | { rimTravelDegrees: number };
+
+export interface LimitBound {
+  kind: BoundKind;
+  value: LimitValue;
+}
+
+// Which measurements a row applies to; every condition given must hold.
+export interface LimitCondition {
+  axle?: readonly AxlePosition[];
+  brake?: readonly BrakeType[];
+  chamber?: readonly ChamberCode[];
+  steering?: readonly SteeringType[];
+  vehicle?: readonly ('single' | 'combination')[];
+  brakesApplied?: boolean;
+  check?: readonly AirCheck[];
+  shoe?: readonly BrakeShoe[];
+  wheelDiameterIn?: { atMost?: number; equals?: number };
+  // Context keys that must be present for the row to apply.
+  present?: readonly (keyof MeasurementContext)[];
+}
+
+export interface LimitRow {
+  id: string;
+  quantity: Quantity;
+  // Rows of one group are alternatives: the first that matches applies. Every group that matches is judged.
+  group: string;
+  // What the bound is compared with: the value itself, or its difference from the other tire of a dual pair.
+  compares?: 'value' | 'dual_difference';
+  when: LimitCondition;
+  bounds: readonly LimitBound[];
+  // Our own practice: a passing value this close to a bound is "near_limit" (canonical units).
+  nearMargin: number;
+  basis: LimitBasis;
+  source: string;
+}
+
+// near_limit is our own practice, not a published rule: a value that passes but is within the margin
+// of its limit, so the driver knows it will not pass for long. The margins, in canonical units:
+export const NEAR_MARGINS = {
+  // One 32nd of tread.
+  tread_depth: 1,
+  // About the reading error of a hand-held tire gauge or a dash air gauge.
+  tire_pressure: 2,
+  air_pressure: 2,
+  // One 32nd of an inch of lining.
+  lining_thickness: 1 / 32,
+  // One eighth of an inch of push-rod stroke.
+  pushrod_stroke: 1 / 8,
+  // A quarter inch of steering-wheel rim travel.
+  steering_lash: 1 / 4,
+  // Five degrees of slack adjuster angle.
+  slack_angle: 5,
+  // Half a psi per minute of air loss.
+  leak_rate: 0.5,
+  // One psi of difference between the tires of a dual pair.
+  dual_difference: 1,
+} as const;
+
+const OTHER_AXLES: readonly AxlePosition[] = ['drive', 'tag', 'trailer'];
+
+function strokeRow(chamber: ChamberCode, limitIn: number, source = '49 CFR 393.47(e)'): LimitRow {
+  return {
+    id: `stroke.${chamber}`,
+    quantity: 'pushrod_stroke',
+    group: 'stroke',
+    when: { chamber: [chamber] },
+    bounds: [{ kind: 'not_greater_than', value: limitIn }],
+    nearMargin: NEAR_MARGINS.pushrod_stroke,
+    basis: 'published',
+    source,
+  };
+}
+
+function lashRow(
+  steering: SteeringType,
+  diameter: { atMost?: number; equals?: number },
+  limitIn: number,
+  source = '49 CFR 393.209(b)',
+): LimitRow {
+  const at = diameter.equals !== undefined ? `${diameter.equals}` : `le${diameter.atMost}`;
+  return {
+    id: `lash.${steering}.${at}`,
+    quantity: 'steering_lash',
+    group: 'lash',
+    when: { steering: [steering], wheelDiameterIn: diameter },
+    bounds: [{ kind: 'not_greater_than', value: limitIn }],
+    nearMargin: NEAR_MARGINS.steering_lash,
+    basis: 'published',
+    source,
+  };
+}
+
+// Type 36: the 2012 text of 393.47(e) says 2-1/4 in, the 2021 text 2-1/2 in. We use 2-1/4 in: it is the
+// stricter reading, so a brake we pass is within both texts; a brake between the two is flagged for a mechanic.
+export const TYPE_36_STROKE_LIMIT_IN = 2.25;
+export const TYPE_36_STROKE_OTHER_TEXT_IN = 2.5;
+
+// Power steering, wheel 16 in or less: 393.209(b) says 4-1/4 in, the Part 396 appendix 4-1/2 in. We use
+// 4-1/4 in: it is the regulation's own table, the stricter figure, and agrees with its 30-degree formula.
+export const POWER_LASH_16_LIMIT_IN = 4.25;
+export const POWER_LASH_16_OTHER_TEXT_IN = 4.5;
+
+// Low-air warning: FMVSS 121 S5.1.5 and the classic CDL manual say on before 60 psi; the modernised CDL test
+// says 55 psi. We use 60 psi: it is the vehicle standard itself and the stricter figure.
+export const LOW_AIR_WARNING_LIMIT_PSI = 60;
+export const LOW_AIR_WARNING_OTHER_TEXT_PSI = 55;
+
+export const LIMITS: readonly LimitRow[] = [
+  // Tread depth, 32nds of an inch, in a major groove.
+  {
+    id: 'tread.steer',
+    quantity: 'tread_depth',
+    group: 'tread',
+    when: { axle: ['steer'] },
+    bounds: [{ kind: 'at_least', value: 4 }],
+    nearMargin: NEAR_MARGINS.tread_depth,
+    basis: 'published',
+    source: '49 CFR 393.75(b)',
+  },
+  {
+    id: 'tread.other',
+    quantity: 'tread_depth',
+    group: 'tread',
+    when: { axle: OTHER_AXLES },
+    bounds: [{ kind: 'at_least', value: 2 }],
+    nearMargin: NEAR_MARGINS.tread_depth,
+    basis: 'published',
+    source: '49 CFR 393.75(c)',
+  },
+
+  // Lining or pad thickness, inches: 393.47(d) says when it fails ("less than"), so the figure itself passes,
+  // except hydraulic steer brakes, which fail at 1/16 in "or less".
+  {
+    id: 'lining.steer.air_drum.continuous_strip',
+    quantity: 'lining_thickness',
+    group: 'lining',
+    when: { axle: ['steer'], brake: ['air_drum'], shoe: ['continuous_strip'] },
+    bounds: [{ kind: 'at_least', value: 3 / 16 }],
+    nearMargin: NEAR_MARGINS.lining_thickness,
+    basis: 'published',
+    source: '49 CFR 393.47(d), steering axle, continuous-strip shoe',
+  },
+  // A vehicle record does not say the shoe type: without it we use the stricter two-pad figure.
+  {
+    id: 'lining.steer.air_drum',
+    quantity: 'lining_thickness',
+    group: 'lining',
+    when: { axle: ['steer'], brake: ['air_drum'] },
+    bounds: [{ kind: 'at_least', value: 1 / 4 }],
+    nearMargin: NEAR_MARGINS.lining_thickness,
+    basis: 'published',
+    source: '49 CFR 393.47(d), steering axle, two-pad shoe',
+  },
+  {
+    id: 'lining.steer.air_disc',
+    quantity: 'lining_thickness',
+    group: 'lining',
+    when: { axle: ['steer'], brake: ['air_disc'] },
+    bounds: [{ kind: 'at_least', value: 1 / 8 }],
+    nearMargin: NEAR_MARGINS.lining_thickness,
+    basis: 'published',
+    source: '49 CFR 393.47(d), steering axle, disc',
+  },
+  {
+    id: 'lining.steer.hydraulic',
+    quantity: 'lining_thickness',
+    group: 'lining',
+    when: { axle: ['steer'], brake: ['hydraulic'] },
+    bounds: [{ kind: 'more_than', value: 1 / 16 }],
+    nearMargin: NEAR_MARGINS.lining_thickness,
+    basis: 'published',
+    source: '49 CFR 393.47(d), steering axle, hydraulic brake',
+  },
+  {
+    id: 'lining.other.air_drum',
+    quantity: 'lining_thickness',
+    group: 'lining',
+    when: { axle: OTHER_AXLES, brake: ['air_drum'] },
+    bounds: [{ kind: 'at_least', value: 1 / 4 }],
+    nearMargin: NEAR_MARGINS.lining_thickness,
+    basis: 'published',
+    source: '49 CFR 393.47(d), other axles, drum (or worn to the indicator)',
+  },
+  {
+    id: 'lining.other.air_disc',
+    quantity: 'lining_thickness',
+    group: 'lining',
+    when: { axle: OTHER_AXLES, brake: ['air_disc'] },
+    bounds: [{ kind: 'at_least', value: 1 / 8 }],
+    nearMargin: NEAR_MARGINS.lining_thickness,
+    basis: 'published',
+    source: '49 CFR 393.47(d), other axles, disc',
+  },
+  {
+    id: 'lining.other.hydraulic',
+    quantity: 'lining_thickness',
+    group: 'lining',
+    when: { axle: OTHER_AXLES, brake: ['hydraulic'] },
+    bounds: [{ kind: 'at_least', value: 1 / 16 }],
+    nearMargin: NEAR_MARGINS.lining_thickness,
+    basis: 'published',
+    source: '49 CFR 393.47(d), other axles, hydraulic brake',
+  },
+
+  // Push-rod stroke readjustment limits, clamp-type chambers, inches, "not greater than".
+  strokeRow('type-6', 1.25),
+  strokeRow('type-9', 1.375),
+  strokeRow('type-12', 1.375),
+  strokeRow('type-12-long', 1.75),
+  strokeRow('type-16', 1.75),
+  strokeRow('type-16-long', 2),
+  strokeRow('type-20', 1.75),
+  strokeRow('type-20-long', 2),
+  strokeRow('type-20-long-3in', 2.5),
+  strokeRow('type-24', 1.75),
+  strokeRow('type-24-long', 2),
+  strokeRow('type-24-long-3in', 2.5),
+  strokeRow('type-30', 2),
+  strokeRow('type-30-long', 2.5),
+  strokeRow('type-36', TYPE_36_STROKE_LIMIT_IN, '49 CFR 393.47(e), 2012 text (the 2021 text says 2-1/2 in)'),
+
+  // Steering-wheel lash, inches at the rim, "shall not exceed". Exact diameters first, then the formula.
+  lashRow('manual', { atMost: 16 }, 2),
+  lashRow('manual', { equals: 18 }, 2.25),
+  lashRow('manual', { equals: 19 }, 2.375),
+  lashRow('manual', { equals: 20 }, 2.5),
+  lashRow('manual', { equals: 21 }, 2.625),
+  lashRow('manual', { equals: 22 }, 2.75),
+  lashRow('power', { atMost: 16 }, POWER_LASH_16_LIMIT_IN, '49 CFR 393.209(b) (the Part 396 appendix says 4-1/2 in)'),
+  lashRow('power', { equals: 18 }, 4.75),
+  lashRow('power', { equals: 19 }, 5),
+  lashRow('power', { equals: 20 }, 5.25),
+  lashRow('power', { equals: 21 }, 5.5),
+  lashRow('power', { equals: 22 }, 5.75),
+  {
+    id: 'lash.manual.formula',
+    quantity: 'steering_lash',
+    group: 'lash',
+    when: { steering: ['manual'] },
+    bounds: [{ kind: 'not_greater_than', value: { rimTravelDegrees: 14 } }],
+    nearMargin: NEAR_MARGINS.steering_lash,
+    basis: 'published',
+    source: '49 CFR 393.209(b)(2): 14 degrees of rotation, manual steering',
+  },
+  {
+    id: 'lash.power.formula',
+    quantity: 'steering_lash',
+    group: 'lash',
+    when: { steering: ['power'] },
+    bounds: [{ kind: 'not_greater_than', value: { rimTravelDegrees: 30 } }],
+    nearMargin: NEAR_MARGINS.steering_lash,
+    basis: 'published',
+    source: '49 CFR 393.209(b)(2): 30 degrees of rotation, power steering',
+  },
+
+  // Tire pressure, psi, cold.
+  {
+    id: 'tire_pressure.spec',
+    quantity: 'tire_pressure',
+    group: 'tire_spec',
+    when: {},
+    bounds: [{ kind: 'at_least', value: { fromContext: 'specPsi' } }],
+    nearMargin: NEAR_MARGINS.tire_pressure,
+    basis: 'published',
+    source: "49 CFR 393.75(i): not below the vehicle's cold-inflation spec",
+  },
+  {
+    id: 'tire_pressure.sidewall_max',
+    quantity: 'tire_pressure',
+    group: 'tire_sidewall',
+    when: { present: ['sidewallMaxPsi'] },
+    bounds: [{ kind: 'not_greater_than', value: { fromContext: 'sidewallMaxPsi' } }],
+    nearMargin: NEAR_MARGINS.tire_pressure,
+    basis: 'published',
+    source: "The tire's sidewall maximum (the tire maker's marking)",
+  },
+  {
+    id: 'tire_pressure.dual_difference',
+    quantity: 'tire_pressure',
+    group: 'tire_dual',
+    compares: 'dual_difference',
+    when: { present: ['dualMatePsi'] },
+    bounds: [{ kind: 'not_greater_than', value: 5 }],
+    nearMargin: NEAR_MARGINS.dual_difference,
+    basis: 'common_practice',
+    source: 'Common practice (used by a 2003 federal roadside survey): a dual pair within 5 psi',
+  },
+
+  // Slack adjuster angle, degrees, brakes applied.
+  {
+    id: 'slack_angle',
+    quantity: 'slack_angle',
+    group: 'slack',
+    when: {},
+    bounds: [
+      { kind: 'at_least', value: 80 },
+      { kind: 'not_greater_than', value: 100 },
+    ],
+    nearMargin: NEAR_MARGINS.slack_angle,
+    basis: 'common_practice',
+    source: 'Common practice: about 90 degrees with the brakes applied, taken as 80 to 100 (CDL manual, section 5)',
+  },
+
+  // Air system, psi on the dash gauge.
+  {
+    id: 'air.low_air_warning',
+    quantity: 'air_pressure',
+    group: 'air',
+    when: { check: ['low_air_warning'] },
+    bounds: [{ kind: 'at_least', value: LOW_AIR_WARNING_LIMIT_PSI }],
+    nearMargin: NEAR_MARGINS.air_pressure,
+    basis: 'published',
+    source: 'FMVSS 121 S5.1.5 (49 CFR 571.121); the modernised CDL test says 55 psi',
+  },
+  {
+    id: 'air.governor_cut_in',
+    quantity: 'air_pressure',
+    group: 'air',
+    when: { check: ['governor_cut_in'] },
+    bounds: [{ kind: 'at_least', value: 100 }],
+    nearMargin: NEAR_MARGINS.air_pressure,
+    basis: 'published',
+    source: 'FMVSS 121 S5.1.1.1 (49 CFR 571.121), trucks',
+  },
+  {
+    id: 'air.governor_cut_out',
+    quantity: 'air_pressure',
+    group: 'air',
+    when: { check: ['governor_cut_out'] },
+    bounds: [
+      { kind: 'at_least', value: 120 },
+      { kind: 'not_greater_than', value: 140 },
+    ],
+    nearMargin: NEAR_MARGINS.air_pressure,
+    basis: 'published',
+    source: "CDL manual, section 5: about 120 to 140 psi; the maker's spec governs",
+  },
+  {
+    id: 'air.spring_brake',
+    quantity: 'air_pressure',
+    group: 'air',
+    when: { check: ['spring_brake'] },
+    bounds: [
+      { kind: 'at_least', value: 20 },
+      { kind: 'not_greater_than', value: 45 },
+    ],
+    nearMargin: NEAR_MARGINS.air_pressure,
+    basis: 'published',
+    source: "CDL manual, section 5: usually between 20 and 45 psi; the maker's spec governs",
+  },
+
+  // Air loss over one minute, engine off. Released: "under" the figure, so the figure itself fails.
+  // Applied: "more than" the figure is too much, so the figure itself passes.
+  {
+    id: 'leak.released.single',
+    quantity: 'leak_rate',
+    group: 'leak',
+    when: { brakesApplied: false, vehicle: ['single'] },
+    bounds: [{ kind: 'less_than', value: 2 }],
+    nearMargin: NEAR_MARGINS.leak_rate,
+    basis: 'published',
+    source: 'CDL manual, section 5: brakes released, single vehicle',
+  },
+  {
+    id: 'leak.released.combination',
+    quantity: 'leak_rate',
+    group: 'leak',
+    when: { brakesApplied: false, vehicle: ['combination'] },
+    bounds: [{ kind: 'less_than', value: 3 }],
+    nearMargin: NEAR_MARGINS.leak_rate,
+    basis: 'published',
+    source: 'CDL manual, section 5: brakes released, combination',
+  },
+  {
+    id: 'leak.applied.single',
+    quantity: 'leak_rate',
+    group: 'leak',
+    when: { brakesApplied: true, vehicle: ['single'] },
+    bounds: [{ kind: 'not_greater_than', value: 3 }],
+    nearMargin: NEAR_MARGINS.leak_rate,
+    basis: 'published',
+    source: 'CDL manual, section 5: brakes applied, single vehicle',
+  },
+  {
+    id: 'leak.applied.combination',
+    quantity: 'leak_rate',
+    group: 'leak',
+    when: { brakesApplied: true, vehicle: ['combination'] },
+    bounds: [{ kind: 'not_greater_than', value: 4 }],
+    nearMargin: NEAR_MARGINS.leak_rate,
+    basis: 'published',
+    source: 'CDL manual, section 5: brakes applied, combination',
+  },
+];
+
+// Air checks with no measured quantity of their own: the checklist names them, a person judges them.
+export const AIR_BUILD_UP = {
+  fromPsi: 85,
+  toPsi: 100,
+  withinSeconds: 45,
+  source: 'CDL manual, section 5: dual air system, engine at operating rpm',
+} as const;
+
+// From memory: the CDL manual's figure, text not seen.
+export const SAFETY_RELIEF_VALVE = {
+  opensAtPsi: 150,
+  basis: 'from_memory',
+  source: 'CDL manual (from memory)',
+} as const;

@@ -1,0 +1,971 @@
+// Trade vocabulary for narration scoring: the many ways drivers and students say the same part.
+// Phrases are matched after stemming, longest first, so "brake chamber" wins over "brake".
+// Spanish lists carry the English trade words that Spanish-speaking drivers commonly use as is.
+import type { Locale } from '../checklist/index.js';
+
+export interface Concept {
+  id: string;
+  en: readonly string[];
+  es: readonly string[];
+}
+
+export const CONCEPTS: readonly Concept[] = [
+  // Brakes and air
+  {
+    id: 'slack_adjuster',
+    en: [
+      'slack adjuster',
+      'slack adjusters',
+      'automatic slack adjuster',
+      'slack',
+      'slacks',
+      'adjuster arm',
+      'adjuster',
+      'slack arm',
+      'slack a juster',
+    ],
+    es: [
+      'ajustador',
+      'ajustador de holgura',
+      'ajustador automatico',
+      'regulador de holgura',
+      'matraca',
+      'slack',
+      'slack adjuster',
+    ],
+  },
+  {
+    id: 'brake_chamber',
+    en: [
+      'brake chamber',
+      'air chamber',
+      'chamber',
+      'air can',
+      'air cans',
+      'brake can',
+      'brake cans',
+      'pot',
+      'pots',
+      'brake pot',
+      'spring brake chamber',
+      'maxi can',
+      'maxi',
+    ],
+    es: ['camara de freno', 'camara de aire', 'camara', 'pulmon', 'pulmon de freno', 'chamber', 'maxi'],
+  },
+  {
+    id: 'stroke',
+    en: [
+      'stroke',
+      'push rod stroke',
+      'pushrod stroke',
+      'brake stroke',
+      'rod travel',
+      'push rod travel',
+      'applied stroke',
+    ],
+    es: ['carrera', 'carrera del vastago', 'carrera de la varilla', 'recorrido', 'recorrido del vastago'],
+  },
+  {
+    id: 'pushrod',
+    en: ['push rod', 'pushrod', 'push rods', 'brake rod'],
+    es: ['varilla de empuje', 'varilla', 'vastago', 'push rod'],
+  },
+  {
+    id: 'brake_lining',
+    en: [
+      'lining',
+      'brake lining',
+      'brake shoe',
+      'brake shoes',
+      'shoes',
+      'shoe',
+      'brake pad',
+      'brake pads',
+      'pads',
+      'friction material',
+    ],
+    es: ['balata', 'balatas', 'zapata', 'zapatas', 'pastilla', 'pastillas', 'forro', 'forro de freno'],
+  },
+  {
+    id: 'brake_drum',
+    en: ['drum', 'brake drum', 'drums', 'rotor', 'brake rotor'],
+    es: ['tambor', 'tambor de freno', 'rotor', 'disco de freno'],
+  },
+  {
+    id: 'brake_hose',
+    en: [
+      'brake hose',
+      'brake hoses',
+      'air line',
+      'air lines',
+      'air hose',
+      'air hoses',
+      'brake line',
+      'brake lines',
+      'hose',
+      'hoses',
+    ],
+    es: [
+      'manguera',
+      'mangueras',
+      'manguera de freno',
+      'linea de aire',
+      'lineas de aire',
+      'manguera de aire',
+      'tubo de aire',
+    ],
+  },
+  { id: 'brake', en: ['brake', 'brakes'], es: ['freno', 'frenos'] },
+  {
+    id: 'service_brake',
+    en: [
+      'service brake',
+      'service brakes',
+      'service brake test',
+      'brake test',
+      'brake check',
+      'foot brake',
+      'brake pedal',
+      'stopping test',
+    ],
+    es: [
+      'freno de servicio',
+      'frenos de servicio',
+      'prueba de freno',
+      'prueba de frenos',
+      'pedal de freno',
+      'pedal del freno',
+    ],
+  },
+  {
+    id: 'air_loss',
+    en: [
+      'air loss',
+      'air leak',
+      'air leaks',
+      'air leakage',
+      'leakage',
+      'leak down',
+      'leak test',
+      'leak down test',
+      'losing air',
+      'air drop',
+    ],
+    es: ['perdida de aire', 'fuga de aire', 'fugas de aire', 'prueba de fugas', 'perdida', 'caida de presion'],
+  },
+  {
+    id: 'brakes_released',
+    en: ['brakes released', 'brakes off', 'released', 'brakes released', 'release the brakes'],
+    es: ['frenos sueltos', 'sueltos', 'liberados', 'frenos liberados', 'frenos quitados'],
+  },
+  {
+    id: 'brakes_applied',
+    en: [
+      'brakes applied',
+      'brake applied',
+      'applied',
+      'fully applied',
+      'full application',
+      'foot on the brake',
+      'holding the brake',
+      'pressing the brake',
+    ],
+    es: ['frenos aplicados', 'freno aplicado', 'aplicados', 'aplicado', 'pisando el freno', 'aplicacion'],
+  },
+  {
+    id: 'parking_brake',
+    en: ['parking brake', 'parking brakes', 'park brake', 'emergency brake', 'yellow knob'],
+    es: [
+      'freno de estacionamiento',
+      'frenos de estacionamiento',
+      'freno de mano',
+      'freno de parqueo',
+      'freno de emergencia',
+      'perilla amarilla',
+    ],
+  },
+  {
+    id: 'spring_brake',
+    en: ['spring brake', 'spring brakes', 'spring brake valve', 'valve pops out', 'pops out', 'brakes pop'],
+    es: ['frenos de resorte', 'freno de resorte', 'salta la valvula', 'valvula salta', 'botan los frenos'],
+  },
+  {
+    id: 'air_tank',
+    en: ['air tank', 'air tanks', 'reservoir', 'reservoirs', 'drain valve', 'air dryer'],
+    es: ['tanque de aire', 'tanques de aire', 'deposito de aire', 'purga', 'secador de aire'],
+  },
+  {
+    id: 'gauge',
+    en: ['gauge', 'gauges', 'air gauge', 'pressure gauge', 'dash gauges', 'dash'],
+    es: ['manometro', 'manometros', 'medidor', 'medidores', 'reloj', 'relojes', 'indicador', 'indicadores', 'tablero'],
+  },
+  { id: 'governor', en: ['governor'], es: ['gobernador'] },
+  {
+    id: 'cut_out',
+    en: ['cut out', 'cutout', 'cut off', 'cuts out', 'cuts off', 'compressor stops', 'stops building', 'shuts off'],
+    es: ['corte del gobernador', 'presion de corte', 'se corta', 'deja de cargar', 'corte de aire'],
+  },
+  {
+    id: 'cut_in',
+    en: ['cut in', 'cutin', 'cuts in', 'kicks in', 'compressor starts', 'starts building', 'starts again'],
+    es: ['arranque', 'arranque del gobernador', 'vuelve a cargar', 'empieza a cargar', 'vuelve a arrancar'],
+  },
+  {
+    id: 'build_up',
+    en: [
+      'build up',
+      'buildup',
+      'builds up',
+      'air build up',
+      'pressure build up',
+      'air pressure build up',
+      'building air',
+      'builds',
+      'build up time',
+    ],
+    es: [
+      'acumulacion',
+      'acumulacion de presion',
+      'acumulacion de presion de aire',
+      'sube la presion',
+      'llenado de aire',
+      'carga de aire',
+    ],
+  },
+  {
+    id: 'low_air_warning',
+    en: ['low air warning', 'low air', 'warning buzzer', 'buzzer', 'low air alarm'],
+    es: ['alarma de baja presion', 'alarma de aire', 'alarma', 'zumbador', 'chicharra'],
+  },
+  { id: 'compressor', en: ['compressor', 'air compressor'], es: ['compresor', 'compresor de aire'] },
+  // Tires, wheels, hubs
+  {
+    id: 'tire',
+    en: ['tire', 'tires', 'tyre', 'tyres'],
+    es: ['llanta', 'llantas', 'neumatico', 'neumaticos', 'goma', 'gomas', 'cubierta', 'cubiertas'],
+  },
+  {
+    id: 'tread',
+    en: ['tread', 'treads', 'tread depth', 'tread wear', 'groove', 'grooves'],
+    es: [
+      'dibujo',
+      'profundidad del dibujo',
+      'profundidad',
+      'profundidad de la banda',
+      'banda de rodamiento',
+      'banda de rodadura',
+      'huella',
+      'ranura',
+      'ranuras',
+      'piso',
+      'tread',
+    ],
+  },
+  {
+    id: 'sidewall',
+    en: ['sidewall', 'sidewalls', 'side wall', 'side walls'],
+    es: ['costado', 'costados', 'pared lateral', 'flanco', 'cara lateral'],
+  },
+  {
+    id: 'inflation',
+    en: [
+      'inflation',
+      'inflated',
+      'air pressure',
+      'tire pressure',
+      'pressure',
+      'pressures',
+      'underinflated',
+      'under inflated',
+    ],
+    es: ['presion', 'presion de aire', 'inflado', 'inflada', 'inflados', 'infladas', 'libras'],
+  },
+  {
+    id: 'valve_stem',
+    en: ['valve stem', 'valve stems', 'valve cap', 'valve caps'],
+    es: ['valvula', 'valvulas', 'pivote de valvula'],
+  },
+  {
+    id: 'rim',
+    en: ['rim', 'rims', 'wheel', 'wheels', 'disc wheel'],
+    es: ['rin', 'rines', 'rim', 'rueda', 'ruedas', 'aro', 'aros'],
+  },
+  {
+    id: 'lug_nuts',
+    en: ['lug nuts', 'lug nut', 'lugs', 'lug', 'wheel nuts', 'nuts', 'studs', 'lug bolts'],
+    es: [
+      'birlos',
+      'birlo',
+      'tuercas',
+      'tuerca',
+      'tuercas de rueda',
+      'tuercas de la rueda',
+      'tuercas de las ruedas',
+      'esparragos',
+    ],
+  },
+  {
+    id: 'hub_seal',
+    en: ['hub seal', 'hub seals', 'hub oil', 'hub oil level', 'hub', 'hubs', 'hub cap', 'wheel seal', 'oil seal'],
+    es: [
+      'sello de rueda',
+      'reten',
+      'retenes',
+      'sello de maza',
+      'maza',
+      'mazas',
+      'masa',
+      'aceite de maza',
+      'mamelon',
+      'hub',
+    ],
+  },
+  { id: 'spacer', en: ['spacer', 'spacers', 'dual spacer'], es: ['separador', 'separadores', 'espaciador'] },
+  {
+    id: 'dual_spacing',
+    en: [
+      'dual spacing',
+      'spacing',
+      'space between',
+      'not touching',
+      'touching',
+      'gap between the duals',
+      'between the duals',
+    ],
+    es: [
+      'separacion entre llantas',
+      'separacion',
+      'espacio entre',
+      'no se tocan',
+      'se tocan',
+      'entre las dobles',
+      'entre las duales',
+    ],
+  },
+  // Suspension
+  {
+    id: 'air_spring',
+    en: ['airbag', 'airbags', 'air bag', 'air bags', 'air spring', 'air springs', 'bag', 'bags', 'air suspension'],
+    es: [
+      'bolsa de aire',
+      'bolsas de aire',
+      'bolsa',
+      'bolsas',
+      'fuelle',
+      'fuelles',
+      'globo',
+      'globos',
+      'airbag',
+      'suspension de aire',
+    ],
+  },
+  {
+    id: 'leaf_spring',
+    en: ['spring', 'springs', 'leaf spring', 'leaf springs', 'leaf', 'leaves', 'spring pack'],
+    es: ['muelle', 'muelles', 'hoja', 'hojas', 'resorte', 'resortes', 'ballesta'],
+  },
+  {
+    id: 'u_bolts',
+    en: ['u bolt', 'u bolts', 'ubolt', 'ubolts', 'you bolt', 'you bolts'],
+    es: ['abrazadera', 'abrazaderas', 'perno en u', 'pernos en u', 'u bolt', 'u bolts'],
+  },
+  {
+    id: 'spring_hanger',
+    en: ['spring hanger', 'spring hangers', 'hanger', 'hangers', 'spring mount'],
+    es: ['soporte de muelle', 'soportes de muelle', 'colgante', 'percha', 'gemela'],
+  },
+  {
+    id: 'torque_rod',
+    en: ['torque rod', 'torque rods', 'torque arm', 'radius rod'],
+    es: [
+      'barra de torque',
+      'barras de torque',
+      'barra de torsion',
+      'barras de torsion',
+      'tirante',
+      'tirantes',
+      'brazo de torque',
+    ],
+  },
+  { id: 'shock', en: ['shock', 'shocks', 'shock absorber', 'shock absorbers'], es: ['amortiguador', 'amortiguadores'] },
+  // Steering
+  {
+    id: 'steering_box',
+    en: ['steering box', 'steering gear', 'gear box', 'gearbox'],
+    es: ['caja de direccion', 'caja de engranes', 'caja de la direccion'],
+  },
+  {
+    id: 'steering_linkage',
+    en: [
+      'steering linkage',
+      'linkage',
+      'tie rod',
+      'tie rods',
+      'drag link',
+      'pitman arm',
+      'steering arm',
+      'tie rod ends',
+    ],
+    es: [
+      'varillaje',
+      'barra de direccion',
+      'barra de acoplamiento',
+      'terminales',
+      'terminal',
+      'brazo pitman',
+      'bieleta',
+      'barra de dirección',
+    ],
+  },
+  {
+    id: 'steering_wheel',
+    en: ['steering wheel', 'steering play', 'free play', 'lash', 'steering lash', 'play in the wheel'],
+    es: ['volante', 'juego del volante', 'juego libre', 'holgura del volante'],
+  },
+  {
+    id: 'power_steering',
+    en: ['power steering', 'power steering fluid', 'steering fluid'],
+    es: ['direccion hidraulica', 'bomba de direccion', 'aceite de direccion'],
+  },
+  // Coupling
+  {
+    id: 'glad_hands',
+    en: ['glad hands', 'gladhands', 'glad hand', 'gladhand', 'glad hans', 'couplers', 'coupler', 'air couplers'],
+    es: ['manitas', 'manos de acople', 'acopladores', 'acoplador', 'gladhands', 'glad hands', 'conectores de aire'],
+  },
+  {
+    id: 'electric_line',
+    en: [
+      'pigtail',
+      'electrical line',
+      'electric line',
+      'electrical cord',
+      'light cord',
+      'seven way',
+      '7 way',
+      'electrical connector',
+      'plug',
+    ],
+    es: ['cable electrico', 'conector electrico', 'pigtail', 'cola de cochino', 'enchufe', 'cable de luces'],
+  },
+  {
+    id: 'fifth_wheel',
+    en: ['fifth wheel', '5th wheel', 'fifth wheel plate', 'skid plate', 'mounting plate'],
+    es: ['quinta rueda', '5ta rueda', 'plato', 'plato de quinta rueda', 'placa de montaje'],
+  },
+  {
+    id: 'fifth_wheel_gap',
+    en: ['gap', 'no gap', 'contact', 'sits flat', 'sitting flat', 'no space'],
+    es: ['contacto', 'espacio', 'sin espacio', 'hueco', 'asienta plana', 'asentada'],
+  },
+  { id: 'kingpin', en: ['kingpin', 'king pin', 'pin'], es: ['perno rey', 'perno maestro', 'king pin', 'kingpin'] },
+  {
+    id: 'apron',
+    en: ['apron', 'upper plate', 'upper coupler', 'bolster plate'],
+    es: ['placa superior', 'placa de apoyo', 'placa', 'placa del remolque'],
+  },
+  {
+    id: 'jaws',
+    en: ['jaws', 'locking jaws', 'locking jaw', 'lock', 'locks'],
+    es: ['mordazas', 'mordaza', 'quijadas', 'seguro', 'candado'],
+  },
+  {
+    id: 'release_arm',
+    en: ['release arm', 'release handle', 'pull handle', 'release lever'],
+    es: ['palanca de liberacion', 'palanca de desenganche', 'palanca'],
+  },
+  {
+    id: 'slider',
+    en: [
+      'slider',
+      'sliding',
+      'sliding fifth wheel',
+      'sliding pins',
+      'slider pins',
+      'locking pins',
+      'tandem pins',
+      'sliding tandem',
+    ],
+    es: [
+      'deslizador',
+      'deslizable',
+      'quinta rueda deslizable',
+      'pernos del deslizador',
+      'pernos de seguro',
+      'pines',
+      'corredera',
+    ],
+  },
+  {
+    id: 'landing_gear',
+    en: ['landing gear', 'dolly legs', 'landing legs', 'crank handle', 'dollies'],
+    es: ['patas', 'patas de apoyo', 'tren de aterrizaje', 'patines', 'manivela'],
+  },
+  // Frame, body, fuel, engine
+  {
+    id: 'front_wall',
+    en: ['front wall', 'header', 'header board', 'nose', 'bulkhead'],
+    es: ['pared frontal', 'pared delantera', 'frente del remolque'],
+  },
+  {
+    id: 'frame',
+    en: ['frame', 'frame rails', 'frame rail', 'rails', 'cross members', 'crossmembers', 'cross member'],
+    es: ['chasis', 'bastidor', 'larguero', 'largueros', 'travesanos', 'travesano'],
+  },
+  {
+    id: 'mud_flap',
+    en: ['mud flap', 'mud flaps', 'mudflap', 'mudflaps', 'splash guard', 'splash guards', 'flap', 'flaps'],
+    es: ['lodera', 'loderas', 'faldon', 'faldones', 'salpicadera', 'guardalodos'],
+  },
+  {
+    id: 'fuel_tank',
+    en: ['fuel tank', 'fuel tanks', 'diesel tank', 'tank', 'tanks', 'fuel cap', 'fuel caps'],
+    es: ['tanque de combustible', 'tanque de diesel', 'tanque', 'tanques', 'tapon de combustible'],
+  },
+  {
+    id: 'exhaust',
+    en: ['exhaust', 'muffler', 'stack', 'exhaust pipe', 'tail pipe'],
+    es: ['escape', 'mofle', 'silenciador', 'chimenea', 'tubo de escape'],
+  },
+  { id: 'battery', en: ['battery', 'batteries', 'battery box'], es: ['bateria', 'baterias', 'caja de baterias'] },
+  {
+    id: 'drive_shaft',
+    en: ['drive shaft', 'driveshaft', 'drive line', 'driveline', 'u joint', 'u joints', 'universal joint'],
+    es: ['flecha cardan', 'cardan', 'flecha', 'eje cardan', 'cruceta', 'crucetas'],
+  },
+  {
+    id: 'door',
+    en: ['door', 'doors', 'hinges', 'hinge', 'door seals'],
+    es: ['puerta', 'puertas', 'bisagra', 'bisagras'],
+  },
+  {
+    id: 'steps',
+    en: ['steps', 'step', 'catwalk', 'grab handle', 'grab handles', 'grab bar'],
+    es: ['escalon', 'escalones', 'estribo', 'estribos', 'agarradera', 'agarraderas'],
+  },
+  {
+    id: 'oil',
+    en: ['oil level', 'engine oil', 'dipstick', 'oil', 'dip stick'],
+    es: ['aceite', 'nivel de aceite', 'bayoneta', 'aceite de motor', 'varilla de aceite'],
+  },
+  {
+    id: 'coolant',
+    en: ['coolant', 'antifreeze', 'radiator', 'coolant level'],
+    es: ['anticongelante', 'refrigerante', 'radiador'],
+  },
+  {
+    id: 'belts',
+    en: ['belt', 'belts', 'drive belt', 'fan belt', 'serpentine belt'],
+    es: ['banda', 'bandas', 'correa', 'correas', 'banda del ventilador'],
+  },
+  { id: 'alternator', en: ['alternator'], es: ['alternador'] },
+  { id: 'water_pump', en: ['water pump'], es: ['bomba de agua'] },
+  // Lights, glass, cab, emergency
+  {
+    id: 'headlight',
+    en: [
+      'headlight',
+      'headlights',
+      'head light',
+      'head lights',
+      'headlamp',
+      'headlamps',
+      'high beams',
+      'low beams',
+      'high beam',
+      'low beam',
+    ],
+    es: ['faro', 'faros', 'faros delanteros', 'luces altas', 'luces bajas', 'luz alta', 'luz baja'],
+  },
+  {
+    id: 'turn_signal',
+    en: ['turn signal', 'turn signals', 'blinker', 'blinkers', 'signals', 'signal', 'indicators'],
+    es: ['direccional', 'direccionales', 'luces direccionales', 'intermitente', 'intermitentes'],
+  },
+  {
+    id: 'clearance_light',
+    en: [
+      'clearance',
+      'identification',
+      'clearance light',
+      'clearance lights',
+      'clearance lamps',
+      'identification lamps',
+      'marker light',
+      'marker lights',
+      'markers',
+      'marker lamps',
+      'identification lights',
+      'id lights',
+      'side markers',
+    ],
+    es: [
+      'luces de galibo',
+      'galibo',
+      'galibos',
+      'identificacion',
+      'luces delanteras de galibo',
+      'luces traseras de galibo',
+      'luces de posicion',
+      'plafones',
+      'plafon',
+      'marcadores',
+      'luces laterales',
+    ],
+  },
+  {
+    id: 'tail_light',
+    en: ['tail light', 'tail lights', 'taillight', 'taillights', 'tail lamps', 'tail lamp'],
+    es: ['calavera', 'calaveras', 'luces traseras', 'luz trasera'],
+  },
+  {
+    id: 'brake_light',
+    en: ['brake light', 'brake lights', 'stop light', 'stop lights', 'stop lamps'],
+    es: ['luces de freno', 'luz de freno', 'luces de stop', 'stop'],
+  },
+  {
+    id: 'hazard_light',
+    en: ['hazards', 'hazard lights', 'four ways', '4 ways', 'flashers', 'emergency flashers'],
+    es: ['luces de emergencia', 'intermitentes de emergencia', 'preventivas', 'luces preventivas'],
+  },
+  {
+    id: 'reflector',
+    en: ['reflector', 'reflectors'],
+    es: ['reflector', 'reflectores', 'catadioptrico', 'catadioptricos'],
+  },
+  {
+    id: 'conspicuity',
+    en: [
+      'reflective sheeting',
+      'reflective tape',
+      'conspicuity tape',
+      'conspicuity',
+      'sheeting',
+      'dot tape',
+      'reflective',
+    ],
+    es: [
+      'cinta reflectante',
+      'cinta reflejante',
+      'cintas reflejantes',
+      'cintas reflectantes',
+      'lamina reflejante',
+      'cinta',
+      'reflejante',
+    ],
+  },
+  {
+    id: 'plate_light',
+    en: [
+      'license plate light',
+      'licence plate lamp',
+      'license plate lamp',
+      'plate lamp',
+      'plate light',
+      'license plate',
+      'licence plate',
+      'license light',
+    ],
+    es: ['luz de placa', 'luz de la placa', 'lampara de placa'],
+  },
+  {
+    id: 'backup_light',
+    en: [
+      'back up lamp',
+      'back up light',
+      'back up lights',
+      'backup light',
+      'backup lights',
+      'backup lamp',
+      'reverse light',
+      'reverse lights',
+    ],
+    es: ['luz de reversa', 'luces de reversa', 'reversa', 'luz de marcha atras'],
+  },
+  {
+    id: 'light',
+    en: ['light', 'lights', 'lamp', 'lamps', 'lens', 'lenses'],
+    es: ['luz', 'luces', 'lampara', 'lamparas', 'foco', 'focos', 'mica', 'micas'],
+  },
+  { id: 'mirror', en: ['mirror', 'mirrors'], es: ['espejo', 'espejos', 'retrovisor', 'retrovisores'] },
+  { id: 'windshield', en: ['windshield', 'windscreen', 'glass'], es: ['parabrisas', 'cristal', 'vidrio'] },
+  {
+    id: 'wipers',
+    en: ['wiper', 'wipers', 'wiper blades', 'wiper blade', 'washer fluid'],
+    es: ['limpiaparabrisas', 'limpiadores', 'plumas', 'limpias', 'pluma'],
+  },
+  { id: 'horn', en: ['horn', 'horns', 'air horn', 'city horn'], es: ['claxon', 'bocina', 'pito', 'corneta'] },
+  {
+    id: 'fire_extinguisher',
+    en: ['fire extinguisher', 'extinguisher'],
+    es: ['extintor', 'extinguidor', 'extinguidor de incendios'],
+  },
+  {
+    id: 'warning_triangles',
+    en: ['triangles', 'triangle', 'reflective triangles', 'warning triangles', 'warning devices', 'flares', 'fusees'],
+    es: ['triangulos', 'triangulo', 'triangulos reflectantes', 'senales de advertencia', 'bengalas'],
+  },
+  { id: 'spare_fuses', en: ['spare fuses', 'fuses', 'fuse'], es: ['fusibles', 'fusible', 'fusibles de repuesto'] },
+  {
+    id: 'seat_belt',
+    en: ['seat belt', 'seat belts', 'seatbelt', 'seatbelts'],
+    es: ['cinturon', 'cinturon de seguridad'],
+  },
+  { id: 'heater', en: ['heater', 'defroster', 'defrost'], es: ['calefaccion', 'desempanador', 'desempañador'] },
+];
+
+// Words that only qualify a more specific part ("brake air lines", "wheel nuts"): required only
+// when nothing more specific is in the title.
+export const BROAD_CONCEPTS: ReadonlySet<string> = new Set([
+  '#brake',
+  '#light',
+  '#tire',
+  '#rim',
+  '#governor',
+  '#fifth_wheel',
+]);
+
+// Where on the vehicle: these set the position context instead of naming a part.
+export type CueKind =
+  | { type: 'side'; side: 'left' | 'right' }
+  | { type: 'unit'; unit: 'power' | 'trailer' }
+  | { type: 'axle_kind'; axle: 'steer' | 'drive' | 'trailer' }
+  | { type: 'ordinal'; ordinal: number | 'last' }
+  | { type: 'dual'; dual: 'inner' | 'outer' }
+  | { type: 'both' }
+  | { type: 'axle_word' }
+  | { type: 'filler' };
+
+export interface Cue {
+  cue: CueKind;
+  en: readonly string[];
+  es: readonly string[];
+}
+
+// In North America the driver sits on the left: "driver side" is left, "curb side" is right.
+export const CUES: readonly Cue[] = [
+  {
+    cue: { type: 'side', side: 'left' },
+    en: ['left', 'left side', 'left hand', 'driver side', 'drivers side', 'road side', 'roadside', 'street side'],
+    es: [
+      'izquierdo',
+      'izquierda',
+      'izquierdos',
+      'izquierdas',
+      'lado izquierdo',
+      'lado del conductor',
+      'lado del chofer',
+      'lado del operador',
+      'left',
+    ],
+  },
+  {
+    cue: { type: 'side', side: 'right' },
+    en: [
+      'right',
+      'right side',
+      'right hand',
+      'passenger side',
+      'passengers side',
+      'curb side',
+      'curbside',
+      'officer side',
+    ],
+    es: [
+      'derecho',
+      'derecha',
+      'derechos',
+      'derechas',
+      'lado derecho',
+      'lado del pasajero',
+      'lado del copiloto',
+      'lado de la banqueta',
+      'right',
+    ],
+  },
+  {
+    cue: { type: 'unit', unit: 'power' },
+    en: ['tractor', 'truck', 'power unit', 'bus'],
+    es: ['tractor', 'tracto', 'tractocamion', 'camion', 'unidad motriz', 'autobus'],
+  },
+  {
+    cue: { type: 'unit', unit: 'trailer' },
+    en: ['trailer', 'semi trailer', 'semitrailer', 'reefer'],
+    es: ['remolque', 'semirremolque', 'semiremolque', 'caja', 'trailer', 'traila'],
+  },
+  {
+    cue: { type: 'axle_kind', axle: 'steer' },
+    en: ['steer', 'steers', 'steer axle', 'steering axle'],
+    es: ['eje delantero', 'eje de direccion', 'eje direccional', 'eje de la direccion', 'steer'],
+  },
+  {
+    cue: { type: 'axle_kind', axle: 'drive' },
+    en: ['drive', 'drives', 'drive axle', 'drive axles', 'drivers', 'drive tandem'],
+    es: ['eje de traccion', 'ejes de traccion', 'traccion', 'eje motriz', 'motriz', 'motrices', 'drive'],
+  },
+  {
+    cue: { type: 'axle_kind', axle: 'trailer' },
+    en: ['trailer axle', 'trailer axles', 'trailer tandem'],
+    es: ['eje del remolque', 'ejes del remolque', 'eje de la caja', 'ejes de la caja'],
+  },
+  {
+    cue: { type: 'ordinal', ordinal: 1 },
+    en: ['front', 'first', '1st', 'forward', 'lead', 'leading'],
+    es: ['delantero', 'delantera', 'delanteros', 'delanteras', 'primer', 'primero', 'primera', 'de adelante', 'frente'],
+  },
+  { cue: { type: 'ordinal', ordinal: 2 }, en: ['second', '2nd'], es: ['segundo', 'segunda'] },
+  { cue: { type: 'ordinal', ordinal: 3 }, en: ['third', '3rd'], es: ['tercer', 'tercero', 'tercera'] },
+  {
+    cue: { type: 'ordinal', ordinal: 'last' },
+    en: ['rear', 'back', 'last', 'rearmost'],
+    es: ['trasero', 'trasera', 'traseros', 'traseras', 'de atras', 'ultimo', 'ultima'],
+  },
+  {
+    cue: { type: 'dual', dual: 'inner' },
+    en: ['inner', 'inners', 'inside', 'inboard'],
+    es: ['interior', 'interiores', 'interna', 'interno', 'internas', 'de adentro', 'de dentro'],
+  },
+  {
+    cue: { type: 'dual', dual: 'outer' },
+    en: ['outer', 'outers', 'outside', 'outboard'],
+    es: ['exterior', 'exteriores', 'externa', 'externo', 'externas', 'de afuera', 'de fuera'],
+  },
+  {
+    cue: { type: 'both' },
+    en: ['both', 'duals', 'all', 'pair', 'each'],
+    es: ['ambos', 'ambas', 'las dos', 'los dos', 'duales', 'dobles', 'gemelas', 'todas', 'todos', 'cada'],
+  },
+  { cue: { type: 'axle_word' }, en: ['axle', 'axles'], es: ['eje', 'ejes'] },
+  // Said but meaning nothing about position.
+  {
+    cue: { type: 'filler' },
+    en: ['all right', 'alright', 'right now', 'thats right', 'right here', 'right there', 'back up'],
+    es: ['derecho a', 'todo bien', 'ahora si'],
+  },
+];
+
+// Words that name nothing: dropped after phrase matching.
+export const STOP_WORDS: Record<Locale, readonly string[]> = {
+  en: (
+    'a an the and or of on in at to is are was be it its my i im am me this that these those for with ' +
+    'there theres here now next then so ok okay um uh check checking checked look looking looks make ' +
+    'making sure see going gonna will good fine also as well no not nothing any none properly proper ' +
+    'correct correctly we our have has got up down from by into over they them their should must can do ' +
+    'does just very like some least more less than which what when where if side'
+  ).split(' '),
+  es: (
+    'el la los las lo un una unos unas y e o u de del al en a que es son esta estan estoy mi mis este ' +
+    'estos estas ese esa esos esas para por con sin no ya ahora aqui aca revisando reviso revisar reviso ' +
+    'checando checo checar verificando verifico bien buen bueno buena buenas buenos pues eh em ok okey se ' +
+    'le les su sus hay tiene tienen ningun ninguna ninguno nada muy como mas menos tambien luego despues ' +
+    'voy vamos ver veo correcto correcta correctamente lado parte nos me yo hacia adelante atras desde ' +
+    'hasta'
+  ).split(' '),
+};
+
+// Title words that say how an item is checked, not what it is: left out of what must be named.
+export const GENERIC_TITLE_WORDS: Record<Locale, readonly string[]> = {
+  en: (
+    'condition conditions mounting mounted mount secure secured security inspection general damage ' +
+    'operation working function state level'
+  ).split(' '),
+  es: (
+    'estado condicion condiciones montaje sujecion seguridad inspeccion general dano danos funcionamiento ' +
+    'nivel fijacion'
+  ).split(' '),
+};
+
+// Spoken numbers the recogniser may write out, so "four thirty seconds" meets "4/32".
+export const NUMBER_WORDS: Record<Locale, Readonly<Record<string, string>>> = {
+  en: {
+    zero: '0',
+    one: '1',
+    two: '2',
+    three: '3',
+    four: '4',
+    five: '5',
+    six: '6',
+    seven: '7',
+    eight: '8',
+    nine: '9',
+    ten: '10',
+    eleven: '11',
+    twelve: '12',
+    fifteen: '15',
+    twenty: '20',
+    thirty: '30',
+    forty: '40',
+    fifty: '50',
+    sixty: '60',
+    hundred: '100',
+  },
+  es: {
+    cero: '0',
+    uno: '1',
+    dos: '2',
+    tres: '3',
+    cuatro: '4',
+    cinco: '5',
+    seis: '6',
+    siete: '7',
+    ocho: '8',
+    nueve: '9',
+    diez: '10',
+    once: '11',
+    doce: '12',
+    quince: '15',
+    veinte: '20',
+    treinta: '30',
+    cuarenta: '40',
+    cincuenta: '50',
+    sesenta: '60',
+    cien: '100',
+  },
+};
+
+// Whole spoken phrases for a number, matched before the word-by-word table.
+export const NUMBER_PHRASES: Record<Locale, readonly [string, string][]> = {
+  en: [
+    ['thirty seconds', '32'],
+    ['thirty second', '32'],
+    ['thirty seconds of an inch', '32'],
+    ['32nds', '32'],
+    ['sixteenths', '16'],
+    ['thirty two', '32'],
+  ],
+  es: [
+    ['treintaidosavos', '32'],
+    ['treinta y dos avos', '32'],
+    ['treintaidos', '32'],
+    ['treinta y dos', '32'],
+    ['32avos', '32'],
+  ],
+};
+
+// Words that end in "s" without being plural.
+export const SINGULAR_S: ReadonlySet<string> = new Set([
+  'glass',
+  'gas',
+  'lens',
+  'bus',
+  'chassis',
+  'pass',
+  'press',
+  'less',
+  'cross',
+  'axis',
+  'psi',
+  'parabrisas',
+  'limpiaparabrisas',
+  'chasis',
+  'mas',
+  'tras',
+  'autobus',
+  'abs',
+  'its',
+  'is',
+  'was',
+  'has',
+  'this',
+]);

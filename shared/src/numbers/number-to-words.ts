@@ -1,0 +1,207 @@
+// Says a number in words, for read-backs; the parser reads every form this writes.
+import type { Locale } from '../checklist/index.js';
+
+const EN_UNITS = [
+  'zero',
+  'one',
+  'two',
+  'three',
+  'four',
+  'five',
+  'six',
+  'seven',
+  'eight',
+  'nine',
+  'ten',
+  'eleven',
+  'twelve',
+  'thirteen',
+  'fourteen',
+  'fifteen',
+  'sixteen',
+  'seventeen',
+  'eighteen',
+  'nineteen',
+] as const;
+const EN_TENS = ['', '', 'twenty', 'thirty', 'forty', 'fifty', 'sixty', 'seventy', 'eighty', 'ninety'] as const;
+
+const ES_SMALL = [
+  'cero',
+  'uno',
+  'dos',
+  'tres',
+  'cuatro',
+  'cinco',
+  'seis',
+  'siete',
+  'ocho',
+  'nueve',
+  'diez',
+  'once',
+  'doce',
+  'trece',
+  'catorce',
+  'quince',
+  'dieciséis',
+  'diecisiete',
+  'dieciocho',
+  'diecinueve',
+  'veinte',
+  'veintiuno',
+  'veintidós',
+  'veintitrés',
+  'veinticuatro',
+  'veinticinco',
+  'veintiséis',
+  'veintisiete',
+  'veintiocho',
+  'veintinueve',
+] as const;
+const ES_TENS = ['', '', '', 'treinta', 'cuarenta', 'cincuenta', 'sesenta', 'setenta', 'ochenta', 'noventa'] as const;
+const ES_HUNDREDS = [
+  '',
+  'ciento',
+  'doscientos',
+  'trescientos',
+  'cuatrocientos',
+  'quinientos',
+  'seiscientos',
+  'setecientos',
+  'ochocientos',
+  'novecientos',
+] as const;
+
+function pick<T extends string>(list: readonly T[], index: number): T {
+  const word = list[index];
+  if (word === undefined) throw new RangeError(`No word for ${index}`);
+  return word;
+}
+
+function englishBelowThousand(n: number): string {
+  if (n < 20) return pick(EN_UNITS, n);
+  if (n < 100) {
+    const unit = n % 10;
+    return unit === 0 ? pick(EN_TENS, n / 10) : `${pick(EN_TENS, Math.floor(n / 10))}-${pick(EN_UNITS, unit)}`;
+  }
+  const rest = n % 100;
+  const head = `${pick(EN_UNITS, Math.floor(n / 100))} hundred`;
+  return rest === 0 ? head : `${head} ${englishBelowThousand(rest)}`;
+}
+
+function spanishBelowThousand(n: number): string {
+  if (n < 30) return pick(ES_SMALL, n);
+  if (n < 100) {
+    const unit = n % 10;
+    const tens = pick(ES_TENS, Math.floor(n / 10));
+    return unit === 0 ? tens : `${tens} y ${pick(ES_SMALL, unit)}`;
+  }
+  if (n === 100) return 'cien';
+  const rest = n % 100;
+  const head = pick(ES_HUNDREDS, Math.floor(n / 100));
+  return rest === 0 ? head : `${head} ${spanishBelowThousand(rest)}`;
+}
+
+// "uno" shortens before "mil" and before a noun: "veintiún mil", "un cuarto".
+export function apocopate(words: string): string {
+  return words.replace(/veintiuno$/, 'veintiún').replace(/(^|\s)uno$/, '$1un');
+}
+
+export function integerToWords(n: number, locale: Locale): string {
+  if (!Number.isInteger(n) || n < 0 || n >= 1_000_000) {
+    throw new RangeError(`Only whole numbers from 0 to 999999 are said in words, not ${n}`);
+  }
+  const below = locale === 'en' ? englishBelowThousand : spanishBelowThousand;
+  if (n < 1000) return below(n);
+  const thousands = Math.floor(n / 1000);
+  const rest = n % 1000;
+  const head =
+    locale === 'en' ? `${below(thousands)} thousand` : thousands === 1 ? 'mil' : `${apocopate(below(thousands))} mil`;
+  return rest === 0 ? head : `${head} ${below(rest)}`;
+}
+
+const EN_DENOMINATORS: Record<number, [string, string]> = {
+  2: ['half', 'halves'],
+  3: ['third', 'thirds'],
+  4: ['quarter', 'quarters'],
+  8: ['eighth', 'eighths'],
+  16: ['sixteenth', 'sixteenths'],
+  32: ['thirty-second', 'thirty-seconds'],
+  64: ['sixty-fourth', 'sixty-fourths'],
+};
+const ES_DENOMINATORS: Record<number, [string, string]> = {
+  2: ['medio', 'medios'],
+  3: ['tercio', 'tercios'],
+  4: ['cuarto', 'cuartos'],
+  8: ['octavo', 'octavos'],
+  16: ['dieciseisavo', 'dieciseisavos'],
+  32: ['treintaidosavo', 'treintaidosavos'],
+  64: ['sesentaicuatroavo', 'sesentaicuatroavos'],
+};
+
+export function denominatorWord(denominator: number, plural: boolean, locale: Locale): string {
+  const entry = (locale === 'en' ? EN_DENOMINATORS : ES_DENOMINATORS)[denominator];
+  if (!entry) throw new RangeError(`No word for a denominator of ${denominator}`);
+  return plural ? entry[1] : entry[0];
+}
+
+// "five thirty-seconds", "un cuarto", "tres dieciseisavos".
+export function fractionToWords(numerator: number, denominator: number, locale: Locale): string {
+  const head = integerToWords(numerator, locale);
+  const said = locale === 'es' && numerator === 1 ? 'un' : locale === 'es' ? apocopate(head) : head;
+  return `${said} ${denominatorWord(denominator, numerator !== 1, locale)}`;
+}
+
+function gcd(a: number, b: number): number {
+  return b === 0 ? a : gcd(b, a % b);
+}
+
+export interface CommonFraction {
+  whole: number;
+  numerator: number;
+  denominator: number;
+}
+
+// Splits a value into whole + k/d for the fractions the trade says (halves to sixty-fourths, thirds).
+export function toCommonFraction(n: number): CommonFraction | undefined {
+  const whole = Math.floor(n + 1e-9);
+  const part = n - whole;
+  if (Math.abs(part) < 1e-9) return { whole, numerator: 0, denominator: 1 };
+  for (const d of [64, 3]) {
+    const k = Math.round(part * d);
+    if (k > 0 && k < d && Math.abs(part * d - k) < 1e-6) {
+      const g = gcd(k, d);
+      return { whole, numerator: k / g, denominator: d / g };
+    }
+  }
+  return undefined;
+}
+
+function decimalToWords(n: number, locale: Locale): string {
+  const [intPart = '0', decimals = ''] = n.toFixed(4).replace(/0+$/, '').split('.');
+  const head = integerToWords(Number(intPart), locale);
+  const digits = decimals.split('').map((d) => integerToWords(Number(d), locale));
+  // Spanish says two decimals as one number: "uno coma veinticinco".
+  const tail =
+    locale === 'es' && decimals.length === 2 && !decimals.startsWith('0')
+      ? integerToWords(Number(decimals), locale)
+      : digits.join(' ');
+  return `${head} ${locale === 'en' ? 'point' : 'coma'} ${tail}`;
+}
+
+// Words for any value from 0 to 999999: integers, common fractions, else decimals to four places.
+export function numberToWords(n: number, locale: Locale): string {
+  if (!Number.isFinite(n) || n < 0 || n >= 1_000_000) {
+    throw new RangeError(`Only numbers from 0 to 999999 are said in words, not ${n}`);
+  }
+  const fraction = toCommonFraction(n);
+  if (!fraction) return decimalToWords(n, locale);
+  const { whole, numerator, denominator } = fraction;
+  if (numerator === 0) return integerToWords(whole, locale);
+  if (whole === 0) return fractionToWords(numerator, denominator, locale);
+  const and = locale === 'en' ? 'and' : 'y';
+  const part =
+    locale === 'en' && numerator === 1
+      ? `${denominator === 8 ? 'an' : 'a'} ${denominatorWord(denominator, false, locale)}`
+      : fractionToWords(numerator, denominator, locale);
+  return `${integerToWords(whole, locale)} ${and} ${part}`;
+}

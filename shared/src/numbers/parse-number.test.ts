@@ -1,0 +1,181 @@
+import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import { findNumbers, parseSpokenNumber } from './parse-number.js';
+import { numberToWords } from './number-to-words.js';
+import { normaliseText } from './normalise-text.js';
+import type { Locale } from '../checklist/index.js';
+
+describe('parseSpokenNumber', () => {
+  it.each([
+    ['seven', 7],
+    ['twenty-five', 25],
+    ['one hundred and ten', 110],
+    ['a hundred ten', 110],
+    ['two thousand five hundred', 2500],
+    ['one point five', 1.5],
+    ['point two five', 0.25],
+    ['1.75', 1.75],
+    ['five thirty-seconds', 5 / 32],
+    ['five thirty seconds', 5 / 32],
+    ['5/32', 5 / 32],
+    ['5 32nds', 5 / 32],
+    ['one thirty-second', 1 / 32],
+    ['five over thirty two', 5 / 32],
+    ['three sixteenths', 3 / 16],
+    ['a quarter', 0.25],
+    ['one and three quarters', 1.75],
+    ['one three quarters', 1.75],
+    ['1-3/4', 1.75],
+    ['1 3/4', 1.75],
+    ['two and a half', 2.5],
+    ['one and an eighth', 1.125],
+  ])('reads the English "%s" as %d', (text, value) => {
+    expect(parseSpokenNumber(text, 'en')).toBeCloseTo(value, 9);
+  });
+
+  it.each([
+    ['siete', 7],
+    ['treinta y dos', 32],
+    ['ciento cinco', 105],
+    ['ciento veinticinco', 125],
+    ['cien', 100],
+    ['dos mil quinientos', 2500],
+    ['uno coma cinco', 1.5],
+    ['1,5', 1.5],
+    ['uno coma veinticinco', 1.25],
+    ['cinco treintaidosavos', 5 / 32],
+    ['cinco treinta y dos avos', 5 / 32],
+    ['cinco de 32', 5 / 32],
+    ['cinco de treinta y dos', 5 / 32],
+    ['tres dieciseisavos', 3 / 16],
+    ['un cuarto', 0.25],
+    ['tres cuartos', 0.75],
+    ['una y tres cuartos', 1.75],
+    ['dos y media', 2.5],
+    ['uno y medio', 1.5],
+  ])('reads the Spanish "%s" as %d', (text, value) => {
+    expect(parseSpokenNumber(text, 'es')).toBeCloseTo(value, 9);
+  });
+
+  it.each([
+    ['one oh five', 105, 'en'],
+    ['one o five', 105, 'en'],
+    ['one twenty five', 125, 'en'],
+    ['one ten', 110, 'en'],
+    ['one two zero', 120, 'en'],
+    ['uno cero cinco', 105, 'es'],
+    ['uno veinticinco', 125, 'es'],
+  ] as const)('reads the gauge-style "%s" as %d where a pressure is expected', (text, value, locale) => {
+    expect(parseSpokenNumber(text, locale, { gauge: true })).toBe(value);
+  });
+
+  it('does not read "one twenty five" as one number without gauge readings', () => {
+    expect(parseSpokenNumber('one twenty five', 'en')).toBeUndefined();
+  });
+
+  it('reads "five thirty two" as a fraction only where a length is expected', () => {
+    expect(parseSpokenNumber('five thirty two', 'en', { bareDenominators: true })).toBeCloseTo(5 / 32);
+    expect(parseSpokenNumber('five thirty two', 'en')).toBeUndefined();
+  });
+
+  it('refuses words that are not a number', () => {
+    expect(parseSpokenNumber('looks good', 'en')).toBeUndefined();
+    expect(parseSpokenNumber('a', 'en')).toBeUndefined();
+    expect(parseSpokenNumber('una fuga', 'es')).toBeUndefined();
+  });
+});
+
+describe('findNumbers', () => {
+  it('finds a number inside a sentence and where it ends', () => {
+    const { tokens } = normaliseText('tread is at six thirty seconds on the left', 'en');
+    const spans = findNumbers(tokens, 'en');
+    expect(spans).toHaveLength(1);
+    expect(spans[0]).toMatchObject({ start: 3, end: 6, form: 'fraction', denominator: 32 });
+  });
+
+  it('marks a lone article so a caller can require a unit after it', () => {
+    const { tokens } = normaliseText('an inch and a half', 'en');
+    const spans = findNumbers(tokens, 'en');
+    expect(spans[0]).toMatchObject({ value: 1, article: true });
+    expect(spans[1]).toMatchObject({ value: 0.5, form: 'fraction' });
+  });
+});
+
+const locales: Locale[] = ['en', 'es'];
+
+describe('numberToWords round trip', () => {
+  for (const locale of locales) {
+    it(`reads back every integer 0-1000 it says in ${locale}`, () => {
+      fc.assert(
+        fc.property(fc.integer({ min: 0, max: 1000 }), (n) => {
+          expect(parseSpokenNumber(numberToWords(n, locale), locale)).toBe(n);
+        }),
+        { numRuns: 1001 },
+      );
+    });
+
+    it(`reads back common fractions and mixed numbers it says in ${locale}`, () => {
+      const denominators = fc.constantFrom(2, 3, 4, 8, 16, 32, 64);
+      fc.assert(
+        fc.property(fc.integer({ min: 0, max: 20 }), denominators, fc.integer({ min: 1, max: 63 }), (whole, d, k) => {
+          const numerator = (k % (d - 1)) + 1;
+          const value = whole + numerator / d;
+          expect(parseSpokenNumber(numberToWords(value, locale), locale)).toBeCloseTo(value, 9);
+        }),
+      );
+    });
+
+    it(`reads back decimals it says in ${locale}`, () => {
+      fc.assert(
+        fc.property(fc.integer({ min: 0, max: 99999 }), (hundredths) => {
+          const value = hundredths / 100;
+          expect(parseSpokenNumber(numberToWords(value, locale), locale)).toBeCloseTo(value, 9);
+        }),
+      );
+    });
+  }
+
+  it('refuses negative and non-finite numbers', () => {
+    expect(() => numberToWords(-1, 'en')).toThrow(RangeError);
+    expect(() => numberToWords(Number.NaN, 'es')).toThrow(RangeError);
+  });
+
+  it('says the forms read-backs use', () => {
+    expect(numberToWords(105, 'en')).toBe('one hundred five');
+    expect(numberToWords(105, 'es')).toBe('ciento cinco');
+    expect(numberToWords(5 / 32, 'en')).toBe('five thirty-seconds');
+    expect(numberToWords(5 / 32, 'es')).toBe('cinco treintaidosavos');
+    expect(numberToWords(1.75, 'en')).toBe('one and three quarters');
+    expect(numberToWords(1.75, 'es')).toBe('uno y tres cuartos');
+  });
+});
+
+describe('normaliseText', () => {
+  it('folds case, accents and punctuation and keeps accents for repeating back', () => {
+    const n = normaliseText('¿Está BIEN?  Sí.', 'es');
+    expect(n.tokens).toEqual(['esta', 'bien', 'si']);
+    expect(n.surface).toEqual(['está', 'bien', 'sí']);
+    expect(n.pauseAfter).toEqual([false, true, true]);
+  });
+
+  it('splits units from digits and keeps fractions whole', () => {
+    expect(normaliseText('110psi, 4mm, 1-3/4", 5 32nds', 'en').tokens).toEqual([
+      '110',
+      'psi',
+      '4',
+      'mm',
+      '1',
+      '3/4',
+      '5',
+      '32nds',
+    ]);
+  });
+
+  it('stems inflections to one form', () => {
+    const { stems } = normaliseText('leaks leaking leaked leak', 'en');
+    expect(new Set(stems).size).toBe(1);
+    const es = normaliseText('fugas fuga rotos rota', 'es').stems;
+    expect(es[0]).toBe(es[1]);
+    expect(es[2]).toBe(es[3]);
+  });
+});

@@ -1,0 +1,1 @@
+export * from './summarize-inspection.js';

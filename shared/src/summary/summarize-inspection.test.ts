@@ -1,0 +1,302 @@
+import { describe, expect, it } from 'vitest';
+import type { Checklist, ChecklistItem, ItemResult } from '../checklist/index.js';
+import { RUSHED_RULE, summarizeInspection } from './summarize-inspection.js';
+
+function item(key: string, zone: string, overrides: Partial<ChecklistItem> = {}): ChecklistItem {
+  return {
+    key,
+    zone,
+    unitIndex: 0,
+    unitKind: 'tractor',
+    category: 'lights',
+    safety: false,
+    title: key,
+    positionLabel: `Tractor, ${key}`,
+    prompt: key,
+    shortPrompt: key,
+    expects: { type: 'check' },
+    points: [],
+    ...overrides,
+  };
+}
+
+// An invented three-zone tractor walk-around.
+const checklist: Checklist = {
+  kind: 'pre_trip',
+  locale: 'en',
+  zones: [
+    { key: 'front', title: 'Front' },
+    { key: 'left', title: 'Left side' },
+    { key: 'cab', title: 'In the cab' },
+  ],
+  items: [
+    item('front.headlights', 'front'),
+    item('front.steer.left.tread', 'front', {
+      category: 'tires',
+      safety: true,
+      expects: { type: 'measure', quantity: 'tread_depth' },
+      position: { unitIndex: 0, axleIndex: 0, side: 'left' },
+    }),
+    item('left.mudflap', 'left', { category: 'body' }),
+    item('left.slack', 'left', { category: 'brakes', safety: true }),
+    item('cab.horn', 'cab', { category: 'horn' }),
+  ],
+};
+
+const START = Date.parse('2026-03-02T06:00:00.000Z');
+const at = (seconds: number): string => new Date(START + seconds * 1000).toISOString();
+
+function answered(itemKey: string, seconds: number, overrides: Partial<ItemResult> = {}): ItemResult {
+  return { itemKey, answer: 'pass', answeredAt: at(seconds), ...overrides };
+}
+
+const allPass: ItemResult[] = [
+  answered('front.headlights', 20),
+  answered('front.steer.left.tread', 50, {
+    measurement: { quantity: 'tread_depth', value: 8, unit: 'in/32' },
+    verdict: 'ok',
+  }),
+  answered('left.mudflap', 90),
+  answered('left.slack', 130),
+  answered('cab.horn', 200),
+];
+
+function withResult(results: ItemResult[], replacement: ItemResult): ItemResult[] {
+  return results.map((result) => (result.itemKey === replacement.itemKey ? replacement : result));
+}
+
+describe('summarizeInspection: defects and driving', () => {
+  it('lets a vehicle with no defects be driven', () => {
+    const summary = summarizeInspection(checklist, allPass);
+    expect(summary.defects).toEqual([]);
+    expect(summary.mayBeDriven).toBe(true);
+    expect(summary.drivingBlockedBy).toEqual([]);
+  });
+
+  it('lists a reported defect with its item, detail and safety flag', () => {
+    const results = withResult(allPass, answered('left.slack', 130, { answer: 'defect', detail: 'bent adjuster arm' }));
+    const [defect] = summarizeInspection(checklist, results).defects;
+    expect(defect).toMatchObject({
+      itemKey: 'left.slack',
+      zone: 'left',
+      category: 'brakes',
+      safety: true,
+      reasons: ['reported'],
+      detail: 'bent adjuster arm',
+      blocksDriving: true,
+      cleared: false,
+    });
+  });
+
+  it('blocks driving on a safety defect until it is certified repaired', () => {
+    const results = withResult(allPass, answered('left.slack', 130, { answer: 'defect' }));
+    expect(summarizeInspection(checklist, results).mayBeDriven).toBe(false);
+    expect(summarizeInspection(checklist, results).drivingBlockedBy).toEqual(['left.slack']);
+    const repaired = summarizeInspection(checklist, results, {
+      certifications: [{ itemKey: 'left.slack', action: 'repaired' }],
+    });
+    expect(repaired.mayBeDriven).toBe(true);
+    expect(repaired.defects[0]).toMatchObject({ certification: 'repaired', cleared: true });
+  });
+
+  it('clears a safety defect with a no-repair-needed certification', () => {
+    const results = withResult(allPass, answered('left.slack', 130, { answer: 'defect' }));
+    const summary = summarizeInspection(checklist, results, {
+      certifications: [{ itemKey: 'left.slack', action: 'no_repair_needed' }],
+    });
+    expect(summary.mayBeDriven).toBe(true);
+  });
+
+  it('does not clear a safety defect with a deferral', () => {
+    const results = withResult(allPass, answered('left.slack', 130, { answer: 'defect' }));
+    const summary = summarizeInspection(checklist, results, {
+      certifications: [{ itemKey: 'left.slack', action: 'deferred' }],
+    });
+    expect(summary.mayBeDriven).toBe(false);
+    expect(summary.defects[0]).toMatchObject({ certification: 'deferred', cleared: false, blocksDriving: true });
+  });
+
+  it('lets a deferral clear a defect that does not affect safety', () => {
+    const results = withResult(allPass, answered('left.mudflap', 90, { answer: 'defect', detail: 'torn' }));
+    expect(summarizeInspection(checklist, results).mayBeDriven).toBe(true);
+    const deferred = summarizeInspection(checklist, results, {
+      certifications: [{ itemKey: 'left.mudflap', action: 'deferred' }],
+    });
+    expect(deferred.defects[0]).toMatchObject({ blocksDriving: false, cleared: true });
+  });
+
+  it('takes the last certification given for an item', () => {
+    const results = withResult(allPass, answered('left.slack', 130, { answer: 'defect' }));
+    const summary = summarizeInspection(checklist, results, {
+      certifications: [
+        { itemKey: 'left.slack', action: 'deferred' },
+        { itemKey: 'left.slack', action: 'repaired' },
+      ],
+    });
+    expect(summary.mayBeDriven).toBe(true);
+  });
+
+  it('counts an out-of-limit measurement as a defect that blocks driving, even on a pass answer', () => {
+    // 49 CFR 393.75(b): steer tires need at least 4/32 in; the verdict comes evaluated from the server.
+    const results = withResult(
+      allPass,
+      answered('front.steer.left.tread', 50, {
+        measurement: { quantity: 'tread_depth', value: 3, unit: 'in/32' },
+        verdict: 'out_of_limit',
+      }),
+    );
+    const summary = summarizeInspection(checklist, results);
+    expect(summary.defects).toHaveLength(1);
+    expect(summary.defects[0]).toMatchObject({
+      itemKey: 'front.steer.left.tread',
+      reasons: ['out_of_limit'],
+      measurement: { value: 3, unit: 'in/32' },
+      blocksDriving: true,
+    });
+    expect(summary.mayBeDriven).toBe(false);
+  });
+
+  it('blocks driving on an out-of-limit measurement of an item not flagged as safety', () => {
+    const list: Checklist = { ...checklist, items: checklist.items.map((i) => ({ ...i, safety: false })) };
+    const results = withResult(allPass, answered('front.steer.left.tread', 50, { verdict: 'out_of_limit' }));
+    expect(summarizeInspection(list, results).mayBeDriven).toBe(false);
+  });
+
+  it('does not count a near-limit measurement as a defect', () => {
+    const results = withResult(allPass, answered('front.steer.left.tread', 50, { verdict: 'near_limit' }));
+    expect(summarizeInspection(checklist, results).defects).toEqual([]);
+  });
+
+  it('gives both reasons when a defect answer is also out of limit', () => {
+    const results = withResult(
+      allPass,
+      answered('front.steer.left.tread', 50, { answer: 'defect', verdict: 'out_of_limit' }),
+    );
+    expect(summarizeInspection(checklist, results).defects[0]?.reasons).toEqual(['reported', 'out_of_limit']);
+  });
+
+  it('uses the latest answer when an item was answered twice', () => {
+    const results = [...allPass, answered('left.slack', 140, { answer: 'defect' })];
+    expect(summarizeInspection(checklist, results).drivingBlockedBy).toEqual(['left.slack']);
+    const corrected = [
+      answered('left.slack', 140, { answer: 'defect' }),
+      ...allPass.map((r) => ({ ...r, answeredAt: at(150) })),
+    ];
+    expect(summarizeInspection(checklist, corrected).defects).toEqual([]);
+  });
+});
+
+describe('summarizeInspection: gaps and timing', () => {
+  it('lists unanswered items in checklist order with their safety flag', () => {
+    const results = allPass.filter((r) => r.itemKey !== 'left.slack' && r.itemKey !== 'front.headlights');
+    const summary = summarizeInspection(checklist, results);
+    expect(summary.unanswered.map((u) => u.itemKey)).toEqual(['front.headlights', 'left.slack']);
+    expect(summary.unansweredSafetyCount).toBe(1);
+    expect(summary.answeredCount).toBe(3);
+  });
+
+  it('counts a not-applicable answer as answered', () => {
+    const results = withResult(allPass, answered('cab.horn', 200, { answer: 'not_applicable' }));
+    expect(summarizeInspection(checklist, results).unanswered).toEqual([]);
+  });
+
+  it('lists results for items not on the checklist instead of dropping them silently', () => {
+    const summary = summarizeInspection(checklist, [...allPass, answered('trailer.kingpin', 210)]);
+    expect(summary.unknownItemKeys).toEqual(['trailer.kingpin']);
+    expect(summary.answeredCount).toBe(5);
+  });
+
+  it('credits each zone with the time since the answer before, starting from the given start', () => {
+    const summary = summarizeInspection(checklist, allPass, { startedAt: at(0) });
+    expect(summary.zones.map((z) => [z.zone, z.durationMs])).toEqual([
+      ['front', 50_000],
+      ['left', 80_000],
+      ['cab', 70_000],
+    ]);
+    expect(summary.totalDurationMs).toBe(200_000);
+    expect(summary.zones[0]).toMatchObject({
+      itemCount: 2,
+      answeredCount: 2,
+      firstAnsweredAt: at(20),
+      lastAnsweredAt: at(50),
+    });
+  });
+
+  it('measures from the first answer when no start time is given', () => {
+    const summary = summarizeInspection(checklist, allPass);
+    expect(summary.totalDurationMs).toBe(180_000);
+    expect(summary.startedAt).toBe(at(20));
+    expect(summary.finishedAt).toBe(at(200));
+    expect(summary.zones[0]?.durationMs).toBe(30_000);
+  });
+
+  it('reports an unvisited zone with no time and no answers', () => {
+    const summary = summarizeInspection(
+      checklist,
+      allPass.filter((r) => !r.itemKey.startsWith('cab.')),
+    );
+    expect(summary.zones[2]).toEqual({
+      zone: 'cab',
+      title: 'In the cab',
+      itemCount: 1,
+      answeredCount: 0,
+      durationMs: 0,
+    });
+  });
+});
+
+describe('summarizeInspection: rushed walk-around (our own practice)', () => {
+  // Twenty items in one zone, answered every gapSeconds after the start.
+  function evenlyPaced(gapSeconds: number, count = 20): { list: Checklist; results: ItemResult[] } {
+    const items = Array.from({ length: count }, (_, i) => item(`zone.item${i}`, 'zone'));
+    const list: Checklist = { kind: 'pre_trip', locale: 'en', zones: [{ key: 'zone', title: 'Zone' }], items };
+    const results = items.map((it, i) => answered(it.key, (i + 1) * gapSeconds));
+    return { list, results };
+  }
+
+  it('flags answers coming faster than the median-gap threshold', () => {
+    const { list, results } = evenlyPaced(2.9);
+    const summary = summarizeInspection(list, results, { startedAt: at(0) });
+    expect(summary.rushed.rushed).toBe(true);
+    expect(summary.rushed.reasons).toContain('median_gap');
+    expect(summary.rushed.medianGapMs).toBeCloseTo(2900, 0);
+  });
+
+  it('does not flag answers at the median-gap threshold', () => {
+    const { list, results } = evenlyPaced(RUSHED_RULE.minMedianGapMs / 1000);
+    const summary = summarizeInspection(list, results, { startedAt: at(0) });
+    expect(summary.rushed.rushed).toBe(false);
+    expect(summary.rushed.reasons).toEqual([]);
+  });
+
+  it('flags a walk-around shorter than the minimum for its item count even with a long pause', () => {
+    // Nineteen answers 1.5 s apart then a long pause: the median is fine, the whole is too short.
+    const items = Array.from({ length: 20 }, (_, i) => item(`zone.item${i}`, 'zone'));
+    const list: Checklist = { kind: 'pre_trip', locale: 'en', zones: [{ key: 'zone', title: 'Zone' }], items };
+    const gaps = [...Array.from({ length: 9 }, () => 1.5), ...Array.from({ length: 11 }, () => 3.5)];
+    let t = 0;
+    const results = items.map((it, i) => answered(it.key, (t += gaps[i]!)));
+    const summary = summarizeInspection(list, results, { startedAt: at(0) });
+    expect(summary.rushed.medianGapMs).toBe(3500);
+    expect(summary.totalDurationMs).toBeLessThan(20 * RUSHED_RULE.minMsPerItem);
+    expect(summary.rushed.reasons).toEqual(['total_duration']);
+  });
+
+  it('does not flag a walk-around just over the minimum duration', () => {
+    const { list, results } = evenlyPaced(3.05);
+    const summary = summarizeInspection(list, results, { startedAt: at(0) });
+    expect(summary.totalDurationMs).toBeGreaterThan(summary.rushed.minimumDurationMs);
+    expect(summary.rushed.rushed).toBe(false);
+  });
+
+  it('does not judge pace on fewer answers than the rule needs', () => {
+    const { list, results } = evenlyPaced(1, RUSHED_RULE.minAnswers - 1);
+    expect(summarizeInspection(list, results, { startedAt: at(0) }).rushed.rushed).toBe(false);
+  });
+
+  it('accepts a stricter rule from the caller', () => {
+    const { list, results } = evenlyPaced(4);
+    const summary = summarizeInspection(list, results, { startedAt: at(0), rushedRule: { minMedianGapMs: 5000 } });
+    expect(summary.rushed.reasons).toEqual(['median_gap']);
+  });
+});

@@ -1,0 +1,318 @@
+// The report summary of one walk-around: defects, whether the vehicle may be driven, gaps and timing.
+import type {
+  Checklist,
+  ChecklistItem,
+  ItemCategory,
+  ItemResult,
+  MeasurementValue,
+  Verdict,
+} from '../checklist/index.js';
+
+export const CERTIFICATION_ACTIONS = ['repaired', 'no_repair_needed', 'deferred'] as const;
+export type CertificationAction = (typeof CERTIFICATION_ACTIONS)[number];
+
+// A mechanic's word on one defect. Only a repair or a "no repair needed" clears a defect that blocks
+// driving (49 CFR 396.11(a)(3)); a deferral postpones a defect that does not affect safe operation.
+export interface RepairCertification {
+  itemKey: string;
+  action: CertificationAction;
+}
+
+export type DefectReason = 'reported' | 'out_of_limit';
+
+export interface SummaryDefect {
+  itemKey: string;
+  zone: string;
+  title: string;
+  positionLabel: string;
+  category: ItemCategory;
+  safety: boolean;
+  // Both when the driver called it a defect and the measurement was out of limit.
+  reasons: DefectReason[];
+  detail?: string;
+  measurement?: MeasurementValue;
+  verdict?: Verdict;
+  answeredAt: string;
+  // Until certified, a safety defect or an out-of-limit measurement keeps the vehicle parked.
+  blocksDriving: boolean;
+  certification?: CertificationAction;
+  // True when a certification clears it (for a non-blocking defect, a deferral is enough).
+  cleared: boolean;
+}
+
+export interface UnansweredItem {
+  itemKey: string;
+  zone: string;
+  title: string;
+  positionLabel: string;
+  safety: boolean;
+}
+
+export interface ZoneTiming {
+  zone: string;
+  title: string;
+  itemCount: number;
+  answeredCount: number;
+  firstAnsweredAt?: string;
+  lastAnsweredAt?: string;
+  // Sum of the gaps that ended in an answer of this zone (see attributeGaps).
+  durationMs: number;
+}
+
+// Our own practice, not a regulation: no rule sets how long a walk-around takes (49 CFR 395.2 only
+// makes it on-duty time); logging about 15 minutes for a tractor and trailer is common practice.
+// A tractor-trailer checklist has roughly 150 to 200 items, so 15 minutes is 4.5 to 6 s an item.
+// The app speaks each short prompt in about 2 s, so a median gap under 3 s leaves under about 1 s
+// to look at the item; and a whole walk-around under 3 s an item is about half the common pace.
+// The flag asks a supervisor to look; it is not a finding against the driver.
+export interface RushedRule {
+  minMedianGapMs: number;
+  minMsPerItem: number;
+  // Below this many answers there is too little to judge.
+  minAnswers: number;
+}
+
+export const RUSHED_RULE: RushedRule = { minMedianGapMs: 3000, minMsPerItem: 3000, minAnswers: 10 };
+
+export type RushedReason = 'median_gap' | 'total_duration';
+
+export interface RushedCheck {
+  rushed: boolean;
+  reasons: RushedReason[];
+  medianGapMs: number | null;
+  totalDurationMs: number | null;
+  // What the whole walk-around should at least have taken for its answered items.
+  minimumDurationMs: number;
+  rule: RushedRule;
+}
+
+export interface InspectionSummary {
+  itemCount: number;
+  answeredCount: number;
+  defects: SummaryDefect[];
+  safetyDefectCount: number;
+  // Any out-of-limit measurement or safety defect says no until each has a repair or a
+  // no-repair-needed certification. The app supports and does not replace the driver's and
+  // mechanic's judgement; local rules and the manufacturer's specifications govern.
+  mayBeDriven: boolean;
+  drivingBlockedBy: string[];
+  unanswered: UnansweredItem[];
+  unansweredSafetyCount: number;
+  zones: ZoneTiming[];
+  startedAt?: string;
+  finishedAt?: string;
+  totalDurationMs: number | null;
+  rushed: RushedCheck;
+  // Results whose item is not on the checklist: ignored, listed so nothing vanishes silently.
+  unknownItemKeys: string[];
+}
+
+export interface SummaryOptions {
+  // ISO time the walk-around started; without it the first answer's time stands in.
+  startedAt?: string;
+  certifications?: readonly RepairCertification[];
+  rushedRule?: Partial<RushedRule>;
+}
+
+interface TimedResult {
+  result: ItemResult;
+  item: ChecklistItem;
+  atMs: number;
+}
+
+function parseTime(iso: string): number | null {
+  const ms = Date.parse(iso);
+  return Number.isFinite(ms) ? ms : null;
+}
+
+// When an item was answered more than once (going back), the latest answer stands; on equal
+// times the later one in the list.
+function latestResults(results: readonly ItemResult[]): Map<string, ItemResult> {
+  const latest = new Map<string, ItemResult>();
+  for (const result of results) {
+    const previous = latest.get(result.itemKey);
+    if (!previous) {
+      latest.set(result.itemKey, result);
+      continue;
+    }
+    const previousMs = parseTime(previous.answeredAt) ?? -Infinity;
+    const currentMs = parseTime(result.answeredAt) ?? -Infinity;
+    if (currentMs >= previousMs) latest.set(result.itemKey, result);
+  }
+  return latest;
+}
+
+// The last certification given for an item is its current state.
+function certificationsByItem(certifications: readonly RepairCertification[]): Map<string, CertificationAction> {
+  const byItem = new Map<string, CertificationAction>();
+  for (const certification of certifications) byItem.set(certification.itemKey, certification.action);
+  return byItem;
+}
+
+function clears(defectBlocksDriving: boolean, action: CertificationAction | undefined): boolean {
+  switch (action) {
+    case 'repaired':
+    case 'no_repair_needed':
+      return true;
+    case 'deferred':
+      return !defectBlocksDriving;
+    case undefined:
+      return false;
+  }
+}
+
+function median(values: readonly number[]): number | null {
+  if (values.length === 0) return null;
+  const sorted = [...values].sort((a, b) => a - b);
+  const middle = Math.floor(sorted.length / 2);
+  return sorted.length % 2 === 1 ? sorted[middle]! : (sorted[middle - 1]! + sorted[middle]!) / 2;
+}
+
+// Each answer is credited with the time since the answer before it (or since the start for the
+// first one), so zone times add up to the whole walk-around even when the driver goes back.
+function attributeGaps(
+  timed: readonly TimedResult[],
+  startMs: number | null,
+): { gapsMs: number[]; byZone: Map<string, number> } {
+  const gapsMs: number[] = [];
+  const byZone = new Map<string, number>();
+  let previousMs = startMs;
+  for (const entry of timed) {
+    if (previousMs !== null) {
+      const gap = Math.max(0, entry.atMs - previousMs);
+      gapsMs.push(gap);
+      byZone.set(entry.item.zone, (byZone.get(entry.item.zone) ?? 0) + gap);
+    }
+    previousMs = entry.atMs;
+  }
+  return { gapsMs, byZone };
+}
+
+function checkRushed(
+  gapsMs: readonly number[],
+  totalDurationMs: number | null,
+  answeredCount: number,
+  rule: RushedRule,
+): RushedCheck {
+  const medianGapMs = median(gapsMs);
+  const minimumDurationMs = answeredCount * rule.minMsPerItem;
+  const reasons: RushedReason[] = [];
+  if (answeredCount >= rule.minAnswers) {
+    if (medianGapMs !== null && medianGapMs < rule.minMedianGapMs) reasons.push('median_gap');
+    if (totalDurationMs !== null && totalDurationMs < minimumDurationMs) reasons.push('total_duration');
+  }
+  return { rushed: reasons.length > 0, reasons, medianGapMs, totalDurationMs, minimumDurationMs, rule };
+}
+
+function toDefect(
+  item: ChecklistItem,
+  result: ItemResult,
+  certification: CertificationAction | undefined,
+): SummaryDefect | null {
+  const reasons: DefectReason[] = [];
+  if (result.answer === 'defect') reasons.push('reported');
+  if (result.verdict === 'out_of_limit') reasons.push('out_of_limit');
+  if (reasons.length === 0) return null;
+  const blocksDriving = item.safety || reasons.includes('out_of_limit');
+  const defect: SummaryDefect = {
+    itemKey: item.key,
+    zone: item.zone,
+    title: item.title,
+    positionLabel: item.positionLabel,
+    category: item.category,
+    safety: item.safety,
+    reasons,
+    answeredAt: result.answeredAt,
+    blocksDriving,
+    cleared: clears(blocksDriving, certification),
+  };
+  if (result.detail !== undefined) defect.detail = result.detail;
+  if (result.measurement !== undefined) defect.measurement = result.measurement;
+  if (result.verdict !== undefined) defect.verdict = result.verdict;
+  if (certification !== undefined) defect.certification = certification;
+  return defect;
+}
+
+// Verdicts are taken as given: the server re-evaluates every measurement before it stores one.
+export function summarizeInspection(
+  checklist: Checklist,
+  results: readonly ItemResult[],
+  options: SummaryOptions = {},
+): InspectionSummary {
+  const rule: RushedRule = { ...RUSHED_RULE, ...options.rushedRule };
+  const itemsByKey = new Map(checklist.items.map((item) => [item.key, item]));
+  const latest = latestResults(results);
+  const certifications = certificationsByItem(options.certifications ?? []);
+
+  const unknownItemKeys = [...latest.keys()].filter((key) => !itemsByKey.has(key)).sort();
+  const defects: SummaryDefect[] = [];
+  const unanswered: UnansweredItem[] = [];
+  const timed: TimedResult[] = [];
+  for (const item of checklist.items) {
+    const result = latest.get(item.key);
+    if (!result) {
+      unanswered.push({
+        itemKey: item.key,
+        zone: item.zone,
+        title: item.title,
+        positionLabel: item.positionLabel,
+        safety: item.safety,
+      });
+      continue;
+    }
+    const defect = toDefect(item, result, certifications.get(item.key));
+    if (defect) defects.push(defect);
+    const atMs = parseTime(result.answeredAt);
+    if (atMs !== null) timed.push({ result, item, atMs });
+  }
+  // Stable sort keeps checklist order for answers given at the same moment.
+  timed.sort((a, b) => a.atMs - b.atMs);
+
+  const startMs = options.startedAt !== undefined ? parseTime(options.startedAt) : null;
+  const { gapsMs, byZone } = attributeGaps(timed, startMs);
+  const firstMs = timed[0]?.atMs ?? null;
+  const lastMs = timed[timed.length - 1]?.atMs ?? null;
+  const fromMs = startMs ?? firstMs;
+  const totalDurationMs = fromMs !== null && lastMs !== null ? Math.max(0, lastMs - fromMs) : null;
+
+  const zones: ZoneTiming[] = checklist.zones.map((zone) => {
+    const zoneTimed = timed.filter((entry) => entry.item.zone === zone.key);
+    const timing: ZoneTiming = {
+      zone: zone.key,
+      title: zone.title,
+      itemCount: checklist.items.filter((item) => item.zone === zone.key).length,
+      answeredCount: checklist.items.filter((item) => item.zone === zone.key && latest.has(item.key)).length,
+      durationMs: byZone.get(zone.key) ?? 0,
+    };
+    const first = zoneTimed[0];
+    const last = zoneTimed[zoneTimed.length - 1];
+    if (first) timing.firstAnsweredAt = first.result.answeredAt;
+    if (last) timing.lastAnsweredAt = last.result.answeredAt;
+    return timing;
+  });
+
+  const drivingBlockedBy = defects
+    .filter((defect) => defect.blocksDriving && !defect.cleared)
+    .map((defect) => defect.itemKey);
+  const answeredCount = checklist.items.length - unanswered.length;
+  const summary: InspectionSummary = {
+    itemCount: checklist.items.length,
+    answeredCount,
+    defects,
+    safetyDefectCount: defects.filter((defect) => defect.safety).length,
+    mayBeDriven: drivingBlockedBy.length === 0,
+    drivingBlockedBy,
+    unanswered,
+    unansweredSafetyCount: unanswered.filter((item) => item.safety).length,
+    zones,
+    totalDurationMs,
+    // Only answers with a readable time can be timed.
+    rushed: checkRushed(gapsMs, totalDurationMs, timed.length, rule),
+    unknownItemKeys,
+  };
+  if (options.startedAt !== undefined) summary.startedAt = options.startedAt;
+  else if (timed[0]) summary.startedAt = timed[0].result.answeredAt;
+  const lastTimed = timed[timed.length - 1];
+  if (lastTimed) summary.finishedAt = lastTimed.result.answeredAt;
+  return summary;
+}
