@@ -1,10 +1,13 @@
 // `npm start`: PostgreSQL, migrations, demo seed, builds, and the server, all on 127.0.0.1.
 import type { ChildProcess } from 'node:child_process';
+import { randomBytes } from 'node:crypto';
+import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
 import { buildIfChanged } from './lib/build.js';
 import { DEMO_PASSWORD, DEMO_SIGN_INS } from './lib/demo.js';
 import { fail, say } from './lib/log.js';
 import { databaseUrl, ensureDatabase, startCluster, type PostgresCluster } from './lib/postgres.js';
-import { run, stopChild } from './lib/run.js';
+import { projectRoot, run, stopChild } from './lib/run.js';
 import { serverScript, startServer } from './lib/server.js';
 
 const started = Date.now();
@@ -27,6 +30,17 @@ async function shutdown(code: number): Promise<never> {
 process.on('SIGINT', () => void shutdown(0));
 process.on('SIGTERM', () => void shutdown(0));
 
+// Sign-in tokens stay valid across restarts: the secret is made once and kept with the data.
+function jwtSecret(): string {
+  if (process.env.JWT_SECRET) return process.env.JWT_SECRET;
+  const path = join(projectRoot, '.data', 'jwt-secret');
+  if (!existsSync(path)) {
+    mkdirSync(join(projectRoot, '.data'), { recursive: true });
+    writeFileSync(path, randomBytes(48).toString('base64url') + '\n', { mode: 0o600 });
+  }
+  return readFileSync(path, 'utf8').trim();
+}
+
 async function main(): Promise<void> {
   let url = process.env.DATABASE_URL;
   if (url) {
@@ -43,7 +57,11 @@ async function main(): Promise<void> {
     const result = await run('npm', serverScript(script), { env });
     if (result.code !== 0) throw new Error(`npm run ${script} failed (see above).`);
   }
-  const running = await startServer({ databaseUrl: url, port });
+  const running = await startServer({
+    databaseUrl: url,
+    port,
+    env: { JWT_SECRET: jwtSecret(), PUBLIC_URL: process.env.PUBLIC_URL ?? `http://127.0.0.1:${port}` },
+  });
   server = running.child;
   server.on('exit', (code) => {
     if (!stopping) {

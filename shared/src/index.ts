@@ -1,6 +1,7 @@
 export * from './vehicle/index.js';
 export * from './units/index.js';
 export * from './checklist/index.js';
+export * from './text/index.js';
 export * from './numbers/index.js';
 export * from './interpreter/index.js';
 export * from './limits/index.js';

@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { evaluateMeasurement } from '../limits/index.js';
+import { CANONICAL_UNITS } from '../units/index.js';
 import {
   BRAKE_TYPES,
   CHAMBER_SIZES,
@@ -123,16 +124,7 @@ describe('buildChecklist on random valid vehicles', () => {
         for (const item of buildChecklist(vehicles, 'pre_trip', 'en').items) {
           if (item.expects.type !== 'measure') continue;
           expect(item.limitContext).toBeDefined();
-          const unit = {
-            tread_depth: 'in/32',
-            tire_pressure: 'psi',
-            lining_thickness: 'in',
-            pushrod_stroke: 'in',
-            steering_lash: 'in',
-            slack_angle: 'deg',
-            air_pressure: 'psi',
-            leak_rate: 'psi/min',
-          }[item.expects.quantity];
+          const unit = CANONICAL_UNITS[item.expects.quantity];
           expect(() =>
             evaluateMeasurement(
               item.expects.type === 'measure' ? item.expects.quantity : 'tread_depth',

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { evaluateMeasurement } from '../limits/index.js';
+import { CANONICAL_UNITS } from '../units/index.js';
 import type { VehicleInput } from '../vehicle/index.js';
 import { ChecklistError, buildChecklist } from './build-checklist.js';
 import { chamberCode } from './chamber-code.js';
@@ -206,17 +207,7 @@ describe('buildChecklist for the sample tractor and trailer', () => {
 
 function unitFor(item: ChecklistItem): string {
   if (item.expects.type !== 'measure') return 'in';
-  const units = {
-    tread_depth: 'in/32',
-    tire_pressure: 'psi',
-    lining_thickness: 'in',
-    pushrod_stroke: 'in',
-    steering_lash: 'in',
-    slack_angle: 'deg',
-    air_pressure: 'psi',
-    leak_rate: 'psi/min',
-  } as const;
-  return units[item.expects.quantity];
+  return CANONICAL_UNITS[item.expects.quantity];
 }
 
 describe('buildChecklist by inspection kind', () => {

@@ -1,6 +1,6 @@
 // Reads an answer said in words: pass, defect (plain or described), negations that mean fine,
 // good words next to a problem, hedges and half sentences.
-import type { NormalisedText } from '../numbers/index.js';
+import type { NormalisedText } from '../text/index.js';
 import type { CompiledLexicon, WordCategory } from './compiled-lexicon.js';
 import type { PhraseMatch } from './phrase-matcher.js';
 import type { UnclearReason } from './types.js';

@@ -1,6 +1,6 @@
 // Each locale's lexicon compiled once into matchers and word sets.
 import type { Locale } from '../checklist/index.js';
-import { normaliseText } from '../numbers/index.js';
+import { normaliseText } from '../text/index.js';
 import type { Unit } from '../units/index.js';
 import { EN_LEXICON } from './lexicon/en.js';
 import { ES_LEXICON } from './lexicon/es.js';

@@ -1,6 +1,6 @@
 // Reads the answer to "Is that right?" after an out-of-limit value: keep it, correct it, or ask again.
 import type { Locale } from '../checklist/index.js';
-import { normaliseText } from '../numbers/index.js';
+import { normaliseText } from '../text/index.js';
 import { compiledLexicon } from './compiled-lexicon.js';
 import { interpretTranscript } from './interpret-utterance.js';
 import type { Alternative, ConfirmationResult, SpokenMeasurement } from './types.js';

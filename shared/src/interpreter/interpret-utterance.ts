@@ -1,6 +1,6 @@
 // Decides what the driver meant from the recogniser's hypotheses. Nothing unclear or negative is a pass.
 import type { Expectation, Locale } from '../checklist/index.js';
-import { normaliseText, type NormalisedText } from '../numbers/index.js';
+import { normaliseText, type NormalisedText } from '../text/index.js';
 import { classifyWords, withoutFillers, type WordItem } from './classify-words.js';
 import { compiledLexicon, type CompiledLexicon } from './compiled-lexicon.js';
 import { readMeasurement } from './read-measurement.js';

@@ -1,6 +1,6 @@
 // Longest-phrase matching of lexicon entries over normalised, stemmed words.
 import type { Locale } from '../checklist/index.js';
-import { normaliseText, type NormalisedText } from '../numbers/index.js';
+import { normaliseText, type NormalisedText } from '../text/index.js';
 
 interface Entry<C> {
   // Stems to match, or "=token" for an exact word.

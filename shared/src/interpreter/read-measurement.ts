@@ -1,6 +1,7 @@
 // Reads a spoken measurement: the number, the unit said or implied by the item, and whether it is plausible.
 import type { Locale } from '../checklist/index.js';
-import { findNumbers, stemWord, type NormalisedText, type NumberSpan } from '../numbers/index.js';
+import { findNumbers, type NumberSpan } from '../numbers/index.js';
+import { stemWord, type NormalisedText } from '../text/index.js';
 import { canonicalUnitOf, toCanonical, UNITS, unitFits, type Quantity, type Unit } from '../units/index.js';
 import type { CompiledLexicon } from './compiled-lexicon.js';
 import type { SpokenMeasurement, UnclearReason } from './types.js';

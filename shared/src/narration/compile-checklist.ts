@@ -2,7 +2,7 @@
 import type { Checklist, ChecklistItem, Locale } from '../checklist/index.js';
 import { BROAD_CONCEPTS, GENERIC_TITLE_WORDS } from './lexicon.js';
 import { toTerms, type Term } from './phrases.js';
-import { stemWord } from './normalize.js';
+import { stemWord } from '../text/index.js';
 
 export type AxleKind = 'steer' | 'drive' | 'tag' | 'trailer';
 export type Side = 'left' | 'right';

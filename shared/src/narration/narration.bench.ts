@@ -1,17 +1,11 @@
 // Benchmark: a 15-minute narration of about 300 segments scored against the generated
 // tractor-and-trailer checklist. Goal: well under 100 ms a scoring (our own target).
+import { measure, type BenchResult } from '../bench/index.js';
 import { buildChecklist, sampleCombination, type Checklist } from '../checklist/index.js';
 import { scoreNarration } from './score-narration.js';
 import type { NarrationSegment } from './types.js';
 
-export interface BenchResult {
-  name: string;
-  unit: 'ms';
-  p50: number;
-  p95: number;
-  p99: number;
-  goal: number;
-}
+export type { BenchResult } from '../bench/index.js';
 
 const FILLER = ['okay moving on', 'um let me see', 'alright next', 'so now i am walking back'];
 
@@ -33,32 +27,21 @@ export function benchNarration(checklist: Checklist, segmentCount = 300): Narrat
   }));
 }
 
-function percentile(sorted: readonly number[], fraction: number): number {
-  const index = Math.min(sorted.length - 1, Math.ceil(fraction * sorted.length) - 1);
-  return sorted[Math.max(0, index)]!;
-}
+const WARM_UP_RUNS = 3;
+const GOAL_MS = 100;
 
 export function runNarrationBench(iterations = 40): BenchResult[] {
   const checklist = buildChecklist(sampleCombination(), 'practice', 'en');
   const segments = benchNarration(checklist);
-  const timings: number[] = [];
-  for (let i = 0; i < iterations + 3; i++) {
-    // A fresh copy each time, so the per-checklist preparation is measured too.
-    const fresh = structuredClone(checklist);
-    const started = performance.now();
-    scoreNarration(segments, fresh);
-    const elapsed = performance.now() - started;
-    if (i >= 3) timings.push(elapsed);
-  }
-  timings.sort((a, b) => a - b);
+  // A fresh copy each run, made before timing, so the per-checklist preparation is measured too.
+  const fresh = Array.from({ length: WARM_UP_RUNS + iterations }, () => structuredClone(checklist));
   return [
-    {
-      name: `narration scoring: ${segments.length} segments x ${checklist.items.length} items`,
-      unit: 'ms',
-      p50: percentile(timings, 0.5),
-      p95: percentile(timings, 0.95),
-      p99: percentile(timings, 0.99),
-      goal: 100,
-    },
+    measure(
+      `narration scoring: ${segments.length} segments x ${checklist.items.length} items`,
+      GOAL_MS,
+      iterations,
+      (run) => scoreNarration(segments, fresh[run]!),
+      { warmUpRuns: WARM_UP_RUNS },
+    ),
   ];
 }

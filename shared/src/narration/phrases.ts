@@ -2,7 +2,8 @@
 // become cues, filler is dropped, and every other word stays as its stem.
 import type { Locale } from '../checklist/index.js';
 import { CONCEPTS, CUES, STOP_WORDS, type CueKind } from './lexicon.js';
-import { isPluralWord, toWords, withinOneEdit, type Word } from './normalize.js';
+import { toWords, type Word } from '../text/index.js';
+import { isPluralWord, withinOneEdit } from './word-match.js';
 
 export interface Term {
   // "#concept" for a trade phrase, the stem for any other word; empty for a cue.

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { findNumbers, parseSpokenNumber } from './parse-number.js';
 import { numberToWords } from './number-to-words.js';
-import { normaliseText } from './normalise-text.js';
+import { normaliseText } from '../text/index.js';
 import type { Locale } from '../checklist/index.js';
 
 describe('parseSpokenNumber', () => {
@@ -135,6 +135,13 @@ describe('numberToWords round trip', () => {
     });
   }
 
+  it('reads "y un" before a singular fraction word as a whole number and a part', () => {
+    expect(parseSpokenNumber('ochenta y un cuarto', 'es')).toBe(80.25);
+    expect(parseSpokenNumber('ochenta y un medio', 'es')).toBe(80.5);
+    expect(parseSpokenNumber('treinta y un treintaidosavos', 'es')).toBe(31 / 32);
+    expect(parseSpokenNumber('ochenta y uno', 'es')).toBe(81);
+  });
+
   it('refuses negative and non-finite numbers', () => {
     expect(() => numberToWords(-1, 'en')).toThrow(RangeError);
     expect(() => numberToWords(Number.NaN, 'es')).toThrow(RangeError);
@@ -147,35 +154,5 @@ describe('numberToWords round trip', () => {
     expect(numberToWords(5 / 32, 'es')).toBe('cinco treintaidosavos');
     expect(numberToWords(1.75, 'en')).toBe('one and three quarters');
     expect(numberToWords(1.75, 'es')).toBe('uno y tres cuartos');
-  });
-});
-
-describe('normaliseText', () => {
-  it('folds case, accents and punctuation and keeps accents for repeating back', () => {
-    const n = normaliseText('¿Está BIEN?  Sí.', 'es');
-    expect(n.tokens).toEqual(['esta', 'bien', 'si']);
-    expect(n.surface).toEqual(['está', 'bien', 'sí']);
-    expect(n.pauseAfter).toEqual([false, true, true]);
-  });
-
-  it('splits units from digits and keeps fractions whole', () => {
-    expect(normaliseText('110psi, 4mm, 1-3/4", 5 32nds', 'en').tokens).toEqual([
-      '110',
-      'psi',
-      '4',
-      'mm',
-      '1',
-      '3/4',
-      '5',
-      '32nds',
-    ]);
-  });
-
-  it('stems inflections to one form', () => {
-    const { stems } = normaliseText('leaks leaking leaked leak', 'en');
-    expect(new Set(stems).size).toBe(1);
-    const es = normaliseText('fugas fuga rotos rota', 'es').stems;
-    expect(es[0]).toBe(es[1]);
-    expect(es[2]).toBe(es[3]);
   });
 });

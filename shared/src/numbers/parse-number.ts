@@ -1,7 +1,6 @@
 // Finds numbers said in words or digits: integers, decimals, fractions, mixed numbers, gauge readings.
 import type { Locale } from '../checklist/index.js';
-import { normaliseText } from './normalise-text.js';
-import { NUMBER_WORDS, type NumberWords } from './number-words.js';
+import { normaliseText, NUMBER_WORDS, type NumberWords } from '../text/index.js';
 
 export type NumberForm = 'integer' | 'decimal' | 'fraction' | 'mixed' | 'gauge';
 
@@ -70,7 +69,16 @@ class NumberParser {
       const joiner = this.words.tensJoiner;
       if (joiner !== undefined) {
         const unit = this.at(i + 1) === joiner ? this.words.small[this.at(i + 2)] : undefined;
-        if (unit !== undefined && unit >= 1 && unit <= 9)
+        // "ochenta y un cuarto" is 80 1/4 and "treinta y tres cuartos" 30 3/4, not 81/4 or 33/4: nobody
+        // says an improper fraction, so tens + "y" + a proper fraction is a mixed number.
+        // ("treinta y un treintaidosavos", 31/32, is proper and stays one numerator.)
+        const fractionAfter = unit !== undefined ? this.denominator(i + 3) : undefined;
+        const startsMixed =
+          unit !== undefined &&
+          fractionAfter !== undefined &&
+          ten + unit > fractionAfter.value &&
+          unit < fractionAfter.value;
+        if (unit !== undefined && unit >= 1 && unit <= 9 && !startsMixed)
           return { value: ten + unit, end: i + 3, wordsBelowHundred: true };
       } else {
         const unit = this.words.small[this.at(i + 1)];

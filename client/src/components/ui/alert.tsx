@@ -15,7 +15,12 @@ export function ErrorAlert({ children }: { children: ReactNode }) {
 export function Notice({ children }: { children: ReactNode }) {
   return (
     <div role="status" className="flex items-start gap-2 rounded-lg border-2 border-line bg-surface p-3">
-      <span aria-hidden="true">ⓘ</span>
+      <span
+        aria-hidden="true"
+        className="grid size-6 shrink-0 place-items-center rounded-full border-2 border-current text-sm font-bold"
+      >
+        i
+      </span>
       <div>{children}</div>
     </div>
   );

@@ -1,5 +1,5 @@
-// Number words per locale, as data: the parser and numberToWords read the same tables so they agree.
-import type { Locale } from '../checklist/index.js';
+// Number words per locale, as data: the number parser and toWords read the same tables so they agree.
+import type { Locale } from '../checklist/types.js';
 
 export interface NumberWords {
   // Single tokens worth 0..29 (Spanish runs 21..29 together; English stops at 19).
