@@ -1,0 +1,47 @@
+import { act, renderHook, waitFor } from '@testing-library/react';
+import { buildChecklist, sampleCombination, type ItemResult } from '@yardcall/shared';
+import { describe, expect, it } from 'vitest';
+import { ScriptedEngine } from '@/lib/speech';
+import { useVoiceLoop } from './use-voice-loop';
+
+const checklist = buildChecklist(sampleCombination(), 'pre_trip', 'en');
+
+describe('useVoiceLoop', () => {
+  it('runs the loop on a tap and exposes the current item and each saved answer', async () => {
+    const engine = new ScriptedEngine(['good', 'defect, coolant leaking']);
+    const saved: ItemResult[] = [];
+    const { result } = renderHook(() =>
+      useVoiceLoop({ engine, checklist, host: { onResult: (r) => void saved.push(r) } }),
+    );
+    expect(result.current.state.phase).toBe('idle');
+    expect(result.current.item?.key).toBe(checklist.items[0]?.key);
+    act(() => result.current.start());
+    await waitFor(() => expect(result.current.running).toBe(false));
+    expect(saved.map((r) => r.answer)).toEqual(['pass', 'defect']);
+    expect(result.current.state.index).toBe(2);
+    expect(result.current.item?.key).toBe(checklist.items[2]?.key);
+    expect(result.current.lastTiming?.latencyMs).toBeGreaterThanOrEqual(0);
+  });
+
+  it('shows a speech failure and resumes at the same item on the next start', async () => {
+    const engine = new ScriptedEngine([{ error: 'audio-capture' }, 'good']);
+    const { result } = renderHook(() => useVoiceLoop({ engine, checklist, host: { onResult: () => undefined } }));
+    act(() => result.current.start());
+    await waitFor(() => expect(result.current.speechFailure?.code).toBe('audio-capture'));
+    expect(result.current.state.phase).toBe('stalled');
+    act(() => result.current.start());
+    await waitFor(() => expect(result.current.state.index).toBe(1));
+    expect(result.current.speechFailure).toBeNull();
+  });
+
+  it('sends button commands into the loop', () => {
+    const engine = new ScriptedEngine(() => undefined, { answerMs: 50 });
+    const { result, unmount } = renderHook(() =>
+      useVoiceLoop({ engine, checklist, host: { onResult: () => undefined } }),
+    );
+    act(() => result.current.start());
+    act(() => result.current.command('skip'));
+    expect(result.current.state.skipped).toEqual([checklist.items[0]?.key]);
+    unmount();
+  });
+});

@@ -1,0 +1,28 @@
+export { OFFLINE_DB_NAME, openOfflineDb } from './offline-db';
+export type {
+  JsonValue,
+  LocalInspection,
+  LocalNote,
+  LocalPhoto,
+  LocalResult,
+  OfflineDb,
+  OutboxEntry,
+  OutboxKind,
+} from './offline-db';
+export { createOfflineStore } from './offline-store';
+export type { NewInspection, NewNote, NewPhoto, OfflineStore } from './offline-store';
+export {
+  createSyncEngine,
+  defaultRetryDelayMs,
+  isRetryable,
+  MAX_RESULTS_PER_PUT,
+  SYNC_DEBOUNCE_MS,
+} from './sync-engine';
+export type { SyncEngine, SyncEngineOptions, SyncStatus } from './sync-engine';
+export { apiSyncTransport } from './sync-transport';
+export type { SyncTransport } from './sync-transport';
+export { requestPersistentStorage } from './persistent-storage';
+export type { PersistOutcome } from './persistent-storage';
+export { getOfflineRuntime } from './offline-runtime';
+export type { OfflineRuntime } from './offline-runtime';
+export { useSyncStatus } from './use-sync-status';

@@ -1,0 +1,308 @@
+import type { ResultUpsert } from '@yardcall/shared';
+import { ApiError, NETWORK_ERROR_STATUS } from '../api-client';
+import { describeError } from '../errors';
+import type { LocalNote, LocalPhoto } from './offline-db';
+import type { OfflineStore, PendingResult } from './offline-store';
+import { requestPersistentStorage, type PersistOutcome } from './persistent-storage';
+import { apiSyncTransport, type SyncTransport } from './sync-transport';
+
+export interface SyncStatus {
+  // Creates, results, notes and photos not yet acknowledged by the server.
+  waiting: number;
+  syncing: boolean;
+  // A sentence for the driver when the server refused something; cleared by the next clean run.
+  lastError?: string;
+  lastSyncedAt?: string;
+  storagePersisted?: PersistOutcome;
+}
+
+// The server takes at most this many results in one PUT.
+export const MAX_RESULTS_PER_PUT = 150;
+// Our own practice: long enough to gather a burst of answers, short enough to feel immediate.
+export const SYNC_DEBOUNCE_MS = 1000;
+
+// Our own practice: 1 s doubling to 1 min, with jitter so many phones do not retry together.
+export function defaultRetryDelayMs(attempt: number): number {
+  const capped = Math.min(60_000, 1000 * 2 ** attempt);
+  return Math.round(capped * (0.5 + Math.random() / 2));
+}
+
+export interface SyncEngineOptions {
+  store: OfflineStore;
+  transport?: SyncTransport;
+  batchSize?: number;
+  debounceMs?: number;
+  retryDelayMs?: (attempt: number) => number;
+  isOnline?: () => boolean;
+  // Where `online` and `visibilitychange` are heard.
+  events?: { window: Window; document: Document };
+  storage?: StorageManager;
+  // Shared by the tabs of one origin; absent where the browser has no Web Locks.
+  locks?: Pick<LockManager, 'request'>;
+  now?: () => Date;
+}
+
+export const SYNC_LOCK_NAME = 'yardcall-offline-sync';
+
+export type SyncEngine = ReturnType<typeof createSyncEngine>;
+
+type RunOutcome = 'done' | 'offline' | 'retry' | 'stopped';
+
+// Retried with backoff: no answer, a server fault, a timeout, throttling, or a conflict with a
+// concurrent request for the same client id.
+export function isRetryable(error: unknown): boolean {
+  if (!(error instanceof ApiError)) return false;
+  const { status } = error;
+  return status === NETWORK_ERROR_STATUS || status >= 500 || status === 408 || status === 409 || status === 429;
+}
+
+function fileExtension(mimeType: string): string {
+  const base = mimeType.split(';')[0]?.trim() ?? '';
+  const known: Record<string, string> = {
+    'audio/webm': 'webm',
+    'audio/ogg': 'ogg',
+    'audio/mp4': 'm4a',
+    'audio/mpeg': 'mp3',
+    'audio/wav': 'wav',
+    'image/jpeg': 'jpg',
+    'image/png': 'png',
+    'image/webp': 'webp',
+  };
+  return known[base] ?? 'bin';
+}
+
+function noteForm(note: LocalNote): FormData {
+  const form = new FormData();
+  form.append(
+    'file',
+    new Blob([note.bytes], { type: note.mimeType }),
+    `${note.clientId}.${fileExtension(note.mimeType)}`,
+  );
+  form.append('itemKey', note.itemKey);
+  if (note.heard !== undefined) form.append('heard', note.heard);
+  form.append('durationMs', String(Math.round(note.durationMs)));
+  form.append('clientId', note.clientId);
+  return form;
+}
+
+function photoForm(photo: LocalPhoto): FormData {
+  const form = new FormData();
+  form.append(
+    'file',
+    new Blob([photo.bytes], { type: photo.mimeType }),
+    `${photo.clientId}.${fileExtension(photo.mimeType)}`,
+  );
+  form.append('itemKey', photo.itemKey);
+  form.append('clientId', photo.clientId);
+  return form;
+}
+
+// Sends what the offline store holds, oldest first: creates, then results in batches, then notes
+// and photos one upload each. Everything sent carries its client id, so a resend is harmless.
+export function createSyncEngine(options: SyncEngineOptions) {
+  const { store } = options;
+  const transport = options.transport ?? apiSyncTransport;
+  const batchSize = Math.min(options.batchSize ?? MAX_RESULTS_PER_PUT, MAX_RESULTS_PER_PUT);
+  const debounceMs = options.debounceMs ?? SYNC_DEBOUNCE_MS;
+  const retryDelayMs = options.retryDelayMs ?? defaultRetryDelayMs;
+  const isOnline = options.isOnline ?? (() => globalThis.navigator?.onLine !== false);
+  const now = options.now ?? (() => new Date());
+  const locks = 'locks' in options ? options.locks : globalThis.navigator?.locks;
+
+  let status: SyncStatus = { waiting: 0, syncing: false };
+  const listeners = new Set<(status: SyncStatus) => void>();
+  let running: Promise<RunOutcome> | null = null;
+  let runAgain = false;
+  let attempt = 0;
+  let retryTimer: ReturnType<typeof setTimeout> | undefined;
+  let debounceTimer: ReturnType<typeof setTimeout> | undefined;
+  let detach: (() => void) | null = null;
+  let stopped = false;
+
+  function setStatus(patch: Partial<SyncStatus>): void {
+    status = { ...status, ...patch };
+    for (const listener of listeners) listener(status);
+  }
+
+  async function refreshWaiting(): Promise<void> {
+    setStatus({ waiting: await store.countWaiting() });
+  }
+
+  function refreshWaitingSoon(): void {
+    // A failed count only leaves the figure stale until the next run.
+    refreshWaiting().catch(() => undefined);
+  }
+
+  async function acknowledged(): Promise<void> {
+    setStatus({ lastSyncedAt: now().toISOString(), waiting: await store.countWaiting() });
+  }
+
+  async function pushCreates(): Promise<void> {
+    for (const inspection of await store.pendingCreates()) {
+      const created = await transport.createInspection(inspection.request);
+      await store.markInspectionCreated(inspection.clientId, created.id);
+      await acknowledged();
+    }
+  }
+
+  async function pushResults(): Promise<void> {
+    const pending = await store.pendingResults();
+    const byInspection = new Map<string, PendingResult[]>();
+    for (const result of pending) {
+      const list = byInspection.get(result.inspectionClientId) ?? [];
+      list.push(result);
+      byInspection.set(result.inspectionClientId, list);
+    }
+    for (const [inspectionClientId, results] of byInspection) {
+      const serverId = await store.serverIdOf(inspectionClientId);
+      // Its create has not been acknowledged yet; creates run first, so this is a data fault.
+      if (!serverId) throw new Error(`Inspection ${inspectionClientId} has no server id yet.`);
+      for (let start = 0; start < results.length; start += batchSize) {
+        const batch = results.slice(start, start + batchSize);
+        const upserts: ResultUpsert[] = batch.map((result) => result.upsert);
+        await transport.putResults(serverId, { results: upserts });
+        await store.markResultsSynced(batch.map(({ upsert, revision }) => ({ clientId: upsert.clientId, revision })));
+        await acknowledged();
+      }
+    }
+  }
+
+  async function pushNotes(): Promise<void> {
+    for (const note of await store.pendingNotes()) {
+      const serverId = await store.serverIdOf(note.inspectionClientId);
+      if (!serverId) throw new Error(`Inspection ${note.inspectionClientId} has no server id yet.`);
+      const saved = await transport.uploadNote(serverId, noteForm(note));
+      await store.markNoteSynced(note.clientId, saved.id);
+      await acknowledged();
+    }
+  }
+
+  async function pushPhotos(): Promise<void> {
+    for (const photo of await store.pendingPhotos()) {
+      const serverId = await store.serverIdOf(photo.inspectionClientId);
+      if (!serverId) throw new Error(`Inspection ${photo.inspectionClientId} has no server id yet.`);
+      const saved = await transport.uploadPhoto(serverId, photoForm(photo));
+      await store.markPhotoSynced(photo.clientId, saved.id);
+      await acknowledged();
+    }
+  }
+
+  function scheduleRetry(): void {
+    if (stopped) return;
+    clearTimeout(retryTimer);
+    const delay = retryDelayMs(attempt);
+    attempt += 1;
+    retryTimer = setTimeout(() => void syncNow(), delay);
+  }
+
+  async function runOnce(): Promise<RunOutcome> {
+    if (!isOnline()) {
+      await refreshWaiting();
+      return 'offline';
+    }
+    setStatus({ syncing: true });
+    try {
+      await pushCreates();
+      await pushResults();
+      await pushNotes();
+      await pushPhotos();
+      attempt = 0;
+      clearTimeout(retryTimer);
+      setStatus({ lastError: undefined });
+      return 'done';
+    } catch (error) {
+      if (isRetryable(error)) {
+        // A conflict is the server's word for the driver ("review the last report first"): show it
+        // while retrying, so the create goes through once the driver has dealt with it.
+        if (error instanceof ApiError && error.status === 409) setStatus({ lastError: describeError(error) });
+        return 'retry';
+      }
+      setStatus({ lastError: describeError(error) });
+      return 'stopped';
+    } finally {
+      setStatus({ syncing: false, waiting: await store.countWaiting() });
+    }
+  }
+
+  // One run at a time: a request during a run is folded into one more run after it, so the same
+  // result is never in two requests at once.
+  function syncNow(): Promise<RunOutcome> {
+    if (running) {
+      runAgain = true;
+      return running;
+    }
+    running = (async () => {
+      let outcome: RunOutcome;
+      do {
+        runAgain = false;
+        // Two tabs on the same device must not send the same outbox at once either.
+        outcome = locks ? await locks.request(SYNC_LOCK_NAME, runOnce) : await runOnce();
+      } while (runAgain && outcome === 'done');
+      // Scheduled once the run is over, so the retry cannot be folded into the run that failed.
+      if (outcome === 'retry') scheduleRetry();
+      return outcome;
+    })().finally(() => {
+      running = null;
+    });
+    return running;
+  }
+
+  function scheduleSoon(): void {
+    clearTimeout(debounceTimer);
+    debounceTimer = setTimeout(() => void syncNow(), debounceMs);
+  }
+
+  return {
+    syncNow,
+
+    getStatus: (): SyncStatus => status,
+
+    subscribe(listener: (status: SyncStatus) => void): () => void {
+      listeners.add(listener);
+      return () => listeners.delete(listener);
+    },
+
+    // Listens for a reconnect and for the app coming back to the screen, asks for persistent
+    // storage once, and sends what an earlier session left.
+    start(): Promise<RunOutcome> {
+      stopped = false;
+      if (!detach) {
+        const target = options.events ?? { window: globalThis.window, document: globalThis.document };
+        const onOnline = () => {
+          attempt = 0;
+          void syncNow();
+        };
+        const onVisibility = () => {
+          if (target.document.visibilityState === 'visible') void syncNow();
+        };
+        target.window.addEventListener('online', onOnline);
+        target.document.addEventListener('visibilitychange', onVisibility);
+        const unsubscribeStore = store.onWrite(() => {
+          refreshWaitingSoon();
+          scheduleSoon();
+        });
+        detach = () => {
+          target.window.removeEventListener('online', onOnline);
+          target.document.removeEventListener('visibilitychange', onVisibility);
+          unsubscribeStore();
+        };
+        void requestPersistentStorage(options.storage).then((outcome) => setStatus({ storagePersisted: outcome }));
+      }
+      return syncNow();
+    },
+
+    // Stops listening and cancels pending timers; a run already under way finishes.
+    stop(): void {
+      stopped = true;
+      detach?.();
+      detach = null;
+      clearTimeout(retryTimer);
+      clearTimeout(debounceTimer);
+    },
+
+    // Resolves when no run is under way (for tests and for a clean shutdown).
+    async idle(): Promise<void> {
+      while (running) await running;
+    },
+  };
+}
