@@ -82,6 +82,17 @@ export interface PutResultsResponse {
   results: ItemResultResponse[];
 }
 
+// The text fields sent with a photo or a voice note as multipart/form-data, beside the file.
+export interface PhotoUpload {
+  itemKey: string;
+  clientId: string;
+}
+
+export interface VoiceNoteUpload extends PhotoUpload {
+  durationMs: number;
+  heard?: string;
+}
+
 export interface VoiceNoteResponse {
   id: string;
   clientId: string;
