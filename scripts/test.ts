@@ -1,12 +1,11 @@
 // `npm test`: the same set-up as `npm start`, a fresh database per run, then every suite.
 import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
-import { createServer } from 'node:net';
 import { join } from 'node:path';
 import { buildIfChanged } from './lib/build.js';
 import { say } from './lib/log.js';
-import { databaseUrl, recreateDatabase, startCluster, type PostgresCluster } from './lib/postgres.js';
-import { aptInstall, projectRoot, run, stopChild } from './lib/run.js';
-import { serverScript, startServer, type RunningServer } from './lib/server.js';
+import { dropDatabase, startCluster, type PostgresCluster } from './lib/postgres.js';
+import { aptInstall, projectRoot, run } from './lib/run.js';
+import { freshDatabase, startSeededServer, type SeededServer } from './lib/stack.js';
 
 interface SuiteResult {
   name: string;
@@ -21,7 +20,7 @@ const outputDir = join(projectRoot, '.test-output');
 const results: SuiteResult[] = [];
 const startedAt = Date.now();
 let cluster: PostgresCluster | undefined;
-let server: RunningServer | undefined;
+let server: SeededServer | undefined;
 
 function readJson(path: string): unknown {
   return existsSync(path) ? JSON.parse(readFileSync(path, 'utf8')) : undefined;
@@ -94,19 +93,6 @@ async function suite(
   }
 }
 
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe = createServer();
-    probe.once('error', reject);
-    probe.listen(0, '127.0.0.1', () => {
-      const address = probe.address();
-      probe.close(() =>
-        typeof address === 'object' && address ? resolve(address.port) : reject(new Error('no port')),
-      );
-    });
-  });
-}
-
 function ensureChromium(): void {
   if (existsSync('/usr/bin/chromium')) return;
   say("Chromium is missing; installing Debian's chromium package for the browser tests ...");
@@ -128,9 +114,7 @@ async function main(): Promise<void> {
   }
   const runId = `${Date.now().toString(36)}_${process.pid}`;
   const serverDb = `yardcall_test_${runId}`;
-  const browserDb = `yardcall_e2e_${runId}`;
-  await recreateDatabase(serverUrl, serverDb);
-  await recreateDatabase(serverUrl, browserDb);
+  const serverDbUrl = await freshDatabase(serverUrl, serverDb);
 
   await buildIfChanged('shared');
   await suite('lint', ['npm', 'run', 'lint']);
@@ -155,7 +139,7 @@ async function main(): Promise<void> {
     'server',
     ['npm', 'test', '--workspace', 'server', '--', '--json', `--outputFile=${join(outputDir, 'server.json')}`],
     {
-      env: { DATABASE_URL: databaseUrl(serverUrl, serverDb), NODE_ENV: 'test' },
+      env: { DATABASE_URL: serverDbUrl, NODE_ENV: 'test' },
       report: join(outputDir, 'server.json'),
       count: countJestLike,
     },
@@ -179,34 +163,19 @@ async function main(): Promise<void> {
   );
 
   await Promise.all([buildIfChanged('server'), buildIfChanged('client')]);
-  const browserUrl = databaseUrl(serverUrl, browserDb);
-  for (const script of ['migrate', 'seed'] as const) {
-    const result = await run('npm', serverScript(script), { env: { ...process.env, DATABASE_URL: browserUrl } });
-    if (result.code !== 0) throw new Error(`npm run ${script} failed for the browser tests' database.`);
-  }
-  server = await startServer({
-    databaseUrl: browserUrl,
-    port: await freePort(),
-    quiet: true,
-    env: { NODE_ENV: 'test', THROTTLE_LOGIN_LIMIT: '1000' },
-  });
+  server = await startSeededServer(serverUrl, `yardcall_e2e_${runId}`);
   await suite('browser', ['npx', 'playwright', 'test', '--config', 'client/playwright.config.ts'], {
     env: {
       BASE_URL: server.url,
-      DATABASE_URL: browserUrl,
+      DATABASE_URL: server.databaseUrl,
       PLAYWRIGHT_JSON_OUTPUT_NAME: join(outputDir, 'browser.json'),
     },
     report: join(outputDir, 'browser.json'),
     count: countPlaywright,
   });
-  await stopChild(server.child);
+  await server.stop();
   server = undefined;
-  if (serverUrl && !cluster) {
-    // Someone else's PostgreSQL: leave it as we found it.
-    const { dropDatabase } = await import('./lib/postgres.js');
-    await dropDatabase(serverUrl, serverDb);
-    await dropDatabase(serverUrl, browserDb);
-  }
+  await dropDatabase(serverUrl, serverDb);
 }
 
 function printSummary(): number {
@@ -234,7 +203,7 @@ try {
   printSummary();
   exitCode = 1;
 } finally {
-  await stopChild(server?.child);
+  await server?.stop();
   cluster?.stop();
 }
 process.exit(exitCode);

@@ -8,9 +8,14 @@ import { ApiExceptionFilter } from './common/api-exception.filter';
 import { createValidationPipe } from './common/validation';
 import { validateEnv, type AppEnv } from './config/env.validation';
 import { buildDataSourceOptions } from './database/data-source';
+import { DefectsModule } from './defects/defects.module';
 import { HealthModule } from './health/health.module';
+import { InspectionsModule } from './inspections/inspections.module';
 import { MailModule } from './mail/mail.module';
+import { NotesModule } from './notes/notes.module';
 import { OrganizationsModule } from './organizations/organizations.module';
+import { ReportsModule } from './reports/reports.module';
+import { StorageModule } from './storage/storage.module';
 import { UsersModule } from './users/users.module';
 import { VehiclesModule } from './vehicles/vehicles.module';
 
@@ -44,6 +49,11 @@ void configModule.catch(() => undefined);
     OrganizationsModule,
     UsersModule,
     VehiclesModule,
+    InspectionsModule,
+    DefectsModule,
+    StorageModule,
+    NotesModule,
+    ReportsModule,
     MailModule,
     HealthModule,
   ],

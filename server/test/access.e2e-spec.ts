@@ -12,6 +12,8 @@ import {
   bodyOf,
 } from './helpers';
 
+const NOWHERE_ID = '00000000-0000-4000-8000-000000000000';
+
 // Who may call what: the design, one row per route. A route in the OpenAPI document without a row fails.
 type Access = 'public' | 'signed-in' | Role[];
 interface RouteRow {
@@ -36,6 +38,20 @@ const ROUTES: RouteRow[] = [
   { method: 'get', path: '/api/vehicles/{id}', access: 'signed-in' },
   { method: 'patch', path: '/api/vehicles/{id}', access: ['admin', 'supervisor'] },
   { method: 'get', path: '/api/health', access: 'public' },
+  { method: 'post', path: '/api/inspections', access: ['driver'] },
+  { method: 'get', path: '/api/inspections', access: 'signed-in' },
+  { method: 'get', path: '/api/inspections/{id}', access: 'signed-in' },
+  { method: 'put', path: '/api/inspections/{id}/results', access: ['driver'] },
+  { method: 'post', path: '/api/inspections/{id}/submit', access: ['driver'] },
+  { method: 'post', path: '/api/inspections/{id}/acknowledge', access: ['driver'] },
+  { method: 'get', path: '/api/vehicles/{id}/pending-acknowledgement', access: ['driver'] },
+  { method: 'get', path: '/api/defects', access: ['mechanic', 'supervisor', 'admin'] },
+  { method: 'post', path: '/api/defects/{id}/repair', access: ['mechanic'] },
+  { method: 'post', path: '/api/inspections/{id}/notes', access: ['driver'] },
+  { method: 'get', path: '/api/notes/{id}/audio', access: 'signed-in' },
+  { method: 'post', path: '/api/inspections/{id}/photos', access: ['driver'] },
+  { method: 'get', path: '/api/photos/{id}', access: 'signed-in' },
+  { method: 'get', path: '/api/inspections/{id}/report.pdf', access: 'signed-in' },
 ];
 
 interface OpenApiDocument {
@@ -53,6 +69,23 @@ describe('access control', () => {
     const vehicles = (await request(t.url).get('/api/vehicles').set(bearer(tokens.driver))).body as VehicleResponse[];
     const me = (await request(t.url).get('/api/auth/me').set(bearer(tokens.driver))).body as UserSummary;
     params = { '/api/users/{id}': me.id, '/api/vehicles/{id}': vehicles[0]!.id, token: 'not-a-real-invitation-token' };
+    // Inspections and defects: an id that exists nowhere, so allowed callers get 400 or 404, never 403.
+    Object.assign(params, {
+      '/api/inspections/{id}': NOWHERE_ID,
+      '/api/inspections/{id}/results': NOWHERE_ID,
+      '/api/inspections/{id}/submit': NOWHERE_ID,
+      '/api/inspections/{id}/acknowledge': NOWHERE_ID,
+      '/api/vehicles/{id}/pending-acknowledgement': vehicles[0]!.id,
+      '/api/defects/{id}/repair': NOWHERE_ID,
+    });
+    // Notes, photos and reports: likewise an id that exists nowhere.
+    Object.assign(params, {
+      '/api/inspections/{id}/notes': NOWHERE_ID,
+      '/api/notes/{id}/audio': NOWHERE_ID,
+      '/api/inspections/{id}/photos': NOWHERE_ID,
+      '/api/photos/{id}': NOWHERE_ID,
+      '/api/inspections/{id}/report.pdf': NOWHERE_ID,
+    });
   });
   afterAll(async () => {
     await t.close();

@@ -55,9 +55,11 @@ describe('database', () => {
         organizations: SEED_ORGANIZATIONS.length,
         users: expectedUsers,
         vehicles: expectedVehicles,
+        // The demo report of KV-103 (seed-inspections.ts).
+        inspections: 1,
       });
     }
-    expect(record!.secondSeed).toEqual({ organizations: 0, users: 0, vehicles: 0 });
+    expect(record!.secondSeed).toEqual({ organizations: 0, users: 0, vehicles: 0, inspections: 0 });
     expect(record!.countsAfterSecond).toEqual(record!.countsAfterFirst);
   });
 
@@ -69,7 +71,7 @@ describe('database', () => {
                 (SELECT json_agg(v ORDER BY v.id) FROM vehicles v) AS vehicles`,
       );
     const before = await snapshot();
-    await expect(seed(dataSource)).resolves.toEqual({ organizations: 0, users: 0, vehicles: 0 });
+    await expect(seed(dataSource)).resolves.toEqual({ organizations: 0, users: 0, vehicles: 0, inspections: 0 });
     expect(await snapshot()).toEqual(before);
   });
 });

@@ -15,7 +15,17 @@ export interface SetupRecord {
   countsAfterSecond: Record<string, number>;
 }
 
-const TABLES = ['organizations', 'users', 'invitations', 'vehicles'];
+const TABLES = [
+  'organizations',
+  'users',
+  'invitations',
+  'vehicles',
+  'inspections',
+  'item_results',
+  'defects',
+  'repairs',
+  'signatures',
+];
 
 async function countRows(dataSource: DataSource): Promise<Record<string, number>> {
   const counts: Record<string, number> = {};

@@ -14,6 +14,7 @@ const REASONS: Record<number, string> = {
   410: 'Gone',
   413: 'Payload Too Large',
   415: 'Unsupported Media Type',
+  416: 'Range Not Satisfiable',
   422: 'Unprocessable Entity',
   429: 'Too Many Requests',
   500: 'Internal Server Error',

@@ -16,7 +16,20 @@ export interface AppEnv {
   MAIL_FROM: string;
   CLIENT_DIST: string | null;
   THROTTLE_LOGIN_LIMIT: number;
+  // Where voice notes and photos are kept: a local folder unless an S3-compatible store is configured.
+  STORAGE: StorageEnv;
 }
+
+export type StorageEnv =
+  | { driver: 'local'; dir: string }
+  | {
+      driver: 's3';
+      endpoint: string;
+      bucket: string;
+      region: string;
+      accessKeyId: string;
+      secretAccessKey: string;
+    };
 
 // Fixed so a development restart keeps sessions; production must set its own.
 const DEV_JWT_SECRET = 'yardcall-dev-secret-not-for-production';
@@ -56,6 +69,36 @@ function readUrl(raw: Record<string, unknown>, name: string, protocols: string[]
     throw new EnvError(`${name} must start with ${protocols.map((p) => `${p}://`).join(' or ')}; it is "${text}".`);
   }
   return text;
+}
+
+const S3_REQUIRED = ['S3_ENDPOINT', 'S3_BUCKET', 'S3_ACCESS_KEY_ID', 'S3_SECRET_ACCESS_KEY'] as const;
+
+// Any S3_* variable switches to the S3-compatible store, which then needs all four; else STORAGE_DIR.
+function readStorageEnv(raw: Record<string, unknown>): StorageEnv {
+  const anyS3 = [...S3_REQUIRED, 'S3_REGION'].some((name) => readString(raw, name) !== undefined);
+  if (!anyS3) {
+    const dir = readString(raw, 'STORAGE_DIR');
+    return { driver: 'local', dir: dir ? resolve(dir) : resolve(SERVER_ROOT, '..', '.data', 'objects') };
+  }
+  const missing = S3_REQUIRED.filter((name) => readString(raw, name) === undefined);
+  if (missing.length > 0) {
+    throw new EnvError(
+      `An S3-compatible store needs ${S3_REQUIRED.join(', ')}; ${missing.join(', ')} ${missing.length === 1 ? 'is' : 'are'} not set.`,
+    );
+  }
+  const bucket = readString(raw, 'S3_BUCKET') ?? '';
+  // S3 bucket naming rules (AWS S3 User Guide, "Bucket naming rules"): 3-63 lowercase letters, digits, dots, hyphens.
+  if (!/^[a-z0-9][a-z0-9.-]{1,61}[a-z0-9]$/.test(bucket)) {
+    throw new EnvError(`S3_BUCKET must be 3 to 63 lowercase letters, digits, dots or hyphens; it is "${bucket}".`);
+  }
+  return {
+    driver: 's3',
+    endpoint: readUrl(raw, 'S3_ENDPOINT', ['http', 'https']) ?? '',
+    bucket,
+    region: readString(raw, 'S3_REGION') ?? 'us-east-1',
+    accessKeyId: readString(raw, 'S3_ACCESS_KEY_ID') ?? '',
+    secretAccessKey: readString(raw, 'S3_SECRET_ACCESS_KEY') ?? '',
+  };
 }
 
 // Checks the process environment and fills in defaults; a bad value stops the boot with a sentence naming it.
@@ -115,5 +158,6 @@ export function validateEnv(raw: Record<string, unknown>): AppEnv {
     MAIL_FROM: mailFrom,
     CLIENT_DIST: clientDistUsable ? clientDist : null,
     THROTTLE_LOGIN_LIMIT: readInt(raw, 'THROTTLE_LOGIN_LIMIT', 5, 1, 10000),
+    STORAGE: readStorageEnv(raw),
   };
 }

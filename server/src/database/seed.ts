@@ -5,18 +5,20 @@ import { Organization } from '../organizations/entities/organization.entity';
 import { User } from '../users/entities/user.entity';
 import { Vehicle } from '../vehicles/entities/vehicle.entity';
 import { buildDataSourceOptions } from './data-source';
+import { seedDemoInspection } from './seed-inspections';
 import { DEMO_PASSWORD, SEED_ORGANIZATIONS } from './seed-data';
 
 export interface SeedResult {
   organizations: number;
   users: number;
   vehicles: number;
+  inspections: number;
 }
 
 // Idempotent: finds each organisation, user and vehicle by its natural key and creates only what is missing;
 // existing rows are left exactly as they are (a second run changes nothing).
 export async function seed(dataSource: DataSource): Promise<SeedResult> {
-  const created: SeedResult = { organizations: 0, users: 0, vehicles: 0 };
+  const created: SeedResult = { organizations: 0, users: 0, vehicles: 0, inspections: 0 };
   const passwordHash = await hashPassword(DEMO_PASSWORD);
   await dataSource.transaction(async (manager) => {
     for (const spec of SEED_ORGANIZATIONS) {
@@ -65,6 +67,7 @@ export async function seed(dataSource: DataSource): Promise<SeedResult> {
         );
         created.vehicles += 1;
       }
+      created.inspections += await seedDemoInspection(manager, organization.id);
     }
   });
   return created;
@@ -77,7 +80,7 @@ async function main(): Promise<void> {
   try {
     const created = await seed(dataSource);
     console.log(
-      `Seed done: created ${created.organizations} organisations, ${created.users} users, ${created.vehicles} vehicles (existing rows untouched). Demo password: ${DEMO_PASSWORD}`,
+      `Seed done: created ${created.organizations} organisations, ${created.users} users, ${created.vehicles} vehicles, ${created.inspections} demo reports (existing rows untouched). Demo password: ${DEMO_PASSWORD}`,
     );
   } finally {
     await dataSource.destroy();

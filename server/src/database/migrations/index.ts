@@ -1,4 +1,10 @@
 import { CreateFoundation1764633600000 } from './1764633600000-CreateFoundation';
+import { CreateInspections1764700000000 } from './1764700000000-CreateInspections';
+import { CreateNotesAndPhotos1764800000000 } from './1764800000000-CreateNotesAndPhotos';
 
 // Every migration in order, passed as classes; add new ones at the end.
-export const MIGRATIONS = [CreateFoundation1764633600000];
+export const MIGRATIONS = [
+  CreateFoundation1764633600000,
+  CreateInspections1764700000000,
+  CreateNotesAndPhotos1764800000000,
+];

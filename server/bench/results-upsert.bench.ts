@@ -1,0 +1,216 @@
+// Times PUT /api/inspections/:id/results with 150 answers a call against the built server on DATABASE_URL
+// (migrated and seeded here first; both are idempotent), and GET /api/health in the same run.
+// Run: npm run build -w shared && npm run build -w server && DATABASE_URL=... npx tsx server/bench/results-upsert.bench.ts
+import type { ChecklistItem, InspectionResponse, LoginResponse, ResultUpsert, VehicleResponse } from '@yardcall/shared';
+import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
+import { randomUUID } from 'node:crypto';
+import { createServer } from 'node:net';
+import { join } from 'node:path';
+
+export interface BenchFigure {
+  name: string;
+  unit: string;
+  p50: number;
+  p95: number;
+  p99: number;
+  goal: number;
+  ratioToHealth: number;
+}
+
+const SERVER_DIR = join(__dirname, '..');
+const CALLS = 200;
+const WARMUP = 20;
+const ITEMS_PER_CALL = 150;
+const HEALTH_CALLS = 1000;
+const GOAL_P95_MS = 100;
+
+// Plausible readings: inside the limits, so the benchmark measures storing, not error paths.
+const READINGS: Record<string, { value: number; unit: string }> = {
+  tread_depth: { value: 8, unit: 'in/32' },
+  tire_pressure: { value: 105, unit: 'psi' },
+  lining_thickness: { value: 0.5, unit: 'in' },
+  pushrod_stroke: { value: 1.25, unit: 'in' },
+  slack_angle: { value: 90, unit: 'deg' },
+  steering_lash: { value: 1, unit: 'in' },
+  air_pressure: { value: 120, unit: 'psi' },
+  leak_rate: { value: 1, unit: 'psi/min' },
+};
+
+function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const probe = createServer();
+    probe.once('error', reject);
+    probe.listen(0, '127.0.0.1', () => {
+      const address = probe.address();
+      const port = typeof address === 'object' && address ? address.port : 0;
+      probe.close(() => resolve(port));
+    });
+  });
+}
+
+function runScript(script: string, databaseUrl: string): void {
+  const result = spawnSync(process.execPath, [join(SERVER_DIR, 'dist', 'database', script)], {
+    cwd: SERVER_DIR,
+    env: { ...process.env, DATABASE_URL: databaseUrl },
+    stdio: ['ignore', 'ignore', 'inherit'],
+  });
+  if (result.status !== 0) throw new Error(`${script} failed with code ${result.status ?? 'null'}.`);
+}
+
+async function startServer(databaseUrl: string): Promise<{ url: string; child: ChildProcess }> {
+  const port = await freePort();
+  const child = spawn(process.execPath, [join(SERVER_DIR, 'dist', 'main.js')], {
+    cwd: SERVER_DIR,
+    env: {
+      ...process.env,
+      DATABASE_URL: databaseUrl,
+      PORT: String(port),
+      HOST: '127.0.0.1',
+      JWT_SECRET: process.env.JWT_SECRET ?? 'yardcall-bench-secret-0123456789abcdef',
+      CLIENT_DIST: '/nonexistent/yardcall-client-dist',
+    },
+    stdio: ['ignore', 'ignore', 'inherit'],
+  });
+  const url = `http://127.0.0.1:${port}`;
+  const deadline = Date.now() + 60_000;
+  while (Date.now() < deadline) {
+    if (child.exitCode !== null) throw new Error(`The server exited with code ${child.exitCode}.`);
+    try {
+      if ((await fetch(`${url}/api/health`)).ok) return { url, child };
+    } catch {
+      // not listening yet
+    }
+    await new Promise((resolve) => setTimeout(resolve, 250));
+  }
+  child.kill('SIGTERM');
+  throw new Error(`The server did not answer ${url}/api/health within 60 s.`);
+}
+
+async function json<T>(response: Response): Promise<T> {
+  if (!response.ok) throw new Error(`${response.url} answered ${response.status}: ${await response.text()}`);
+  return (await response.json()) as T;
+}
+
+function percentile(sorted: readonly number[], p: number): number {
+  const index = Math.min(sorted.length - 1, Math.max(0, Math.ceil((p / 100) * sorted.length) - 1));
+  return sorted[index] ?? Number.NaN;
+}
+
+function batch(items: readonly ChecklistItem[], at: number): ResultUpsert[] {
+  return items.map((item, index) => {
+    const result: ResultUpsert = {
+      itemKey: item.key,
+      answer: 'pass',
+      answeredAt: new Date(at + index * 4000).toISOString(),
+      clientId: randomUUID(),
+      heard: 'good',
+      confidence: 0.92,
+    };
+    if (item.expects.type === 'measure') {
+      const reading = READINGS[item.expects.quantity] ?? { value: 1, unit: 'in' };
+      result.measurement = { quantity: item.expects.quantity, ...reading };
+      if (item.limitContext?.specPsi) result.measurement.value = item.limitContext.specPsi;
+    }
+    return result;
+  });
+}
+
+export async function runResultsUpsertBench(databaseUrl = process.env.DATABASE_URL): Promise<BenchFigure[]> {
+  if (!databaseUrl)
+    throw new Error('DATABASE_URL is required, e.g. postgres://postgres@127.0.0.1:54400/yardcall_bench.');
+  runScript('migrate.js', databaseUrl);
+  runScript('seed.js', databaseUrl);
+  const { url, child } = await startServer(databaseUrl);
+  try {
+    const { accessToken } = await json<LoginResponse>(
+      await fetch(`${url}/api/auth/login`, {
+        method: 'POST',
+        headers: { 'content-type': 'application/json' },
+        body: JSON.stringify({ email: 'driver@yardcall.test', password: 'yardcall-demo' }),
+      }),
+    );
+    const auth = { authorization: `Bearer ${accessToken}`, 'content-type': 'application/json' };
+    const vehicles = await json<VehicleResponse[]>(await fetch(`${url}/api/vehicles`, { headers: auth }));
+    const power = vehicles.find((v) => v.unitNumber === 'KV-101');
+    const van = vehicles.find((v) => v.unitNumber === 'KV-T21');
+    if (!power || !van) throw new Error('The seeded units KV-101 and KV-T21 are missing.');
+    const startedAt = Date.now() - 3_600_000;
+    // A practice walk-around has every item of a pre-trip and no acknowledgement gate.
+    const startInspection = async (): Promise<InspectionResponse> =>
+      json<InspectionResponse>(
+        await fetch(`${url}/api/inspections`, {
+          method: 'POST',
+          headers: auth,
+          body: JSON.stringify({
+            vehicleIds: [power.id, van.id],
+            kind: 'practice',
+            startedAt: new Date(startedAt).toISOString(),
+            clientId: randomUUID(),
+          }),
+        }),
+      );
+    const put = async (inspection: InspectionResponse, call: number): Promise<number> => {
+      const items = inspection.checklist.items.slice(0, ITEMS_PER_CALL);
+      if (items.length < ITEMS_PER_CALL) throw new Error(`The checklist has only ${items.length} items.`);
+      const body = JSON.stringify({ results: batch(items, startedAt + call * 1000) });
+      const began = performance.now();
+      const response = await fetch(`${url}/api/inspections/${inspection.id}/results`, {
+        method: 'PUT',
+        headers: auth,
+        body,
+      });
+      await response.arrayBuffer();
+      const elapsed = performance.now() - began;
+      if (!response.ok) throw new Error(`PUT results answered ${response.status}.`);
+      return elapsed;
+    };
+
+    // As the brief of the route says: one inspection, every call answers its 150 items again, later,
+    // so all 150 rows are updated each time (the costly path: every row rewritten, every index touched).
+    const inspection = await startInspection();
+    for (let call = 0; call < WARMUP; call += 1) await put(inspection, call);
+    const again: number[] = [];
+    for (let call = WARMUP; call < WARMUP + CALLS; call += 1) again.push(await put(inspection, call));
+
+    // As a walk-around syncs: 150 first answers of an inspection each call (inserts). Started outside the timing.
+    const fresh: InspectionResponse[] = [];
+    for (let n = 0; n < CALLS; n += 1) fresh.push(await startInspection());
+    const first: number[] = [];
+    for (const [n, each] of fresh.entries()) first.push(await put(each, n));
+
+    const healthBegan = performance.now();
+    for (let call = 0; call < HEALTH_CALLS; call += 1) await (await fetch(`${url}/api/health`)).arrayBuffer();
+    const healthPerSecond = HEALTH_CALLS / ((performance.now() - healthBegan) / 1000);
+    const round = (n: number) => Math.round(n * 100) / 100;
+    const figure = (name: string, timings: readonly number[]): BenchFigure => {
+      const sorted = [...timings].sort((a, b) => a - b);
+      const perSecond = timings.length / (timings.reduce((sum, ms) => sum + ms, 0) / 1000);
+      return {
+        name,
+        unit: 'ms',
+        p50: round(percentile(sorted, 50)),
+        p95: round(percentile(sorted, 95)),
+        p99: round(percentile(sorted, 99)),
+        goal: GOAL_P95_MS,
+        ratioToHealth: Math.round((perSecond / healthPerSecond) * 1000) / 1000,
+      };
+    };
+    return [
+      figure(`PUT /api/inspections/:id/results, ${ITEMS_PER_CALL} items answered again`, again),
+      figure(`PUT /api/inspections/:id/results, ${ITEMS_PER_CALL} first answers`, first),
+    ];
+  } finally {
+    child.kill('SIGTERM');
+  }
+}
+
+if (require.main === module) {
+  runResultsUpsertBench()
+    .then((figures) => {
+      for (const figure of figures) console.log(JSON.stringify(figure));
+    })
+    .catch((error: unknown) => {
+      console.error(error instanceof Error ? error.message : error);
+      process.exit(1);
+    });
+}

@@ -1,0 +1,260 @@
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import {
+  INSPECTION_KINDS,
+  INSPECTION_STATUSES,
+  LOCALES,
+  type AcknowledgeRequest,
+  type Checklist,
+  type CreateInspectionRequest,
+  type InspectionKind,
+  type InspectionListItem,
+  type InspectionPage,
+  type InspectionResponse,
+  type InspectionStatus,
+  type InspectionSummary,
+  type Locale,
+  type PendingAcknowledgement,
+  type PhotoResponse,
+  type SubmitInspectionRequest,
+  type VoiceNoteResponse,
+} from '@yardcall/shared';
+import { Transform, Type } from 'class-transformer';
+import {
+  ArrayMaxSize,
+  ArrayMinSize,
+  ArrayUnique,
+  IsArray,
+  IsBoolean,
+  IsIn,
+  IsInt,
+  IsISO8601,
+  IsNotEmpty,
+  IsObject,
+  IsOptional,
+  IsString,
+  IsUUID,
+  Max,
+  MaxLength,
+  Min,
+  ValidateNested,
+} from 'class-validator';
+import { DefectResponseDto } from '../../defects/dto/defect.dto';
+import { InspectionVehicleDto, PersonRefDto } from './person-ref.dto';
+import { CLIENT_ID_MAX, ItemResultResponseDto } from './result.dto';
+import { SignatureInputDto, SignatureResponseDto } from './signature.dto';
+
+export const PAGE_LIMIT_DEFAULT = 25;
+export const PAGE_LIMIT_MAX = 100;
+// A power unit and up to three trailers (the checklist engine's own bound).
+const UNITS_MAX = 4;
+const ISO_TIME = 'an ISO 8601 time, e.g. 2026-12-01T06:15:00.000Z';
+
+export class CreateInspectionDto implements CreateInspectionRequest {
+  @ApiProperty({ type: [String], format: 'uuid', description: 'Power unit first, then trailer(s).' })
+  @IsArray({ message: 'Send the vehicle ids as a list: the power unit first, then its trailers.' })
+  @ArrayMinSize(1, { message: 'Choose at least one vehicle.' })
+  @ArrayMaxSize(UNITS_MAX, { message: `Choose at most ${UNITS_MAX} vehicles: a power unit and its trailers.` })
+  @ArrayUnique({ message: 'Each vehicle may appear only once.' })
+  @IsUUID('all', { each: true, message: 'Each vehicle id is a UUID.' })
+  vehicleIds: string[];
+
+  @ApiProperty({ enum: INSPECTION_KINDS })
+  @IsIn(INSPECTION_KINDS, { message: `Choose a kind: ${INSPECTION_KINDS.join(', ')}.` })
+  kind: InspectionKind;
+
+  @ApiProperty({ format: 'date-time' })
+  @IsISO8601({ strict: true }, { message: `Send startedAt as ${ISO_TIME}.` })
+  startedAt: string;
+
+  @ApiPropertyOptional({ example: 'Kestrel Valley yard, bay 3' })
+  @IsOptional()
+  @IsString({ message: 'Write the location as text.' })
+  @MaxLength(200, { message: 'Keep the location under 200 characters.' })
+  location?: string;
+
+  @ApiPropertyOptional({ enum: LOCALES, description: "Defaults to the driver's language." })
+  @IsOptional()
+  @IsIn(LOCALES, { message: `Choose a language: ${LOCALES.join(', ')}.` })
+  locale?: Locale;
+
+  @ApiProperty({ description: 'Made by the client: a retried create with the same id returns the same inspection.' })
+  @IsString({ message: 'Send the client id as text.' })
+  @IsNotEmpty({ message: 'Send a client id.' })
+  @MaxLength(CLIENT_ID_MAX, { message: `A client id has at most ${CLIENT_ID_MAX} characters.` })
+  clientId: string;
+}
+
+export class SubmitInspectionDto implements SubmitInspectionRequest {
+  @ApiProperty({ type: SignatureInputDto })
+  @IsObject({ message: 'Sign with {name, drawing?}.' })
+  @ValidateNested()
+  @Type(() => SignatureInputDto)
+  signature: SignatureInputDto;
+
+  @ApiPropertyOptional({ example: 412_803 })
+  @IsOptional()
+  @IsInt({ message: 'Send the odometer reading as a whole number.' })
+  @Min(0, { message: 'The odometer reading cannot be negative.' })
+  @Max(99_999_999, { message: 'The odometer reading has at most 8 digits.' })
+  odometer?: number;
+}
+
+export class AcknowledgeDto implements AcknowledgeRequest {
+  @ApiProperty({ type: SignatureInputDto })
+  @IsObject({ message: 'Sign with {name, drawing?}.' })
+  @ValidateNested()
+  @Type(() => SignatureInputDto)
+  signature: SignatureInputDto;
+}
+
+// Query strings arrive as text: "true"/"false" become booleans, anything else fails validation.
+function toBoolean({ value }: { value: unknown }): unknown {
+  if (value === 'true') return true;
+  if (value === 'false') return false;
+  return value;
+}
+
+export class ListInspectionsQuery {
+  @ApiPropertyOptional({ format: 'uuid' })
+  @IsOptional()
+  @IsUUID('all', { message: 'vehicleId must be a vehicle id (a UUID).' })
+  vehicleId?: string;
+
+  @ApiPropertyOptional({ format: 'uuid' })
+  @IsOptional()
+  @IsUUID('all', { message: 'driverId must be a user id (a UUID).' })
+  driverId?: string;
+
+  @ApiPropertyOptional({ enum: INSPECTION_KINDS })
+  @IsOptional()
+  @IsIn(INSPECTION_KINDS, { message: `Choose a kind: ${INSPECTION_KINDS.join(', ')}.` })
+  kind?: InspectionKind;
+
+  @ApiPropertyOptional({ enum: INSPECTION_STATUSES })
+  @IsOptional()
+  @IsIn(INSPECTION_STATUSES, { message: `Choose a status: ${INSPECTION_STATUSES.join(', ')}.` })
+  status?: InspectionStatus;
+
+  @ApiPropertyOptional({ format: 'date-time', description: 'Started at or after this time.' })
+  @IsOptional()
+  @IsISO8601({ strict: true }, { message: `Send from as ${ISO_TIME}.` })
+  from?: string;
+
+  @ApiPropertyOptional({ format: 'date-time', description: 'Started before this time.' })
+  @IsOptional()
+  @IsISO8601({ strict: true }, { message: `Send to as ${ISO_TIME}.` })
+  to?: string;
+
+  @ApiPropertyOptional({ description: 'Only reports with defects (true) or without (false).' })
+  @IsOptional()
+  @Transform(toBoolean)
+  @IsBoolean({ message: 'hasDefects is true or false.' })
+  hasDefects?: boolean;
+
+  @ApiPropertyOptional({ description: 'The nextCursor of the previous page.' })
+  @IsOptional()
+  @IsString({ message: 'Send the cursor as the text the previous page gave.' })
+  @MaxLength(200, { message: 'This cursor is not one the list gave: start again without it.' })
+  cursor?: string;
+
+  @ApiPropertyOptional({ default: PAGE_LIMIT_DEFAULT, minimum: 1, maximum: PAGE_LIMIT_MAX })
+  @IsOptional()
+  @Type(() => Number)
+  @IsInt({ message: `limit is a whole number from 1 to ${PAGE_LIMIT_MAX}.` })
+  @Min(1, { message: `limit is a whole number from 1 to ${PAGE_LIMIT_MAX}.` })
+  @Max(PAGE_LIMIT_MAX, { message: `limit is a whole number from 1 to ${PAGE_LIMIT_MAX}.` })
+  limit?: number;
+}
+
+export class InspectionListItemDto implements InspectionListItem {
+  @ApiProperty({ format: 'uuid' })
+  id: string;
+
+  @ApiProperty({ enum: INSPECTION_KINDS })
+  kind: InspectionKind;
+
+  @ApiProperty({ enum: INSPECTION_STATUSES })
+  status: InspectionStatus;
+
+  @ApiProperty({ format: 'date-time' })
+  startedAt: string;
+
+  @ApiProperty({ type: String, format: 'date-time', nullable: true })
+  submittedAt: string | null;
+
+  @ApiProperty({ type: PersonRefDto })
+  driver: PersonRefDto;
+
+  @ApiProperty({ type: [InspectionVehicleDto] })
+  vehicles: InspectionVehicleDto[];
+
+  @ApiProperty()
+  defectCount: number;
+
+  @ApiProperty({ description: 'Answered faster than the walk-around usually takes; asks a supervisor to look.' })
+  rushed: boolean;
+}
+
+export class InspectionPageDto implements InspectionPage {
+  @ApiProperty({ type: [InspectionListItemDto] })
+  items: InspectionListItemDto[];
+
+  @ApiProperty({ type: String, nullable: true, description: 'Pass as cursor for the next page; null on the last.' })
+  nextCursor: string | null;
+}
+
+export class InspectionResponseDto extends InspectionListItemDto implements InspectionResponse {
+  @ApiProperty()
+  clientId: string;
+
+  @ApiProperty({ enum: LOCALES })
+  locale: Locale;
+
+  @ApiProperty({ type: String, nullable: true })
+  location: string | null;
+
+  @ApiProperty({ type: Number, nullable: true })
+  odometer: number | null;
+
+  @ApiProperty({
+    type: 'object',
+    additionalProperties: true,
+    description: 'Built by the server from the vehicles as configured when the walk-around began.',
+  })
+  checklist: Checklist;
+
+  @ApiProperty({ type: [ItemResultResponseDto] })
+  results: ItemResultResponseDto[];
+
+  @ApiProperty({ type: 'array', items: { type: 'object' }, description: 'Voice notes at their items.' })
+  notes: VoiceNoteResponse[];
+
+  @ApiProperty({ type: 'array', items: { type: 'object' } })
+  photos: PhotoResponse[];
+
+  @ApiProperty({ type: [DefectResponseDto] })
+  defects: DefectResponseDto[];
+
+  @ApiProperty({ type: [SignatureResponseDto] })
+  signatures: SignatureResponseDto[];
+
+  @ApiProperty({ type: 'object', additionalProperties: true, description: 'Defects, gaps, zone times, rushed flag.' })
+  summary: InspectionSummary;
+}
+
+export class PendingAcknowledgementDto implements PendingAcknowledgement {
+  @ApiProperty({ format: 'uuid' })
+  inspectionId: string;
+
+  @ApiProperty({ type: InspectionVehicleDto })
+  vehicle: InspectionVehicleDto;
+
+  @ApiProperty({ format: 'date-time' })
+  submittedAt: string;
+
+  @ApiProperty({ type: PersonRefDto })
+  driver: PersonRefDto;
+
+  @ApiProperty({ type: [DefectResponseDto] })
+  defects: DefectResponseDto[];
+}

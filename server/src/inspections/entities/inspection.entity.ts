@@ -1,0 +1,94 @@
+import {
+  INSPECTION_KINDS,
+  INSPECTION_STATUSES,
+  type InspectionKind,
+  type InspectionStatus,
+  type Locale,
+  type VehicleConfig,
+  type VehicleKind,
+} from '@yardcall/shared';
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  Index,
+  JoinColumn,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+  UpdateDateColumn,
+} from 'typeorm';
+import { Organization } from '../../organizations/entities/organization.entity';
+import { User } from '../../users/entities/user.entity';
+
+// The vehicles as they were configured when the walk-around began: the checklist is rebuilt from this,
+// so editing a vehicle later never changes an inspection's items.
+export interface InspectionVehicleSnapshot {
+  id: string;
+  unitNumber: string;
+  kind: VehicleKind;
+  config: VehicleConfig;
+}
+
+// The list's keyset indexes sort newest first; their DESC columns live in the migration only.
+@Index('IDX_inspections_org_started', { synchronize: false })
+@Index('IDX_inspections_org_driver_started', { synchronize: false })
+@Index('IDX_inspections_org_kind_started', { synchronize: false })
+@Index('UQ_inspections_driver_client', ['driverId', 'clientId'], { unique: true })
+@Entity({ name: 'inspections' })
+export class Inspection {
+  @PrimaryGeneratedColumn('uuid')
+  id: string;
+
+  @Column({ name: 'organization_id', type: 'uuid' })
+  organizationId: string;
+
+  @ManyToOne(() => Organization, { onDelete: 'RESTRICT', nullable: false })
+  @JoinColumn({ name: 'organization_id' })
+  organization?: Organization;
+
+  @Column({ name: 'driver_id', type: 'uuid' })
+  driverId: string;
+
+  @ManyToOne(() => User, { onDelete: 'RESTRICT', nullable: false })
+  @JoinColumn({ name: 'driver_id' })
+  driver?: User;
+
+  @Column({ type: 'enum', enum: [...INSPECTION_KINDS], enumName: 'inspection_kind' })
+  kind: InspectionKind;
+
+  @Column({ type: 'enum', enum: [...INSPECTION_STATUSES], enumName: 'inspection_status', default: 'in_progress' })
+  status: InspectionStatus;
+
+  @Column({ type: 'varchar', length: 5 })
+  locale: Locale;
+
+  @Column({ name: 'client_id', type: 'varchar', length: 64 })
+  clientId: string;
+
+  @Column({ name: 'started_at', type: 'timestamptz' })
+  startedAt: Date;
+
+  @Column({ name: 'submitted_at', type: 'timestamptz', nullable: true })
+  submittedAt: Date | null;
+
+  @Column({ type: 'integer', nullable: true })
+  odometer: number | null;
+
+  @Column({ type: 'varchar', length: 200, nullable: true })
+  location: string | null;
+
+  @Column({ type: 'jsonb' })
+  vehicles: InspectionVehicleSnapshot[];
+
+  @Column({ type: 'boolean', default: false })
+  rushed: boolean;
+
+  @Column({ name: 'defect_count', type: 'integer', default: 0 })
+  defectCount: number;
+
+  @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
+  createdAt: Date;
+
+  @UpdateDateColumn({ name: 'updated_at', type: 'timestamptz' })
+  updatedAt: Date;
+}

@@ -1,0 +1,62 @@
+import { ANSWERS, VERDICTS, type Answer, type Quantity, type Verdict } from '@yardcall/shared';
+import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import { Inspection } from './inspection.entity';
+
+// One answer per checklist item (the latest); the measurement is stored in its canonical unit with the
+// verdict and limit the server worked out, whatever the client said.
+@Index('UQ_item_results_inspection_item', ['inspectionId', 'itemKey'], { unique: true })
+@Index('UQ_item_results_inspection_client', ['inspectionId', 'clientId'], { unique: true })
+@Entity({ name: 'item_results' })
+export class ItemResult {
+  @PrimaryGeneratedColumn('uuid')
+  id: string;
+
+  @Column({ name: 'inspection_id', type: 'uuid' })
+  inspectionId: string;
+
+  @ManyToOne(() => Inspection, { onDelete: 'CASCADE', nullable: false })
+  @JoinColumn({ name: 'inspection_id' })
+  inspection?: Inspection;
+
+  @Column({ name: 'item_key', type: 'varchar', length: 160 })
+  itemKey: string;
+
+  @Column({ name: 'client_id', type: 'varchar', length: 64 })
+  clientId: string;
+
+  @Column({ type: 'enum', enum: [...ANSWERS], enumName: 'item_answer' })
+  answer: Answer;
+
+  @Column({ name: 'measurement_quantity', type: 'varchar', length: 32, nullable: true })
+  measurementQuantity: Quantity | null;
+
+  @Column({ name: 'measurement_value', type: 'double precision', nullable: true })
+  measurementValue: number | null;
+
+  @Column({ name: 'measurement_unit', type: 'varchar', length: 16, nullable: true })
+  measurementUnit: string | null;
+
+  @Column({ type: 'enum', enum: [...VERDICTS], enumName: 'item_verdict', nullable: true })
+  verdict: Verdict | null;
+
+  @Column({ name: 'limit_value', type: 'double precision', nullable: true })
+  limitValue: number | null;
+
+  @Column({ name: 'limit_unit', type: 'varchar', length: 16, nullable: true })
+  limitUnit: string | null;
+
+  @Column({ name: 'limit_source', type: 'varchar', length: 120, nullable: true })
+  limitSource: string | null;
+
+  @Column({ type: 'text', nullable: true })
+  detail: string | null;
+
+  @Column({ type: 'text', nullable: true })
+  heard: string | null;
+
+  @Column({ type: 'real', nullable: true })
+  confidence: number | null;
+
+  @Column({ name: 'answered_at', type: 'timestamptz' })
+  answeredAt: Date;
+}

@@ -1,0 +1,169 @@
+import { Body, Controller, Get, HttpCode, Post, Put, Query, Res } from '@nestjs/common';
+import {
+  ApiBadRequestResponse,
+  ApiBearerAuth,
+  ApiConflictResponse,
+  ApiCreatedResponse,
+  ApiNoContentResponse,
+  ApiNotFoundResponse,
+  ApiOkResponse,
+  ApiOperation,
+  ApiTags,
+} from '@nestjs/swagger';
+import type {
+  InspectionPage,
+  InspectionResponse,
+  PendingAcknowledgement,
+  PutResultsResponse,
+  SignatureResponse,
+} from '@yardcall/shared';
+import type { Response } from 'express';
+import type { AuthUser } from '../auth/auth-user';
+import { CurrentUser } from '../auth/decorators/current-user.decorator';
+import { Roles } from '../auth/decorators/roles.decorator';
+import { ApiErrorBodyDto } from '../common/dto/api-error-body.dto';
+import { UuidParam } from '../common/uuid-param';
+import { AcknowledgementsService } from './acknowledgements.service';
+import {
+  AcknowledgeDto,
+  CreateInspectionDto,
+  InspectionPageDto,
+  InspectionResponseDto,
+  ListInspectionsQuery,
+  PendingAcknowledgementDto,
+  SubmitInspectionDto,
+} from './dto/inspection.dto';
+import { PutResultsDto, PutResultsResponseDto } from './dto/result.dto';
+import { SignatureResponseDto } from './dto/signature.dto';
+import { InspectionsService } from './inspections.service';
+
+@ApiTags('inspections')
+@ApiBearerAuth()
+@Controller('inspections')
+export class InspectionsController {
+  constructor(
+    private readonly inspections: InspectionsService,
+    private readonly acknowledgements: AcknowledgementsService,
+  ) {}
+
+  @Post()
+  @Roles('driver')
+  @ApiOperation({
+    summary:
+      'Start a walk-around of a power unit and its trailers; answers the checklist the server built. A retry with the same clientId answers the same inspection (200).',
+  })
+  @ApiCreatedResponse({ type: InspectionResponseDto })
+  @ApiOkResponse({ type: InspectionResponseDto, description: 'This clientId was already used: the same inspection.' })
+  @ApiBadRequestResponse({ type: ApiErrorBodyDto, description: 'Each wrong field is named; a wrong combination too.' })
+  @ApiNotFoundResponse({ type: ApiErrorBodyDto })
+  @ApiConflictResponse({ type: ApiErrorBodyDto, description: 'The last report waits for the next driver’s review.' })
+  async create(
+    @CurrentUser() user: AuthUser,
+    @Body() body: CreateInspectionDto,
+    @Res({ passthrough: true }) response: Response,
+  ): Promise<InspectionResponse> {
+    const { created, inspection } = await this.inspections.create(user, body);
+    response.status(created ? 201 : 200);
+    return inspection;
+  }
+
+  @Get()
+  @ApiOperation({
+    summary:
+      'Inspections newest first, one page at a time (cursor). Drivers see their own, trainers practice ones, the others all of the organisation.',
+  })
+  @ApiOkResponse({ type: InspectionPageDto })
+  @ApiBadRequestResponse({ type: ApiErrorBodyDto })
+  list(@CurrentUser() user: AuthUser, @Query() query: ListInspectionsQuery): Promise<InspectionPage> {
+    return this.inspections.list(user, query);
+  }
+
+  @Get(':id')
+  @ApiOperation({ summary: 'One inspection: checklist, answers, notes, photos, defects, signatures and summary.' })
+  @ApiOkResponse({ type: InspectionResponseDto })
+  @ApiNotFoundResponse({ type: ApiErrorBodyDto })
+  get(@CurrentUser() user: AuthUser, @UuidParam('id') id: string): Promise<InspectionResponse> {
+    return this.inspections.get(user, id);
+  }
+
+  @Put(':id/results')
+  @Roles('driver')
+  @ApiOperation({
+    summary:
+      'Store a batch of answers (idempotent on clientId; the latest answeredAt of an item wins). The server re-evaluates every measurement.',
+  })
+  @ApiOkResponse({ type: PutResultsResponseDto })
+  @ApiBadRequestResponse({ type: ApiErrorBodyDto, description: 'Item keys not on the checklist are named.' })
+  @ApiNotFoundResponse({ type: ApiErrorBodyDto })
+  @ApiConflictResponse({ type: ApiErrorBodyDto, description: 'The report is submitted.' })
+  async putResults(
+    @CurrentUser() user: AuthUser,
+    @UuidParam('id') id: string,
+    @Body() body: PutResultsDto,
+  ): Promise<PutResultsResponse> {
+    return { results: await this.inspections.putResults(user, id, body) };
+  }
+
+  @Post(':id/submit')
+  @Roles('driver')
+  @HttpCode(200)
+  @ApiOperation({
+    summary:
+      'Sign and submit the report: opens a defect per finding and takes vehicles with a safety defect out of service.',
+  })
+  @ApiOkResponse({ type: InspectionResponseDto })
+  @ApiBadRequestResponse({ type: ApiErrorBodyDto })
+  @ApiNotFoundResponse({ type: ApiErrorBodyDto })
+  @ApiConflictResponse({ type: ApiErrorBodyDto, description: 'Already submitted.' })
+  submit(
+    @CurrentUser() user: AuthUser,
+    @UuidParam('id') id: string,
+    @Body() body: SubmitInspectionDto,
+  ): Promise<InspectionResponse> {
+    return this.inspections.submit(user, id, body);
+  }
+
+  @Post(':id/acknowledge')
+  @Roles('driver')
+  @ApiOperation({ summary: "The next driver's signature: they reviewed the report and its repair certifications." })
+  @ApiCreatedResponse({ type: SignatureResponseDto })
+  @ApiBadRequestResponse({ type: ApiErrorBodyDto })
+  @ApiNotFoundResponse({ type: ApiErrorBodyDto })
+  @ApiConflictResponse({ type: ApiErrorBodyDto, description: 'Nothing waits for an acknowledgement.' })
+  acknowledge(
+    @CurrentUser() user: AuthUser,
+    @UuidParam('id') id: string,
+    @Body() body: AcknowledgeDto,
+  ): Promise<SignatureResponse> {
+    return this.acknowledgements.acknowledge(user, id, body);
+  }
+}
+
+@ApiTags('inspections')
+@ApiBearerAuth()
+@Controller('vehicles')
+export class VehicleAcknowledgementsController {
+  constructor(private readonly acknowledgements: AcknowledgementsService) {}
+
+  @Get(':id/pending-acknowledgement')
+  @Roles('driver')
+  @ApiOperation({
+    summary:
+      "The vehicle's last report when a mechanic certified its defects and no driver has acknowledged that yet; 204 when nothing waits.",
+  })
+  @ApiOkResponse({ type: PendingAcknowledgementDto })
+  @ApiNoContentResponse({ description: 'Nothing waits for an acknowledgement.' })
+  @ApiNotFoundResponse({ type: ApiErrorBodyDto })
+  async pending(
+    @CurrentUser() user: AuthUser,
+    @UuidParam('id') id: string,
+    @Res({ passthrough: true }) response: Response,
+  ): Promise<PendingAcknowledgement | undefined> {
+    const pending = await this.acknowledgements.pending(user, id);
+    if (!pending) {
+      response.status(204);
+      return undefined;
+    }
+    return pending;
+  }
+}

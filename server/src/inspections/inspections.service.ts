@@ -1,0 +1,552 @@
+import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import { InjectRepository } from '@nestjs/typeorm';
+import {
+  ChecklistError,
+  DEFAULT_DISPLAY_SETTINGS,
+  LimitError,
+  buildChecklist,
+  canonicalUnitOf,
+  evaluateMeasurement,
+  summarizeInspection,
+  toCanonical,
+  type Checklist,
+  type ChecklistItem,
+  type FieldProblem,
+  type InspectionPage,
+  type InspectionResponse,
+  type ItemResultResponse,
+  type Verdict,
+} from '@yardcall/shared';
+import { DataSource, In, Repository } from 'typeorm';
+import type { AuthUser } from '../auth/auth-user';
+import { ApiValidationException } from '../common/api-validation.exception';
+import { isUniqueViolation } from '../common/database-errors';
+import { toDefectResponses } from '../defects/defect-view';
+import { Defect } from '../defects/entities/defect.entity';
+import { refreshVehicleStatus } from '../defects/vehicle-status';
+import { User } from '../users/entities/user.entity';
+import { Vehicle } from '../vehicles/entities/vehicle.entity';
+import { AcknowledgementsService } from './acknowledgements.service';
+import { decodeCursor, encodeCursor } from './cursor';
+import {
+  PAGE_LIMIT_DEFAULT,
+  type CreateInspectionDto,
+  type ListInspectionsQuery,
+  type SubmitInspectionDto,
+} from './dto/inspection.dto';
+import type { PutResultsDto, ResultUpsertDto } from './dto/result.dto';
+import { InspectionVehicle } from './entities/inspection-vehicle.entity';
+import { Inspection, type InspectionVehicleSnapshot } from './entities/inspection.entity';
+import { ItemResult } from './entities/item-result.entity';
+import { Signature } from './entities/signature.entity';
+import { InspectionAttachmentsRegistry } from './inspection-attachments';
+import { toListItem, toResultResponse, toSharedResult, toSignatureResponse } from './inspection-view';
+import { driverStatement } from './statements';
+
+export const SUBMITTED_MESSAGE =
+  "This report is submitted and signed, so it can no longer be changed: changes now go through the mechanic's repair certification and the next driver's acknowledgement.";
+const NOT_FOUND = 'No inspection with this id in your organisation.';
+const CLIENT_ID_INDEX = 'UQ_inspections_driver_client';
+// Checklists are rebuilt from the stored snapshot, which never changes: keep the recent ones.
+const CHECKLIST_CACHE_MAX = 500;
+
+interface BuiltChecklist {
+  checklist: Checklist;
+  byKey: Map<string, ChecklistItem>;
+}
+
+// One answer, ready for the database: measurement in the canonical unit, verdict and limit from the server.
+interface PreparedResult {
+  input: ResultUpsertDto;
+  quantity: string | null;
+  value: number | null;
+  unit: string | null;
+  verdict: Verdict | null;
+  limitValue: number | null;
+  limitUnit: string | null;
+  limitSource: string | null;
+}
+
+interface ItemResultRow {
+  id: string;
+  inspection_id: string;
+  item_key: string;
+  client_id: string;
+  answer: ItemResult['answer'];
+  measurement_quantity: ItemResult['measurementQuantity'];
+  measurement_value: number | null;
+  measurement_unit: string | null;
+  verdict: Verdict | null;
+  limit_value: number | null;
+  limit_unit: string | null;
+  limit_source: string | null;
+  detail: string | null;
+  heard: string | null;
+  confidence: number | null;
+  answered_at: Date;
+}
+
+// One statement per batch: unnest the columns, upsert on (inspection, item key) where the stored answer
+// is older (a retried answer, same time and client id, writes nothing), and read back the stored row of
+// every key sent (the CTE's own rows first: a plain read in the same statement would not see them).
+// The FOR SHARE guard makes a batch racing a submit wait, then write nothing.
+const UPSERT_SQL = `
+WITH input AS (
+  SELECT * FROM unnest($2::text[], $3::text[], $4::item_answer[], $5::text[], $6::float8[], $7::text[],
+                       $8::item_verdict[], $9::float8[], $10::text[], $11::text[], $12::text[], $13::text[],
+                       $14::real[], $15::timestamptz[])
+    AS t(item_key, client_id, answer, measurement_quantity, measurement_value, measurement_unit, verdict,
+         limit_value, limit_unit, limit_source, detail, heard, confidence, answered_at)
+), upserted AS (
+  INSERT INTO item_results AS r (inspection_id, item_key, client_id, answer, measurement_quantity,
+    measurement_value, measurement_unit, verdict, limit_value, limit_unit, limit_source, detail, heard,
+    confidence, answered_at)
+  SELECT $1::uuid, item_key, client_id, answer, measurement_quantity, measurement_value, measurement_unit,
+         verdict, limit_value, limit_unit, limit_source, detail, heard, confidence, answered_at
+  FROM input
+  WHERE EXISTS (SELECT 1 FROM inspections WHERE id = $1::uuid AND status = 'in_progress' FOR SHARE)
+  ON CONFLICT (inspection_id, item_key) DO UPDATE SET
+    client_id = EXCLUDED.client_id, answer = EXCLUDED.answer,
+    measurement_quantity = EXCLUDED.measurement_quantity, measurement_value = EXCLUDED.measurement_value,
+    measurement_unit = EXCLUDED.measurement_unit, verdict = EXCLUDED.verdict,
+    limit_value = EXCLUDED.limit_value, limit_unit = EXCLUDED.limit_unit, limit_source = EXCLUDED.limit_source,
+    detail = EXCLUDED.detail, heard = EXCLUDED.heard, confidence = EXCLUDED.confidence,
+    answered_at = EXCLUDED.answered_at
+  WHERE r.answered_at < EXCLUDED.answered_at
+     OR (r.answered_at = EXCLUDED.answered_at AND r.client_id <> EXCLUDED.client_id)
+  RETURNING r.*
+)
+SELECT * FROM upserted
+UNION ALL
+SELECT s.* FROM item_results s
+WHERE s.inspection_id = $1::uuid AND s.item_key = ANY($2::text[])
+  AND NOT EXISTS (SELECT 1 FROM upserted u WHERE u.item_key = s.item_key)`;
+
+function rowToEntity(row: ItemResultRow): ItemResult {
+  return Object.assign(new ItemResult(), {
+    id: row.id,
+    inspectionId: row.inspection_id,
+    itemKey: row.item_key,
+    clientId: row.client_id,
+    answer: row.answer,
+    measurementQuantity: row.measurement_quantity,
+    measurementValue: row.measurement_value,
+    measurementUnit: row.measurement_unit,
+    verdict: row.verdict,
+    limitValue: row.limit_value,
+    limitUnit: row.limit_unit,
+    limitSource: row.limit_source,
+    detail: row.detail,
+    heard: row.heard,
+    confidence: row.confidence,
+    answeredAt: row.answered_at,
+  });
+}
+
+function timeOf(iso: string): number {
+  return Date.parse(iso);
+}
+
+@Injectable()
+export class InspectionsService {
+  private readonly checklists = new Map<string, BuiltChecklist>();
+
+  constructor(
+    @InjectRepository(Inspection) private readonly inspections: Repository<Inspection>,
+    @InjectRepository(Vehicle) private readonly vehicles: Repository<Vehicle>,
+    @InjectRepository(User) private readonly users: Repository<User>,
+    private readonly dataSource: DataSource,
+    private readonly attachments: InspectionAttachmentsRegistry,
+    private readonly acknowledgements: AcknowledgementsService,
+  ) {}
+
+  async create(
+    user: AuthUser,
+    dto: CreateInspectionDto,
+  ): Promise<{ created: boolean; inspection: InspectionResponse }> {
+    const existing = await this.inspections.findOneBy({ driverId: user.id, clientId: dto.clientId });
+    if (existing) return { created: false, inspection: await this.assemble(existing) };
+
+    const found = await this.vehicles.findBy({ id: In(dto.vehicleIds), organizationId: user.organizationId });
+    const byId = new Map(found.map((v) => [v.id, v]));
+    const missing = dto.vehicleIds.find((id) => !byId.has(id));
+    if (missing) throw new NotFoundException(`No vehicle with id ${missing} in your organisation.`);
+    const snapshot: InspectionVehicleSnapshot[] = dto.vehicleIds.map((id) => {
+      const vehicle = byId.get(id) as Vehicle;
+      return { id: vehicle.id, unitNumber: vehicle.unitNumber, kind: vehicle.kind, config: vehicle.config };
+    });
+    const driver = await this.users.findOne({ select: { id: true, settings: true }, where: { id: user.id } });
+    const locale = dto.locale ?? driver?.settings.locale ?? DEFAULT_DISPLAY_SETTINGS.locale;
+    let checklist: Checklist;
+    try {
+      checklist = buildChecklist(snapshot, dto.kind, locale);
+    } catch (error) {
+      if (error instanceof ChecklistError) {
+        throw new ApiValidationException([{ field: 'vehicleIds', message: error.message }]);
+      }
+      throw error;
+    }
+    if (dto.kind === 'pre_trip') {
+      for (const vehicle of snapshot) {
+        const pending = await this.acknowledgements.pendingInspectionFor(
+          this.dataSource.manager,
+          user.organizationId,
+          vehicle.id,
+        );
+        if (pending) {
+          throw new ConflictException(
+            `Review and sign the last report of unit ${vehicle.unitNumber} first: a mechanic certified its defects, and the next driver acknowledges that before the pre-trip.`,
+          );
+        }
+      }
+    }
+
+    let inspection: Inspection;
+    try {
+      inspection = await this.dataSource.transaction(async (manager) => {
+        const saved = await manager.save(
+          manager.create(Inspection, {
+            organizationId: user.organizationId,
+            driverId: user.id,
+            kind: dto.kind,
+            status: 'in_progress',
+            locale,
+            clientId: dto.clientId,
+            startedAt: new Date(dto.startedAt),
+            submittedAt: null,
+            odometer: null,
+            location: dto.location?.trim() || null,
+            vehicles: snapshot,
+            rushed: false,
+            defectCount: 0,
+          }),
+        );
+        await manager.insert(
+          InspectionVehicle,
+          snapshot.map((v, position) => ({ inspectionId: saved.id, position, vehicleId: v.id })),
+        );
+        return saved;
+      });
+    } catch (error) {
+      // Two tries of the same create raced: the first one won, answer with it.
+      if (!isUniqueViolation(error, CLIENT_ID_INDEX)) throw error;
+      const winner = await this.inspections.findOneByOrFail({ driverId: user.id, clientId: dto.clientId });
+      return { created: false, inspection: await this.assemble(winner) };
+    }
+    this.remember(inspection.id, checklist);
+    return { created: true, inspection: await this.assemble(inspection) };
+  }
+
+  async list(user: AuthUser, query: ListInspectionsQuery): Promise<InspectionPage> {
+    const limit = query.limit ?? PAGE_LIMIT_DEFAULT;
+    const builder = this.inspections
+      .createQueryBuilder('inspection')
+      .innerJoin('inspection.driver', 'driver')
+      .addSelect(['driver.id', 'driver.name'])
+      .where('inspection.organization_id = :organizationId', { organizationId: user.organizationId });
+    // Drivers see their own walk-arounds; trainers their students' practice ones; the shop and the office all.
+    if (user.role === 'driver') builder.andWhere('inspection.driver_id = :self', { self: user.id });
+    if (user.role === 'trainer') builder.andWhere("inspection.kind = 'practice'");
+    if (query.driverId) builder.andWhere('inspection.driver_id = :driverId', { driverId: query.driverId });
+    if (query.kind) builder.andWhere('inspection.kind = :kind', { kind: query.kind });
+    if (query.status) builder.andWhere('inspection.status = :status', { status: query.status });
+    if (query.from) builder.andWhere('inspection.started_at >= :from', { from: new Date(query.from) });
+    if (query.to) builder.andWhere('inspection.started_at < :to', { to: new Date(query.to) });
+    if (query.hasDefects !== undefined) {
+      builder.andWhere(query.hasDefects ? 'inspection.defect_count > 0' : 'inspection.defect_count = 0');
+    }
+    if (query.vehicleId) {
+      builder.andWhere(
+        'EXISTS (SELECT 1 FROM inspection_vehicles iv WHERE iv.inspection_id = inspection.id AND iv.vehicle_id = :vehicleId)',
+        { vehicleId: query.vehicleId },
+      );
+    }
+    if (query.cursor) {
+      const cursor = decodeCursor(query.cursor);
+      builder.andWhere('(inspection.started_at, inspection.id) < (:cursorAt, :cursorId)', {
+        cursorAt: cursor.startedAt,
+        cursorId: cursor.id,
+      });
+    }
+    const rows = await builder
+      .orderBy('inspection.started_at', 'DESC')
+      .addOrderBy('inspection.id', 'DESC')
+      .limit(limit + 1)
+      .getMany();
+    const page = rows.slice(0, limit);
+    const last = page[page.length - 1];
+    return {
+      items: page.map((i) => toListItem(i, i.driver?.name ?? '')),
+      nextCursor: rows.length > limit && last ? encodeCursor({ startedAt: last.startedAt, id: last.id }) : null,
+    };
+  }
+
+  async get(user: AuthUser, id: string): Promise<InspectionResponse> {
+    return this.assemble(await this.findReadable(user, id));
+  }
+
+  // An inspection the caller may read: their organisation's, a driver's own, a trainer's practice ones.
+  async findReadable(user: AuthUser, id: string): Promise<Inspection> {
+    const inspection = await this.inspections.findOneBy({ id, organizationId: user.organizationId });
+    if (
+      !inspection ||
+      (user.role === 'driver' && inspection.driverId !== user.id) ||
+      (user.role === 'trainer' && inspection.kind !== 'practice')
+    ) {
+      throw new NotFoundException(NOT_FOUND);
+    }
+    return inspection;
+  }
+
+  // The caller's own inspection while it is in progress, with its checklist (also for attachments).
+  async findEditable(user: AuthUser, id: string): Promise<{ inspection: Inspection; checklist: Checklist }> {
+    const inspection = await this.inspections.findOneBy({ id, organizationId: user.organizationId, driverId: user.id });
+    return this.editable(inspection);
+  }
+
+  private editable(inspection: Inspection | null): { inspection: Inspection; checklist: Checklist } {
+    if (!inspection) throw new NotFoundException(NOT_FOUND);
+    if (inspection.status === 'submitted') throw new ConflictException(SUBMITTED_MESSAGE);
+    return { inspection, checklist: this.checklistOf(inspection).checklist };
+  }
+
+  async putResults(user: AuthUser, id: string, dto: PutResultsDto): Promise<ItemResultResponse[]> {
+    // The hot path: the vehicles snapshot is read only when the checklist is not cached.
+    const { inspection } = this.editable(
+      await this.inspections.findOne({
+        select: { id: true, kind: true, status: true, locale: true, vehicles: !this.checklists.has(id) },
+        where: { id, organizationId: user.organizationId, driverId: user.id },
+      }),
+    );
+    const { byKey } = this.checklistOf(inspection);
+    const prepared = this.prepareResults(dto.results, byKey, inspection);
+    if (prepared.length === 0) return [];
+    const column = <T>(pick: (p: PreparedResult) => T): T[] => prepared.map(pick);
+    const rows = await this.dataSource.query<ItemResultRow[]>(UPSERT_SQL, [
+      inspection.id,
+      column((p) => p.input.itemKey),
+      column((p) => p.input.clientId),
+      column((p) => p.input.answer),
+      column((p) => p.quantity),
+      column((p) => p.value),
+      column((p) => p.unit),
+      column((p) => p.verdict),
+      column((p) => p.limitValue),
+      column((p) => p.limitUnit),
+      column((p) => p.limitSource),
+      column((p) => p.input.detail ?? null),
+      column((p) => p.input.heard ?? null),
+      column((p) => p.input.confidence ?? null),
+      column((p) => p.input.answeredAt),
+    ]);
+    const stored = new Map(rows.map((row) => [row.item_key, row]));
+    if (stored.size < prepared.length) {
+      // The guard found the inspection submitted meanwhile: nothing of this batch was written.
+      throw new ConflictException(SUBMITTED_MESSAGE);
+    }
+    return prepared.map((p) => toResultResponse(rowToEntity(stored.get(p.input.itemKey) as ItemResultRow)));
+  }
+
+  async submit(user: AuthUser, id: string, dto: SubmitInspectionDto): Promise<InspectionResponse> {
+    await this.dataSource.transaction(async (manager) => {
+      const inspection = await manager.findOne(Inspection, {
+        where: { id, organizationId: user.organizationId, driverId: user.id },
+        lock: { mode: 'pessimistic_write' },
+      });
+      if (!inspection) throw new NotFoundException(NOT_FOUND);
+      if (inspection.status === 'submitted') throw new ConflictException(SUBMITTED_MESSAGE);
+      const { checklist, byKey } = this.checklistOf(inspection);
+      const rows = await manager.find(ItemResult, { where: { inspectionId: id } });
+      const rowByKey = new Map(rows.map((r) => [r.itemKey, r]));
+      const summary = summarizeInspection(checklist, rows.map(toSharedResult), {
+        startedAt: inspection.startedAt.toISOString(),
+      });
+      const now = new Date();
+      await manager.insert(Signature, {
+        inspectionId: id,
+        defectId: null,
+        role: 'driver',
+        signerId: user.id,
+        name: dto.signature.name,
+        drawing: dto.signature.drawing ?? null,
+        statement: driverStatement(inspection.locale, {
+          name: dto.signature.name,
+          units: inspection.vehicles.map((v) => v.unitNumber),
+          date: inspection.startedAt,
+          defectCount: summary.defects.length,
+        }),
+        signedAt: now,
+      });
+      const defects = summary.defects.map((defect) => {
+        const item = byKey.get(defect.itemKey) as ChecklistItem;
+        const row = rowByKey.get(defect.itemKey);
+        const vehicle = inspection.vehicles[item.unitIndex] ?? inspection.vehicles[0]!;
+        return manager.create(Defect, {
+          organizationId: user.organizationId,
+          inspectionId: id,
+          vehicleId: vehicle.id,
+          itemKey: defect.itemKey,
+          title: defect.title.slice(0, 200),
+          positionLabel: defect.positionLabel.slice(0, 200),
+          // A safety item, or any out-of-limit measurement: both keep the vehicle parked until certified.
+          safety: defect.blocksDriving,
+          detail: defect.detail ?? null,
+          measurement: defect.measurement ?? null,
+          measurementLimit:
+            row && row.limitValue !== null && row.limitUnit !== null && row.limitSource !== null
+              ? { value: row.limitValue, unit: row.limitUnit, source: row.limitSource }
+              : null,
+          status: 'open',
+        });
+      });
+      if (defects.length > 0) await manager.save(Defect, defects);
+      await manager.update(Inspection, id, {
+        status: 'submitted',
+        submittedAt: now,
+        odometer: dto.odometer ?? null,
+        rushed: summary.rushed.rushed,
+        defectCount: defects.length,
+      });
+      await refreshVehicleStatus(
+        manager,
+        defects.filter((d) => d.safety).map((d) => d.vehicleId),
+      );
+    });
+    return this.get(user, id);
+  }
+
+  private prepareResults(
+    results: readonly ResultUpsertDto[],
+    byKey: ReadonlyMap<string, ChecklistItem>,
+    inspection: Inspection,
+  ): PreparedResult[] {
+    const unknown = results.map((r, index) => ({ key: r.itemKey, index })).filter(({ key }) => !byKey.has(key));
+    if (unknown.length > 0) {
+      const keys = [...new Set(unknown.map((u) => u.key))];
+      throw new ApiValidationException(
+        unknown.map(({ key, index }) => ({
+          field: `results.${index}.itemKey`,
+          message: `${key} is not an item of this inspection's checklist.`,
+        })),
+        `These item keys are not on this inspection's checklist: ${keys.join(', ')}.`,
+      );
+    }
+    // Within a batch too, the latest answer of an item stands; on equal times the later one in the list.
+    const latest = new Map<string, { input: ResultUpsertDto; index: number }>();
+    results.forEach((input, index) => {
+      const previous = latest.get(input.itemKey);
+      if (!previous || timeOf(input.answeredAt) >= timeOf(previous.input.answeredAt)) {
+        latest.set(input.itemKey, { input, index });
+      }
+    });
+    const problems: FieldProblem[] = [];
+    const clientIds = new Map<string, string>();
+    const prepared: PreparedResult[] = [];
+    for (const { input, index } of latest.values()) {
+      const other = clientIds.get(input.clientId);
+      if (other !== undefined && other !== input.itemKey) {
+        problems.push({
+          field: `results.${index}.clientId`,
+          message: `The client id ${input.clientId} is also used for ${other}: give each answer its own id.`,
+        });
+        continue;
+      }
+      clientIds.set(input.clientId, input.itemKey);
+      const item = byKey.get(input.itemKey) as ChecklistItem;
+      const empty = { limitValue: null, limitUnit: null, limitSource: null };
+      if (!input.measurement) {
+        prepared.push({ input, quantity: null, value: null, unit: null, verdict: null, ...empty });
+        continue;
+      }
+      const { quantity, value, unit } = input.measurement;
+      if (item.expects.type !== 'measure') {
+        problems.push({
+          field: `results.${index}.measurement`,
+          message: `${input.itemKey} takes no measurement: send the answer only.`,
+        });
+        continue;
+      }
+      if (item.expects.quantity !== quantity) {
+        problems.push({
+          field: `results.${index}.measurement.quantity`,
+          message: `${input.itemKey} measures ${item.expects.quantity}, not ${quantity}.`,
+        });
+        continue;
+      }
+      try {
+        // The server's verdict stands, whatever the client said: never trust a client verdict.
+        const judged = evaluateMeasurement(quantity, value, unit, item.limitContext ?? {}, inspection.locale);
+        prepared.push({
+          input,
+          quantity,
+          value: Math.round(toCanonical(quantity, value, unit) * 1e6) / 1e6,
+          unit: canonicalUnitOf(quantity),
+          verdict: judged.verdict,
+          limitValue: judged.limit,
+          limitUnit: judged.unit,
+          limitSource: judged.source,
+        });
+      } catch (error) {
+        if (!(error instanceof LimitError)) throw error;
+        problems.push({ field: `results.${index}.measurement`, message: error.message });
+      }
+    }
+    if (problems.length > 0) throw new ApiValidationException(problems);
+    return prepared;
+  }
+
+  private checklistOf(inspection: Inspection): BuiltChecklist {
+    const cached = this.checklists.get(inspection.id);
+    if (cached) return cached;
+    return this.remember(inspection.id, buildChecklist(inspection.vehicles, inspection.kind, inspection.locale));
+  }
+
+  private remember(id: string, checklist: Checklist): BuiltChecklist {
+    const built = { checklist, byKey: new Map(checklist.items.map((item) => [item.key, item])) };
+    if (this.checklists.size >= CHECKLIST_CACHE_MAX) {
+      const oldest = this.checklists.keys().next();
+      if (!oldest.done) this.checklists.delete(oldest.value);
+    }
+    this.checklists.set(id, built);
+    return built;
+  }
+
+  private async assemble(inspection: Inspection): Promise<InspectionResponse> {
+    const manager = this.dataSource.manager;
+    const [driver, results, defects, signatures, attachments] = await Promise.all([
+      manager.findOne(User, { select: { id: true, name: true }, where: { id: inspection.driverId } }),
+      manager.find(ItemResult, { where: { inspectionId: inspection.id } }),
+      manager.find(Defect, { where: { inspectionId: inspection.id }, order: { createdAt: 'ASC', id: 'ASC' } }),
+      manager.find(Signature, {
+        where: { inspectionId: inspection.id },
+        relations: { signer: true },
+        order: { signedAt: 'ASC', id: 'ASC' },
+      }),
+      this.attachments.collect(inspection.id),
+    ]);
+    const { checklist } = this.checklistOf(inspection);
+    const order = new Map(checklist.items.map((item, index) => [item.key, index]));
+    results.sort((a, b) => (order.get(a.itemKey) ?? 0) - (order.get(b.itemKey) ?? 0));
+    const defectResponses = await toDefectResponses(manager, defects);
+    const summary = summarizeInspection(checklist, results.map(toSharedResult), {
+      startedAt: inspection.startedAt.toISOString(),
+      certifications: defectResponses.flatMap((d) =>
+        d.repair ? [{ itemKey: d.itemKey, action: d.repair.action }] : [],
+      ),
+    });
+    return {
+      ...toListItem(inspection, driver?.name ?? ''),
+      clientId: inspection.clientId,
+      locale: inspection.locale,
+      location: inspection.location,
+      odometer: inspection.odometer,
+      checklist,
+      results: results.map(toResultResponse),
+      notes: attachments.notes,
+      photos: attachments.photos,
+      defects: defectResponses,
+      signatures: signatures.map((s) => toSignatureResponse(s, s.signer?.name ?? '')),
+      summary,
+    };
+  }
+}

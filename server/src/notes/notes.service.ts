@@ -1,0 +1,281 @@
+import {
+  BadRequestException,
+  ConflictException,
+  Inject,
+  Injectable,
+  NotFoundException,
+  PayloadTooLargeException,
+  type OnModuleInit,
+} from '@nestjs/common';
+import { InjectRepository } from '@nestjs/typeorm';
+import type { Checklist, PhotoResponse, VoiceNoteResponse } from '@yardcall/shared';
+import { createHash, randomUUID } from 'node:crypto';
+import { Repository } from 'typeorm';
+import type { AuthUser } from '../auth/auth-user';
+import { ApiValidationException } from '../common/api-validation.exception';
+import { isUniqueViolation } from '../common/database-errors';
+import {
+  InspectionAttachmentsRegistry,
+  type InspectionAttachments,
+  type InspectionAttachmentSource,
+} from '../inspections/inspection-attachments';
+import { InspectionsService } from '../inspections/inspections.service';
+import type { Inspection } from '../inspections/entities/inspection.entity';
+import { OBJECT_STORAGE, type ObjectStorage } from '../storage/object-storage';
+import type { PhotoUploadDto, VoiceNoteUploadDto } from './dto/upload.dto';
+import { Photo } from './entities/photo.entity';
+import { VoiceNote } from './entities/voice-note.entity';
+import { detectMedia, PHOTO_MEDIA, VOICE_NOTE_MEDIA, type MediaKind } from './media-types';
+import type { ServedObject } from './serve-object';
+import { formatBytes, UPLOAD_FIELD } from './upload.interceptor';
+
+export interface UploadResult<T> {
+  record: T;
+  // False when the same clientId had already stored this upload.
+  created: boolean;
+}
+
+type Prepared<T> =
+  { existing: T } | { existing: null; inspection: Inspection; checklist: Checklist; checked: CheckedFile };
+
+interface CheckedFile {
+  buffer: Buffer;
+  mimeType: string;
+  extension: string;
+  sha256: string;
+}
+
+export function toVoiceNoteResponse(note: VoiceNote): VoiceNoteResponse {
+  return {
+    id: note.id,
+    clientId: note.clientId,
+    itemKey: note.itemKey,
+    heard: note.heard,
+    durationMs: note.durationMs,
+    mimeType: note.mimeType,
+    sizeBytes: note.sizeBytes,
+    sha256: note.sha256,
+    createdAt: note.createdAt.toISOString(),
+    audioUrl: `/api/notes/${note.id}/audio`,
+  };
+}
+
+export function toPhotoResponse(photo: Photo): PhotoResponse {
+  return {
+    id: photo.id,
+    clientId: photo.clientId,
+    itemKey: photo.itemKey,
+    mimeType: photo.mimeType,
+    sizeBytes: photo.sizeBytes,
+    createdAt: photo.createdAt.toISOString(),
+    url: `/api/photos/${photo.id}`,
+  };
+}
+
+// A clientId names one upload: sent again it answers the stored record, with other bytes it is a mistake.
+function sameUpload<T extends { sha256: string; clientId: string }>(existing: T, checked: CheckedFile): T {
+  if (existing.sha256 !== checked.sha256) {
+    throw new ConflictException(
+      `The client id ${existing.clientId} was already used for a different file: give each new upload its own client id.`,
+    );
+  }
+  return existing;
+}
+
+function assertOnChecklist(checklist: Checklist, itemKey: string): void {
+  if (!checklist.items.some((item) => item.key === itemKey)) {
+    throw new ApiValidationException([
+      { field: 'itemKey', message: `"${itemKey}" is not an item of this inspection's checklist.` },
+    ]);
+  }
+}
+
+const UNIQUE_NOTE = 'UQ_voice_notes_inspection_client';
+const UNIQUE_PHOTO = 'UQ_photos_inspection_client';
+
+// Voice notes and defect photos: checked by content, kept in ObjectStorage, idempotent on clientId.
+@Injectable()
+export class NotesService implements InspectionAttachmentSource, OnModuleInit {
+  constructor(
+    @InjectRepository(VoiceNote) private readonly notes: Repository<VoiceNote>,
+    @InjectRepository(Photo) private readonly photos: Repository<Photo>,
+    private readonly inspections: InspectionsService,
+    private readonly attachments: InspectionAttachmentsRegistry,
+    @Inject(OBJECT_STORAGE) private readonly storage: ObjectStorage,
+  ) {}
+
+  // GET /inspections/:id then lists this module's notes and photos.
+  onModuleInit(): void {
+    this.attachments.register(this);
+  }
+
+  async addVoiceNote(
+    user: AuthUser,
+    inspectionId: string,
+    dto: VoiceNoteUploadDto,
+    file: Express.Multer.File | undefined,
+  ): Promise<UploadResult<VoiceNoteResponse>> {
+    const findStored = () => this.notes.findOneBy({ inspectionId, clientId: dto.clientId });
+    const prepared = await this.prepare(user, inspectionId, file, VOICE_NOTE_MEDIA, findStored);
+    if (prepared.existing) return { record: toVoiceNoteResponse(prepared.existing), created: false };
+    const { inspection, checklist, checked } = prepared;
+    assertOnChecklist(checklist, dto.itemKey);
+
+    const id = randomUUID();
+    const objectKey = `notes/${inspectionId}/${id}.${checked.extension}`;
+    await this.storage.put(objectKey, checked.buffer, { contentType: checked.mimeType });
+    const note = this.notes.create({
+      id,
+      organizationId: inspection.organizationId,
+      inspectionId,
+      itemKey: dto.itemKey,
+      clientId: dto.clientId,
+      objectKey,
+      mimeType: checked.mimeType,
+      durationMs: dto.durationMs,
+      sizeBytes: checked.buffer.length,
+      sha256: checked.sha256,
+      heard: dto.heard?.trim() || null,
+    });
+    try {
+      return { record: toVoiceNoteResponse(await this.notes.save(note)), created: true };
+    } catch (error) {
+      // No row points at this copy's file: drop it, whatever went wrong.
+      await this.storage.delete(objectKey);
+      if (!isUniqueViolation(error, UNIQUE_NOTE)) throw error;
+      // The same upload raced in twice: the first one stands.
+      const first = await this.notes.findOneByOrFail({ inspectionId, clientId: dto.clientId });
+      return { record: toVoiceNoteResponse(sameUpload(first, checked)), created: false };
+    }
+  }
+
+  async addPhoto(
+    user: AuthUser,
+    inspectionId: string,
+    dto: PhotoUploadDto,
+    file: Express.Multer.File | undefined,
+  ): Promise<UploadResult<PhotoResponse>> {
+    const findStored = () => this.photos.findOneBy({ inspectionId, clientId: dto.clientId });
+    const prepared = await this.prepare(user, inspectionId, file, PHOTO_MEDIA, findStored);
+    if (prepared.existing) return { record: toPhotoResponse(prepared.existing), created: false };
+    const { inspection, checklist, checked } = prepared;
+    assertOnChecklist(checklist, dto.itemKey);
+
+    const id = randomUUID();
+    const objectKey = `photos/${inspectionId}/${id}.${checked.extension}`;
+    await this.storage.put(objectKey, checked.buffer, { contentType: checked.mimeType });
+    const photo = this.photos.create({
+      id,
+      organizationId: inspection.organizationId,
+      inspectionId,
+      itemKey: dto.itemKey,
+      clientId: dto.clientId,
+      objectKey,
+      mimeType: checked.mimeType,
+      sizeBytes: checked.buffer.length,
+      sha256: checked.sha256,
+    });
+    try {
+      return { record: toPhotoResponse(await this.photos.save(photo)), created: true };
+    } catch (error) {
+      await this.storage.delete(objectKey);
+      if (!isUniqueViolation(error, UNIQUE_PHOTO)) throw error;
+      const first = await this.photos.findOneByOrFail({ inspectionId, clientId: dto.clientId });
+      return { record: toPhotoResponse(sameUpload(first, checked)), created: false };
+    }
+  }
+
+  // Whoever may read the inspection may listen (InspectionsService.findReadable); to anyone else,
+  // including another organisation, the note does not exist.
+  async voiceNoteAudio(user: AuthUser, id: string): Promise<ServedObject> {
+    const note = await this.notes.findOneBy({ id, organizationId: user.organizationId });
+    const message = 'No voice note with this id in your organisation.';
+    if (!note || !(await this.mayRead(user, note.inspectionId))) throw new NotFoundException(message);
+    return { objectKey: note.objectKey, sizeBytes: note.sizeBytes, mimeType: note.mimeType, label: 'recording' };
+  }
+
+  async photoImage(user: AuthUser, id: string): Promise<ServedObject> {
+    const photo = await this.photos.findOneBy({ id, organizationId: user.organizationId });
+    const message = 'No photo with this id in your organisation.';
+    if (!photo || !(await this.mayRead(user, photo.inspectionId))) throw new NotFoundException(message);
+    return { objectKey: photo.objectKey, sizeBytes: photo.sizeBytes, mimeType: photo.mimeType, label: 'photo' };
+  }
+
+  // For GET /inspections/:id (through InspectionAttachmentsRegistry): the inspection's notes and
+  // photos in the order they were made. The caller has already checked who may read the inspection.
+  async attachmentsOf(inspectionId: string): Promise<InspectionAttachments> {
+    const [notes, photos] = await Promise.all([
+      this.notes.find({ where: { inspectionId }, order: { createdAt: 'ASC', id: 'ASC' } }),
+      this.photos.find({ where: { inspectionId }, order: { createdAt: 'ASC', id: 'ASC' } }),
+    ]);
+    return { notes: notes.map(toVoiceNoteResponse), photos: photos.map(toPhotoResponse) };
+  }
+
+  private async mayRead(user: AuthUser, inspectionId: string): Promise<boolean> {
+    try {
+      await this.inspections.findReadable(user, inspectionId);
+      return true;
+    } catch (error) {
+      if (error instanceof NotFoundException) return false;
+      throw error;
+    }
+  }
+
+  // The caller's own inspection in progress (InspectionsService.findEditable: 404 for anyone else's)
+  // and the checked file. A record already stored under the clientId is answered even after the
+  // inspection was submitted: the client may be retrying an upload whose answer it lost.
+  private async prepare<T extends { sha256: string; clientId: string }>(
+    user: AuthUser,
+    inspectionId: string,
+    file: Express.Multer.File | undefined,
+    kind: MediaKind<string>,
+    findStored: () => Promise<T | null>,
+  ): Promise<Prepared<T>> {
+    let editable: { inspection: Inspection; checklist: Checklist };
+    try {
+      editable = await this.inspections.findEditable(user, inspectionId);
+    } catch (error) {
+      if (!(error instanceof ConflictException)) throw error;
+      const stored = await findStored();
+      if (!stored) {
+        throw new ConflictException(`This inspection has been submitted: ${kind.label} can no longer be added to it.`);
+      }
+      return { existing: sameUpload(stored, await this.checkFile(file, kind)) };
+    }
+    const checked = await this.checkFile(file, kind);
+    const stored = await findStored();
+    if (stored) return { existing: sameUpload(stored, checked) };
+    return { existing: null, ...editable, checked };
+  }
+
+  private async checkFile(file: Express.Multer.File | undefined, kind: MediaKind<string>): Promise<CheckedFile> {
+    if (!file) {
+      throw new BadRequestException(
+        `Attach ${kind.label} as the form field "${UPLOAD_FIELD}" of a multipart/form-data request.`,
+      );
+    }
+    if (file.size === 0 || file.buffer.length === 0) {
+      throw new BadRequestException(`The file is empty (0 bytes): send ${kind.label} with something in it.`);
+    }
+    // Multer stops at the limit; this guards a buffer that came another way.
+    if (file.buffer.length > kind.maxBytes) {
+      throw new PayloadTooLargeException(
+        `The file is larger than the ${formatBytes(kind.maxBytes)} (${kind.maxBytes} bytes) allowed for ${kind.label}.`,
+      );
+    }
+    const detection = await detectMedia(file.buffer, kind);
+    if (!detection.ok) {
+      throw new BadRequestException(
+        `This file is not ${kind.acceptedNames}: its content ${
+          detection.found ? `looks like ${detection.found}` : 'is of no type we recognise'
+        }. Send ${kind.label} as ${kind.acceptedNames}.`,
+      );
+    }
+    return {
+      buffer: file.buffer,
+      mimeType: detection.mimeType,
+      extension: detection.extension,
+      sha256: createHash('sha256').update(file.buffer).digest('hex'),
+    };
+  }
+}

@@ -1,0 +1,60 @@
+import {
+  BadRequestException,
+  Injectable,
+  mixin,
+  PayloadTooLargeException,
+  type CallHandler,
+  type ExecutionContext,
+  type NestInterceptor,
+  type Type,
+} from '@nestjs/common';
+import type { Request, Response } from 'express';
+import multer, { MulterError } from 'multer';
+import type { Observable } from 'rxjs';
+import type { MediaKind } from './media-types';
+
+export const UPLOAD_FIELD = 'file';
+
+export function formatBytes(bytes: number): string {
+  return bytes >= 1024 * 1024 ? `${(bytes / (1024 * 1024)).toFixed(0)} MB` : `${(bytes / 1024).toFixed(0)} KB`;
+}
+
+function toHttpError(error: unknown, kind: MediaKind<string>): Error {
+  if (!(error instanceof MulterError)) return error instanceof Error ? error : new Error(String(error));
+  switch (error.code) {
+    case 'LIMIT_FILE_SIZE':
+      return new PayloadTooLargeException(
+        `The file is larger than the ${formatBytes(kind.maxBytes)} (${kind.maxBytes} bytes) allowed for ${kind.label}: record a shorter one or send a smaller file.`,
+      );
+    case 'LIMIT_UNEXPECTED_FILE':
+    case 'LIMIT_FILE_COUNT':
+      return new BadRequestException(`Send one file, in the form field "${UPLOAD_FIELD}".`);
+    default:
+      return new BadRequestException(
+        `The upload could not be read (${error.message}): send it as multipart/form-data.`,
+      );
+  }
+}
+
+// Reads one multipart file into memory with multer, stopping at the kind's size limit, and says
+// what went wrong in words that name the limit.
+export function UploadInterceptor(kind: MediaKind<string>): Type<NestInterceptor> {
+  @Injectable()
+  class Upload implements NestInterceptor {
+    private readonly readUpload = multer({
+      storage: multer.memoryStorage(),
+      limits: { fileSize: kind.maxBytes, files: 1, fields: 10, fieldSize: 16 * 1024 },
+    }).single(UPLOAD_FIELD);
+
+    async intercept(context: ExecutionContext, next: CallHandler): Promise<Observable<unknown>> {
+      const http = context.switchToHttp();
+      await new Promise<void>((resolve, reject) => {
+        this.readUpload(http.getRequest<Request>(), http.getResponse<Response>(), (error: unknown) =>
+          error ? reject(toHttpError(error, kind)) : resolve(),
+        );
+      });
+      return next.handle();
+    }
+  }
+  return mixin(Upload);
+}

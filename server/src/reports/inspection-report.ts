@@ -1,0 +1,317 @@
+import {
+  formatMeasure,
+  safetyCaution,
+  type DefectResponse,
+  type DefectStatus,
+  type InspectionKind,
+  type InspectionResponse,
+  type SignatureRole,
+  type VehicleKind,
+} from '@yardcall/shared';
+import PDFDocument from 'pdfkit';
+import { readSignatureDrawing } from './signature-drawing';
+
+// Everything a report shows. Built from an InspectionResponse plus what that contract leaves out
+// (organisation, VIN and plate, the drawn signatures), so it renders without HTTP or a database.
+export interface ReportVehicle {
+  unitNumber: string;
+  kind: VehicleKind;
+  vin: string;
+  plate: string;
+}
+
+export interface ReportSignature {
+  role: SignatureRole;
+  // The name as typed, and the account that signed.
+  name: string;
+  signerName: string;
+  statement: string;
+  signedAt: string;
+  // An SVG path or a PNG data URL, as it was signed.
+  drawing: string | null;
+}
+
+export type ReportInspection = Pick<
+  InspectionResponse,
+  | 'id'
+  | 'kind'
+  | 'status'
+  | 'locale'
+  | 'startedAt'
+  | 'submittedAt'
+  | 'odometer'
+  | 'location'
+  | 'driver'
+  | 'defects'
+  | 'results'
+  | 'notes'
+>;
+
+export interface InspectionReport {
+  organizationName: string;
+  inspection: ReportInspection;
+  vehicles: ReportVehicle[];
+  signatures: ReportSignature[];
+  generatedAt: string;
+}
+
+const KIND_LABELS: Record<InspectionKind, string> = {
+  pre_trip: 'Pre-trip inspection',
+  post_trip: 'Post-trip inspection',
+  en_route: 'En-route inspection',
+  practice: 'Practice walk-around',
+};
+
+const VEHICLE_KIND_LABELS: Record<VehicleKind, string> = {
+  tractor: 'Tractor',
+  trailer: 'Trailer',
+  straight_truck: 'Straight truck',
+  bus: 'Bus',
+};
+
+const STATUS_LABELS: Record<DefectStatus, string> = {
+  open: 'Open',
+  repaired: 'Repaired',
+  no_repair_needed: 'No repair needed',
+  deferred: 'Deferred',
+};
+
+const ROLE_LABELS: Record<SignatureRole, string> = {
+  driver: 'Driver',
+  mechanic: 'Mechanic',
+  next_driver: 'Next driver',
+};
+
+const REGULAR = 'Atkinson Hyperlegible';
+const BOLD = 'Atkinson Hyperlegible Bold';
+// The full TTFs (OFL): pdfkit embeds TTF and WOFF, not WOFF2.
+const REGULAR_TTF =
+  require.resolve('@expo-google-fonts/atkinson-hyperlegible/400Regular/AtkinsonHyperlegible_400Regular.ttf');
+const BOLD_TTF = require.resolve('@expo-google-fonts/atkinson-hyperlegible/700Bold/AtkinsonHyperlegible_700Bold.ttf');
+
+const MARGIN = 54;
+const SIGNATURE_BOX = { width: 220, height: 70 };
+
+export function formatReportTime(iso: string | null): string {
+  if (!iso) return '—';
+  const date = new Date(iso);
+  return Number.isNaN(date.getTime()) ? iso : `${date.toISOString().slice(0, 16).replace('T', ' ')} UTC`;
+}
+
+class ReportWriter {
+  readonly doc: PDFKit.PDFDocument;
+
+  constructor(report: InspectionReport) {
+    this.doc = new PDFDocument({
+      size: 'LETTER',
+      margin: MARGIN,
+      bufferPages: true,
+      info: {
+        Title: `${KIND_LABELS[report.inspection.kind]} ${report.vehicles.map((v) => v.unitNumber).join(' + ')}`,
+        Author: report.organizationName,
+        Creator: 'Yardcall',
+      },
+    });
+    this.doc.registerFont(REGULAR, REGULAR_TTF);
+    this.doc.registerFont(BOLD, BOLD_TTF);
+    this.doc.font(REGULAR).fontSize(11);
+  }
+
+  private get width(): number {
+    return this.doc.page.width - MARGIN * 2;
+  }
+
+  // Starts a new page when the next block would not fit.
+  ensureRoom(height: number): void {
+    if (this.doc.y + height > this.doc.page.height - MARGIN) this.doc.addPage();
+  }
+
+  heading(text: string): void {
+    this.ensureRoom(60);
+    this.doc.moveDown(0.8).font(BOLD).fontSize(14).text(text, MARGIN, this.doc.y, { width: this.width });
+    this.doc.moveDown(0.3).font(REGULAR).fontSize(11);
+  }
+
+  field(label: string, value: string): void {
+    this.ensureRoom(18);
+    this.doc.font(BOLD).text(`${label}: `, MARGIN, this.doc.y, { continued: true, width: this.width });
+    this.doc.font(REGULAR).text(value);
+  }
+
+  paragraph(text: string, options: { bold?: boolean; size?: number; indent?: number } = {}): void {
+    this.ensureRoom(18);
+    this.doc
+      .font(options.bold ? BOLD : REGULAR)
+      .fontSize(options.size ?? 11)
+      .text(text, MARGIN + (options.indent ?? 0), this.doc.y, { width: this.width - (options.indent ?? 0) });
+    this.doc.font(REGULAR).fontSize(11);
+  }
+
+  drawing(drawing: string | null): void {
+    const parsed = readSignatureDrawing(drawing);
+    if (!parsed) {
+      if (drawing) this.paragraph('(The drawn signature could not be shown; the typed name stands.)', { indent: 12 });
+      return;
+    }
+    this.ensureRoom(SIGNATURE_BOX.height + 12);
+    const x = MARGIN + 12;
+    const y = this.doc.y + 4;
+    this.doc
+      .save()
+      .lineWidth(0.5)
+      .strokeColor('#888888')
+      .rect(x, y, SIGNATURE_BOX.width, SIGNATURE_BOX.height)
+      .stroke();
+    this.doc.restore();
+    if (parsed.kind === 'png') {
+      try {
+        this.doc.image(parsed.bytes, x + 4, y + 4, {
+          fit: [SIGNATURE_BOX.width - 8, SIGNATURE_BOX.height - 8],
+          align: 'center',
+          valign: 'center',
+        });
+      } catch {
+        this.doc.text('(The drawn signature could not be shown; the typed name stands.)', x + 8, y + 8);
+      }
+    } else {
+      const { box } = parsed;
+      const scale = Math.min(
+        (SIGNATURE_BOX.width - 8) / Math.max(box.width, 1),
+        (SIGNATURE_BOX.height - 8) / Math.max(box.height, 1),
+      );
+      this.doc
+        .save()
+        .translate(x + 4, y + 4)
+        .scale(scale)
+        .translate(-box.minX, -box.minY)
+        .path(parsed.path)
+        .lineWidth(1.2 / scale)
+        .strokeColor('#000000')
+        .stroke()
+        .restore();
+    }
+    this.doc.x = MARGIN;
+    this.doc.y = y + SIGNATURE_BOX.height + 8;
+  }
+}
+
+function measurementLine(defect: DefectResponse, locale: ReportInspection['locale']): string | null {
+  if (!defect.measurement) return null;
+  const measured = formatMeasure(defect.measurement.value, defect.measurement.unit, locale);
+  if (!defect.limit) return `Measured: ${measured}`;
+  const limit = formatMeasure(defect.limit.value, defect.limit.unit, locale);
+  return `Measured: ${measured}; limit ${limit} (${defect.limit.source})`;
+}
+
+function writeDefect(writer: ReportWriter, defect: DefectResponse, report: InspectionReport, index: number): void {
+  const { inspection } = report;
+  writer.ensureRoom(80);
+  writer.paragraph(
+    `${index + 1}. ${defect.title}: ${defect.positionLabel} (unit ${defect.vehicle.unitNumber})${defect.safety ? ', safety item' : ''}`,
+    { bold: true },
+  );
+  writer.paragraph(`Status: ${STATUS_LABELS[defect.status]}`, { indent: 12 });
+  if (defect.detail) writer.paragraph(`Driver's words: "${defect.detail}"`, { indent: 12 });
+  const result = inspection.results.find((r) => r.itemKey === defect.itemKey);
+  if (result?.heard && result.heard !== defect.detail) writer.paragraph(`Heard: "${result.heard}"`, { indent: 12 });
+  for (const note of inspection.notes.filter((n) => n.itemKey === defect.itemKey)) {
+    const seconds = (note.durationMs / 1000).toFixed(1);
+    writer.paragraph(`Voice note (${seconds} s)${note.heard ? `: "${note.heard}"` : ''}`, { indent: 12 });
+  }
+  const measured = measurementLine(defect, inspection.locale);
+  if (measured) writer.paragraph(measured, { indent: 12 });
+  if (defect.repair) {
+    const repair = defect.repair;
+    const until = repair.deferredUntil ? `, until ${formatReportTime(repair.deferredUntil)}` : '';
+    writer.paragraph(
+      `Certified ${STATUS_LABELS[repair.action].toLowerCase()}${until} by ${repair.mechanic.name}, ${formatReportTime(repair.signedAt)}: ${repair.note}`,
+      { indent: 12 },
+    );
+  }
+}
+
+function writeReport(writer: ReportWriter, report: InspectionReport): void {
+  const { inspection } = report;
+  const doc = writer.doc;
+  doc
+    .font(BOLD)
+    .fontSize(18)
+    .text(`${KIND_LABELS[inspection.kind]} report`, { width: doc.page.width - MARGIN * 2 });
+  doc.font(REGULAR).fontSize(12).text(report.organizationName);
+  doc.moveDown(0.5).fontSize(11);
+
+  writer.field('Driver', inspection.driver.name);
+  writer.field('Started', formatReportTime(inspection.startedAt));
+  writer.field('Submitted', inspection.submittedAt ? formatReportTime(inspection.submittedAt) : 'Not yet submitted');
+  writer.field('Odometer', inspection.odometer === null ? '—' : inspection.odometer.toLocaleString('en-US'));
+  writer.field('Location', inspection.location ?? '—');
+  writer.field('Report id', inspection.id);
+
+  writer.heading('Vehicles');
+  for (const vehicle of report.vehicles) {
+    writer.paragraph(
+      `Unit ${vehicle.unitNumber} (${VEHICLE_KIND_LABELS[vehicle.kind]}) · VIN ${vehicle.vin} · Plate ${vehicle.plate}`,
+    );
+  }
+
+  writer.heading(`Defects (${inspection.defects.length})`);
+  if (inspection.defects.length === 0) {
+    writer.paragraph('No defect was found or reported on this inspection.');
+  }
+  inspection.defects.forEach((defect, index) => writeDefect(writer, defect, report, index));
+
+  writer.heading('Safety');
+  writer.paragraph(safetyCaution(inspection.locale));
+
+  writer.heading('Signatures');
+  if (report.signatures.length === 0) writer.paragraph('Not signed yet.');
+  for (const signature of report.signatures) {
+    writer.ensureRoom(SIGNATURE_BOX.height + 60);
+    const signer =
+      signature.signerName && signature.signerName !== signature.name ? ` (account: ${signature.signerName})` : '';
+    writer.paragraph(
+      `${ROLE_LABELS[signature.role]}: ${signature.name}${signer}, ${formatReportTime(signature.signedAt)}`,
+      {
+        bold: true,
+      },
+    );
+    writer.paragraph(signature.statement, { indent: 12 });
+    writer.drawing(signature.drawing);
+  }
+
+  // Page numbers and the generation time on every page, drawn once all pages exist.
+  const range = doc.bufferedPageRange();
+  for (let page = range.start; page < range.start + range.count; page += 1) {
+    doc.switchToPage(page);
+    // The footer sits in the bottom margin; without this pdfkit would start a new page for it.
+    const bottom = doc.page.margins.bottom;
+    doc.page.margins.bottom = 0;
+    doc
+      .font(REGULAR)
+      .fontSize(8)
+      .text(
+        `Yardcall · generated ${formatReportTime(report.generatedAt)} · page ${page + 1} of ${range.count}`,
+        MARGIN,
+        doc.page.height - MARGIN + 16,
+        { width: doc.page.width - MARGIN * 2, align: 'center', lineBreak: false },
+      );
+    doc.page.margins.bottom = bottom;
+  }
+}
+
+// Renders the report as PDF bytes.
+export function renderInspectionReport(report: InspectionReport): Promise<Buffer> {
+  const writer = new ReportWriter(report);
+  const chunks: Buffer[] = [];
+  return new Promise((resolve, reject) => {
+    writer.doc.on('data', (chunk: Buffer) => chunks.push(chunk));
+    writer.doc.on('end', () => resolve(Buffer.concat(chunks)));
+    writer.doc.on('error', reject);
+    try {
+      writeReport(writer, report);
+      writer.doc.end();
+    } catch (error) {
+      reject(error instanceof Error ? error : new Error(String(error)));
+    }
+  });
+}

@@ -1,0 +1,38 @@
+import { Controller, Get, Res, StreamableFile } from '@nestjs/common';
+import { ApiBearerAuth, ApiNotFoundResponse, ApiOkResponse, ApiOperation, ApiProduces, ApiTags } from '@nestjs/swagger';
+import type { Response } from 'express';
+import type { AuthUser } from '../auth/auth-user';
+import { CurrentUser } from '../auth/decorators/current-user.decorator';
+import { ApiErrorBodyDto } from '../common/dto/api-error-body.dto';
+import { UuidParam } from '../common/uuid-param';
+import { ReportsService } from './reports.service';
+
+@ApiTags('reports')
+@ApiBearerAuth()
+@Controller('inspections')
+export class ReportsController {
+  constructor(private readonly reports: ReportsService) {}
+
+  @Get(':id/report.pdf')
+  @ApiOperation({
+    summary:
+      'The inspection report as PDF: vehicles, driver, times, every defect with its measurement and limit, repairs and signatures.',
+  })
+  @ApiProduces('application/pdf')
+  @ApiOkResponse({ description: 'The PDF.' })
+  @ApiNotFoundResponse({ type: ApiErrorBodyDto })
+  async report(
+    @CurrentUser() user: AuthUser,
+    @UuidParam('id') id: string,
+    @Res({ passthrough: true }) response: Response,
+  ): Promise<StreamableFile> {
+    const { pdf, filename } = await this.reports.render(user, id);
+    // A report changes when repairs or the next driver's signature are added: never cache it.
+    response.setHeader('Cache-Control', 'no-store');
+    return new StreamableFile(pdf, {
+      type: 'application/pdf',
+      length: pdf.length,
+      disposition: `inline; filename="${filename}"`,
+    });
+  }
+}

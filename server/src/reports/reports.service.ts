@@ -1,0 +1,65 @@
+import { Injectable } from '@nestjs/common';
+import { InjectRepository } from '@nestjs/typeorm';
+import { In, Repository } from 'typeorm';
+import type { AuthUser } from '../auth/auth-user';
+import { Signature } from '../inspections/entities/signature.entity';
+import { InspectionsService } from '../inspections/inspections.service';
+import { Organization } from '../organizations/entities/organization.entity';
+import { Vehicle } from '../vehicles/entities/vehicle.entity';
+import { renderInspectionReport, type InspectionReport } from './inspection-report';
+
+export interface RenderedReport {
+  pdf: Buffer;
+  filename: string;
+}
+
+@Injectable()
+export class ReportsService {
+  constructor(
+    private readonly inspections: InspectionsService,
+    @InjectRepository(Organization) private readonly organizations: Repository<Organization>,
+    @InjectRepository(Vehicle) private readonly vehicles: Repository<Vehicle>,
+    @InjectRepository(Signature) private readonly signatures: Repository<Signature>,
+  ) {}
+
+  // The report of an inspection the caller may read (InspectionsService.get decides, 404 otherwise).
+  async build(user: AuthUser, inspectionId: string, now = new Date()): Promise<InspectionReport> {
+    const inspection = await this.inspections.get(user, inspectionId);
+    const vehicleIds = inspection.vehicles.map((v) => v.id);
+    const [organization, vehicleRows, drawings] = await Promise.all([
+      this.organizations.findOneByOrFail({ id: user.organizationId }),
+      this.vehicles.findBy({ id: In(vehicleIds), organizationId: user.organizationId }),
+      this.signatures.find({ select: { id: true, drawing: true }, where: { inspectionId } }),
+    ]);
+    const byId = new Map(vehicleRows.map((v) => [v.id, v]));
+    const drawingOf = new Map(drawings.map((s) => [s.id, s.drawing]));
+    return {
+      organizationName: organization.name,
+      inspection,
+      // VIN and plate as the vehicle stands now: the inspection keeps only unit, kind and configuration.
+      vehicles: inspection.vehicles.map((v) => ({
+        unitNumber: v.unitNumber,
+        kind: v.kind,
+        vin: byId.get(v.id)?.vin ?? '—',
+        plate: byId.get(v.id)?.plate ?? '—',
+      })),
+      signatures: inspection.signatures.map((s) => ({
+        role: s.role,
+        name: s.name,
+        signerName: s.signer.name,
+        statement: s.statement,
+        signedAt: s.signedAt,
+        drawing: drawingOf.get(s.id) ?? null,
+      })),
+      generatedAt: now.toISOString(),
+    };
+  }
+
+  async render(user: AuthUser, inspectionId: string): Promise<RenderedReport> {
+    const report = await this.build(user, inspectionId);
+    const units = report.vehicles.map((v) => v.unitNumber).join('-');
+    const day = report.inspection.startedAt.slice(0, 10);
+    const filename = `yardcall-${report.inspection.kind}-${units}-${day}.pdf`.replace(/[^A-Za-z0-9._-]/g, '_');
+    return { pdf: await renderInspectionReport(report), filename };
+  }
+}

@@ -1,0 +1,327 @@
+import {
+  safetyCaution,
+  type DefectResponse,
+  type InspectionResponse,
+  type ItemResultResponse,
+  type Role,
+  type VehicleRequest,
+  type VehicleResponse,
+  type VoiceNoteResponse,
+} from '@yardcall/shared';
+import { randomInt, randomUUID } from 'node:crypto';
+import request from 'supertest';
+import { renderInspectionReport, type InspectionReport } from '../src/reports/inspection-report';
+import { pathBounds } from '../src/reports/signature-drawing';
+import { bearer, bodyOf, errorBody, login, OTHER_ORG_ADMIN, startApp, tokensByRole, type TestApp } from './helpers';
+import { makePng } from './media-fixtures';
+import { pdfText, squash } from './pdf-text';
+
+const PNG_DRAWING = `data:image/png;base64,${makePng().toString('base64')}`;
+
+function treadDefect(): DefectResponse {
+  return {
+    id: randomUUID(),
+    inspectionId: 'a1b2c3d4-0000-4000-8000-000000000001',
+    vehicle: { id: randomUUID(), unitNumber: 'KV-118', kind: 'tractor' },
+    itemKey: 'u0.axle0.left.tire.tread',
+    title: 'Tread depth',
+    positionLabel: 'Tractor, steer axle, left tire',
+    safety: true,
+    detail: 'tread worn down to the wear bars on the outer edge',
+    measurement: { quantity: 'tread_depth', value: 3, unit: 'in/32' },
+    limit: { value: 4, unit: 'in/32', source: '49 CFR 393.75(b)' },
+    status: 'repaired',
+    createdAt: '2026-11-03T06:21:00.000Z',
+    repair: {
+      action: 'repaired',
+      note: 'Replaced the left steer tire, torqued lug nuts to spec',
+      deferredUntil: null,
+      mechanic: { id: randomUUID(), name: 'Priya Natarajan' },
+      signedAt: '2026-11-03T09:40:00.000Z',
+    },
+  };
+}
+
+function handMadeReport(defects: DefectResponse[]): InspectionReport {
+  const heard: ItemResultResponse = {
+    id: randomUUID(),
+    clientId: 'r1',
+    itemKey: 'u0.axle0.left.tire.tread',
+    answer: 'defect',
+    measurement: { quantity: 'tread_depth', value: 3, unit: 'in/32' },
+    verdict: 'out_of_limit',
+    limit: { value: 4, unit: 'in/32', source: '49 CFR 393.75(b)' },
+    detail: null,
+    heard: 'three thirty seconds',
+    confidence: 0.92,
+    answeredAt: '2026-11-03T06:20:00.000Z',
+  };
+  const note: VoiceNoteResponse = {
+    id: randomUUID(),
+    clientId: 'n1',
+    itemKey: 'u0.axle0.left.tire.tread',
+    heard: 'cupping on the shoulder as well',
+    durationMs: 4200,
+    mimeType: 'audio/webm',
+    sizeBytes: 33600,
+    sha256: 'ab'.repeat(32),
+    createdAt: '2026-11-03T06:20:30.000Z',
+    audioUrl: '/api/notes/x/audio',
+  };
+  return {
+    organizationName: 'Kestrel Valley Freight',
+    generatedAt: '2026-11-03T10:00:00.000Z',
+    vehicles: [
+      { unitNumber: 'KV-118', kind: 'tractor', vin: '7YCTA3K28SN100217', plate: 'KVF 9101' },
+      { unitNumber: 'KV-T40', kind: 'trailer', vin: '7YCVD2F10SN200114', plate: 'KVT 9102' },
+    ],
+    inspection: {
+      id: 'a1b2c3d4-0000-4000-8000-000000000001',
+      kind: 'pre_trip',
+      status: 'submitted',
+      locale: 'en',
+      startedAt: '2026-11-03T06:02:00.000Z',
+      submittedAt: '2026-11-03T06:31:00.000Z',
+      odometer: 412803,
+      location: 'Kestrel Valley yard, bay 3',
+      driver: { id: randomUUID(), name: 'Dana Okafor' },
+      defects,
+      results: [heard],
+      notes: [note],
+    },
+    signatures: [
+      {
+        role: 'driver',
+        name: 'Dana Okafor',
+        signerName: 'Dana Okafor',
+        statement: 'I inspected units KV-118 and KV-T40 and report the defects listed.',
+        signedAt: '2026-11-03T06:31:00.000Z',
+        drawing: 'M10 40 C 20 10, 40 10, 50 40 S 80 70, 90 40 l 30 -5 h 10 v 8 z',
+      },
+      {
+        role: 'mechanic',
+        name: 'Priya Natarajan',
+        signerName: 'Priya Natarajan',
+        statement: 'The defect was repaired.',
+        signedAt: '2026-11-03T09:40:00.000Z',
+        drawing: PNG_DRAWING,
+      },
+      {
+        role: 'next_driver',
+        name: 'Tomas Reyes',
+        signerName: 'Tomas Reyes',
+        statement: 'I reviewed the last report and the repair certification.',
+        signedAt: '2026-11-03T11:05:00.000Z',
+        drawing: null,
+      },
+    ],
+  };
+}
+
+describe('inspection report PDF (built from a hand-made inspection)', () => {
+  // One render of the full report serves the tests that only read it.
+  let pdf: Buffer;
+  let text: string;
+  beforeAll(async () => {
+    pdf = await renderInspectionReport(handMadeReport([treadDefect()]));
+    text = (await pdfText(pdf)).text;
+  });
+
+  it('lists the organisation, vehicles, driver, times, odometer and location', () => {
+    for (const expected of [
+      'Pre-trip inspection report',
+      'Kestrel Valley Freight',
+      'Unit KV-118 (Tractor)',
+      'VIN 7YCTA3K28SN100217',
+      'Plate KVF 9101',
+      'Unit KV-T40 (Trailer)',
+      'Driver: Dana Okafor',
+      'Started: 2026-11-03 06:02 UTC',
+      'Submitted: 2026-11-03 06:31 UTC',
+      'Odometer: 412,803',
+      'Location: Kestrel Valley yard, bay 3',
+    ]) {
+      expect({ expected, found: squash(text).includes(squash(expected)) }).toEqual({ expected, found: true });
+    }
+  });
+
+  it("shows each defect with its position, the driver's words, the measurement, its limit and source, and the repair", () => {
+    for (const expected of [
+      'Defects (1)',
+      'Tread depth: Tractor, steer axle, left tire (unit KV-118), safety item',
+      'Driver\'s words: "tread worn down to the wear bars on the outer edge"',
+      'Heard: "three thirty seconds"',
+      'Voice note (4.2 s): "cupping on the shoulder as well"',
+      '49 CFR 393.75(b)',
+      'Status: Repaired',
+      'by Priya Natarajan, 2026-11-03 09:40 UTC: Replaced the left steer tire, torqued lug nuts to spec',
+    ]) {
+      expect({ expected, found: squash(text).includes(squash(expected)) }).toEqual({ expected, found: true });
+    }
+    expect(text).toMatch(/Measured:\s*3\b[^;]*;\s*limit\s*4\b/);
+  });
+
+  it('carries the safety caution and every signature with its statement', async () => {
+    for (const expected of [
+      safetyCaution('en'),
+      'Driver: Dana Okafor, 2026-11-03 06:31 UTC',
+      'I inspected units KV-118 and KV-T40 and report the defects listed.',
+      'Mechanic: Priya Natarajan, 2026-11-03 09:40 UTC',
+      'Next driver: Tomas Reyes, 2026-11-03 11:05 UTC',
+      'I reviewed the last report and the repair certification.',
+    ]) {
+      expect({ expected, found: squash(text).includes(squash(expected)) }).toEqual({ expected, found: true });
+    }
+    // The mechanic's PNG drawing is embedded as an image; without drawings there is none.
+    expect(pdf.includes('/Subtype /Image')).toBe(true);
+    const plain = handMadeReport([treadDefect()]);
+    plain.signatures = plain.signatures.map((s) => ({ ...s, drawing: null }));
+    expect((await renderInspectionReport(plain)).includes('/Subtype /Image')).toBe(false);
+  });
+
+  it('says so when no defect was found', async () => {
+    const { text } = await pdfText(await renderInspectionReport(handMadeReport([])));
+    expect(squash(text)).toContain(squash('Defects (0)'));
+    expect(squash(text)).toContain(squash('No defect was found or reported on this inspection.'));
+  });
+
+  it('keeps the typed name and says so when a drawing cannot be shown', async () => {
+    const report = handMadeReport([]);
+    report.signatures = [{ ...report.signatures[0]!, drawing: '<script>alert(1)</script>' }];
+    const { text } = await pdfText(await renderInspectionReport(report));
+    expect(squash(text)).toContain(squash('Driver: Dana Okafor'));
+    expect(squash(text)).toContain(squash('The drawn signature could not be shown; the typed name stands.'));
+  });
+
+  it('runs onto more pages for many defects, numbering each page', async () => {
+    const many = Array.from({ length: 30 }, (_, i) => ({ ...treadDefect(), title: `Defect number ${i + 1}` }));
+    const { pages, text } = await pdfText(await renderInspectionReport(handMadeReport(many)));
+    expect(pages).toBeGreaterThan(2);
+    expect(squash(text)).toContain(squash(`page ${pages} of ${pages}`));
+    expect(squash(text)).toContain(squash('30. Defect number 30'));
+  });
+});
+
+describe('signature path bounds', () => {
+  it('follows absolute and relative commands', () => {
+    expect(pathBounds('M10 20 L30 5 l5 5 h-50 v40 z')).toEqual({ minX: -15, minY: 5, width: 50, height: 45 });
+  });
+
+  it('refuses text that is not path data', () => {
+    expect(pathBounds('hello')).toBeNull();
+    expect(pathBounds('M10')).toBeNull();
+  });
+});
+
+function tractor(unitNumber: string): VehicleRequest {
+  return {
+    unitNumber,
+    kind: 'tractor',
+    vin: '7YCTA3K28SN100217',
+    plate: 'KVR 5120',
+    config: {
+      axles: [
+        {
+          position: 'steer',
+          tires: 'single',
+          brake: 'air_drum',
+          chamber: { size: 20, stroke: 'standard' },
+          tire: { size: '11R22.5', coldInflationPsi: 110, sidewallMaxPsi: 120 },
+        },
+        {
+          position: 'drive',
+          tires: 'dual',
+          brake: 'air_drum',
+          chamber: { size: 30, stroke: 'long' },
+          tire: { size: '11R22.5', coldInflationPsi: 100, sidewallMaxPsi: 120 },
+        },
+      ],
+      steering: { wheelDiameterIn: 20, type: 'power' },
+    },
+  };
+}
+
+describe('GET /api/inspections/:id/report.pdf', () => {
+  let t: TestApp;
+  let tokens: Record<Role, string>;
+
+  beforeAll(async () => {
+    t = await startApp();
+    tokens = await tokensByRole(t.url);
+  });
+  afterAll(async () => {
+    await t.close();
+  });
+
+  it("answers the submitted report with the driver's defect words and signature, and 404 to another organisation", async () => {
+    const unit = `RP-${randomInt(10_000, 99_999)}`;
+    const vehicle = bodyOf<VehicleResponse>(
+      await request(t.url).post('/api/vehicles').set(bearer(tokens.admin)).send(tractor(unit)),
+    );
+    const started = await request(t.url)
+      .post('/api/inspections')
+      .set(bearer(tokens.driver))
+      .send({
+        vehicleIds: [vehicle.id],
+        kind: 'post_trip',
+        startedAt: new Date().toISOString(),
+        clientId: randomUUID(),
+        location: 'North gate',
+      });
+    expect(started.status).toBe(201);
+    const inspection = bodyOf<InspectionResponse>(started);
+    const item = inspection.checklist.items.find((i) => i.expects.type === 'check')!;
+    const results = await request(t.url)
+      .put(`/api/inspections/${inspection.id}/results`)
+      .set(bearer(tokens.driver))
+      .send({
+        results: [
+          {
+            itemKey: item.key,
+            answer: 'defect',
+            detail: 'cracked lens, water inside',
+            answeredAt: new Date().toISOString(),
+            clientId: randomUUID(),
+          },
+        ],
+      });
+    expect(results.status).toBe(200);
+    const submit = await request(t.url)
+      .post(`/api/inspections/${inspection.id}/submit`)
+      .set(bearer(tokens.driver))
+      .send({ signature: { name: 'Dana Okafor', drawing: 'M10 10 L40 20 L60 5' }, odometer: 98765 });
+    expect(submit.status).toBeLessThan(300);
+
+    const response = await request(t.url)
+      .get(`/api/inspections/${inspection.id}/report.pdf`)
+      .set(bearer(tokens.supervisor))
+      .buffer(true)
+      .parse((res, done) => {
+        const chunks: Buffer[] = [];
+        res.on('data', (chunk: Buffer) => chunks.push(chunk));
+        res.on('end', () => done(null, Buffer.concat(chunks)));
+      });
+    expect(response.status).toBe(200);
+    expect(response.headers['content-type']).toBe('application/pdf');
+    expect(response.headers['content-disposition']).toMatch(/^inline; filename="yardcall-post_trip-RP-\d+-/);
+    const { text } = await pdfText(response.body as Buffer);
+    for (const expected of [
+      'Post-trip inspection report',
+      `Unit ${unit} (Tractor)`,
+      'VIN 7YCTA3K28SN100217',
+      'Odometer: 98,765',
+      'Location: North gate',
+      item.title,
+      item.positionLabel,
+      'Driver\'s words: "cracked lens, water inside"',
+      'Driver: Dana Okafor',
+    ]) {
+      expect({ expected, found: squash(text).includes(squash(expected)) }).toEqual({ expected, found: true });
+    }
+
+    const other = (await login(t.url, OTHER_ORG_ADMIN)).accessToken;
+    const foreign = await request(t.url).get(`/api/inspections/${inspection.id}/report.pdf`).set(bearer(other));
+    expect(foreign.status).toBe(404);
+    expect(errorBody(foreign).message).toMatch(/inspection/i);
+  });
+});
