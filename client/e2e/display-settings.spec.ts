@@ -85,10 +85,15 @@ test('night theme at 200 % text on a phone keeps every control visible and usabl
 test('glove mode makes the main controls at least 20 mm', async ({ page }) => {
   await signIn(page, 'driver@yardcall.test');
   await page.goto('/settings');
+  const saved = page.waitForResponse(
+    (response) => response.url().endsWith('/api/auth/me/settings') && response.request().method() === 'PATCH',
+  );
   await page.getByRole('switch', { name: 'Glove mode' }).click();
   await expect(page.locator('html')).toHaveClass(/glove/);
+  await saved;
   await page.goto('/driver');
   const start = page.getByTestId('start-inspection');
+  await expect(start).toBeVisible();
   const box = await start.boundingBox();
   // About 20 mm for gloved fingers (Duff et al. 2010): 20 mm is 75.6 CSS px at 96 px per inch.
   expect(box?.height ?? 0).toBeGreaterThanOrEqual(75);

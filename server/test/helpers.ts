@@ -1,6 +1,15 @@
 import type { INestApplication } from '@nestjs/common';
 import { NestFactory } from '@nestjs/core';
-import type { LoginResponse, Role } from '@yardcall/shared';
+import {
+  sampleTractor,
+  sampleTrailer,
+  type InspectionResponse,
+  type LoginResponse,
+  type Role,
+  type VehicleRequest,
+  type VehicleResponse,
+} from '@yardcall/shared';
+import { randomUUID } from 'node:crypto';
 import type { Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import request from 'supertest';
@@ -8,8 +17,9 @@ import { DataSource } from 'typeorm';
 import { AppModule } from '../src/app.module';
 import { configureApp } from '../src/app.setup';
 import { DEMO_PASSWORD } from '../src/database/seed-data';
+import { bodyOf } from './http';
 
-export { bodyOf, errorBody } from './http';
+export { binary, bodyOf, errorBody } from './http';
 
 export const ROLE_EMAILS: Record<Role, string> = {
   driver: 'driver@yardcall.test',
@@ -19,6 +29,8 @@ export const ROLE_EMAILS: Record<Role, string> = {
   admin: 'admin@yardcall.test',
 };
 export const OTHER_ORG_ADMIN = 'admin@tamarack-bay.test';
+// A second driver of the demo organisation.
+export const SECOND_DRIVER = 'tomas.reyes@yardcall.test';
 
 export interface TestApp {
   app: INestApplication;
@@ -47,10 +59,15 @@ export async function login(url: string, email: string, password = DEMO_PASSWORD
   return response.body as LoginResponse;
 }
 
+// The access token of a seeded user.
+export async function signIn(url: string, email: string): Promise<string> {
+  return (await login(url, email)).accessToken;
+}
+
 export async function tokensByRole(url: string): Promise<Record<Role, string>> {
   const entries = await Promise.all(
     (Object.entries(ROLE_EMAILS) as [Role, string][]).map(
-      async ([role, email]) => [role, (await login(url, email)).accessToken] as const,
+      async ([role, email]) => [role, await signIn(url, email)] as const,
     ),
   );
   return Object.fromEntries(entries) as Record<Role, string>;
@@ -58,4 +75,50 @@ export async function tokensByRole(url: string): Promise<Record<Role, string>> {
 
 export function bearer(token: string): { Authorization: string } {
   return { Authorization: `Bearer ${token}` };
+}
+
+// The shared demo tractor and trailer under a unit number of the test's own: for tests that need
+// any valid vehicle, not a particular configuration.
+export function tractorRequest(unitNumber: string, overrides: Partial<VehicleRequest> = {}): VehicleRequest {
+  return { ...sampleTractor(), unitNumber, ...overrides };
+}
+
+export function trailerRequest(unitNumber: string): VehicleRequest {
+  return { ...sampleTrailer(), unitNumber };
+}
+
+export async function createVehicle(url: string, token: string, body: VehicleRequest): Promise<VehicleResponse> {
+  const response = await request(url).post('/api/vehicles').set(bearer(token)).send(body);
+  expect(response.status).toBe(201);
+  return bodyOf<VehicleResponse>(response);
+}
+
+export interface InspectionStart {
+  vehicleIds: string[];
+  kind?: string;
+  startedAt?: string;
+  clientId?: string;
+  location?: string;
+}
+
+// POST /api/inspections; unless the test says otherwise a pre-trip starting now under a fresh clientId.
+export function postInspection(url: string, token: string, start: InspectionStart): request.Test {
+  const {
+    vehicleIds,
+    kind = 'pre_trip',
+    startedAt = new Date().toISOString(),
+    clientId = randomUUID(),
+    location,
+  } = start;
+  // JSON leaves out a location the test did not give.
+  return request(url)
+    .post('/api/inspections')
+    .set(bearer(token))
+    .send({ vehicleIds, kind, startedAt, clientId, location });
+}
+
+export async function startInspection(url: string, token: string, start: InspectionStart): Promise<InspectionResponse> {
+  const response = await postInspection(url, token, start);
+  expect(response.status).toBe(201);
+  return bodyOf<InspectionResponse>(response);
 }

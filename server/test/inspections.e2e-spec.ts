@@ -13,59 +13,24 @@ import type {
 } from '@yardcall/shared';
 import { randomInt, randomUUID } from 'node:crypto';
 import request from 'supertest';
-import { bearer, bodyOf, errorBody, login, OTHER_ORG_ADMIN, startApp, tokensByRole, type TestApp } from './helpers';
+import {
+  bearer,
+  bodyOf,
+  createVehicle,
+  errorBody,
+  OTHER_ORG_ADMIN,
+  postInspection,
+  SECOND_DRIVER,
+  signIn,
+  startApp,
+  tokensByRole,
+  tractorRequest,
+  trailerRequest,
+  type TestApp,
+} from './helpers';
 
 // A unit number free in this run, so the suite also passes against a database kept from an earlier run.
 const unit = (prefix: string) => `${prefix}-${randomInt(10_000, 99_999)}`;
-const SECOND_DRIVER = 'tomas.reyes@yardcall.test';
-
-function tractor(unitNumber: string): VehicleRequest {
-  return {
-    unitNumber,
-    kind: 'tractor',
-    vin: '7YCTA3K28SN100217',
-    plate: 'KVF 9101',
-    config: {
-      axles: [
-        {
-          position: 'steer',
-          tires: 'single',
-          brake: 'air_drum',
-          chamber: { size: 20, stroke: 'standard' },
-          tire: { size: '11R22.5', coldInflationPsi: 110, sidewallMaxPsi: 120 },
-        },
-        {
-          position: 'drive',
-          tires: 'dual',
-          brake: 'air_drum',
-          chamber: { size: 30, stroke: 'long' },
-          tire: { size: '11R22.5', coldInflationPsi: 100, sidewallMaxPsi: 120 },
-        },
-      ],
-      steering: { wheelDiameterIn: 20, type: 'power' },
-    },
-  };
-}
-
-function trailer(unitNumber: string): VehicleRequest {
-  return {
-    unitNumber,
-    kind: 'trailer',
-    vin: '7YCVD2F10SN200114',
-    plate: 'KVT 9102',
-    config: {
-      axles: [
-        {
-          position: 'trailer',
-          tires: 'dual',
-          brake: 'air_drum',
-          chamber: { size: 30, stroke: 'long' },
-          tire: { size: '11R22.5', coldInflationPsi: 100, sidewallMaxPsi: 120 },
-        },
-      ],
-    },
-  };
-}
 
 const steerTread = (items: ChecklistItem[]) =>
   items.find(
@@ -85,33 +50,21 @@ describe('inspections and defects', () => {
   beforeAll(async () => {
     t = await startApp();
     tokens = await tokensByRole(t.url);
-    secondDriver = (await login(t.url, SECOND_DRIVER)).accessToken;
-    otherAdmin = (await login(t.url, OTHER_ORG_ADMIN)).accessToken;
+    secondDriver = await signIn(t.url, SECOND_DRIVER);
+    otherAdmin = await signIn(t.url, OTHER_ORG_ADMIN);
   });
   afterAll(async () => {
     await t.close();
   });
 
-  async function addVehicle(body: VehicleRequest): Promise<VehicleResponse> {
-    const response = await request(t.url).post('/api/vehicles').set(bearer(tokens.admin)).send(body);
-    expect(response.status).toBe(201);
-    return bodyOf<VehicleResponse>(response);
-  }
+  const addVehicle = (body: VehicleRequest) => createVehicle(t.url, tokens.admin, body);
 
   async function start(
     vehicleIds: string[],
     options: { token?: string; kind?: string; startedAt?: string; clientId?: string } = {},
   ) {
-    return request(t.url)
-      .post('/api/inspections')
-      .set(bearer(options.token ?? tokens.driver))
-      .send({
-        vehicleIds,
-        kind: options.kind ?? 'pre_trip',
-        startedAt: options.startedAt ?? nextStart(),
-        clientId: options.clientId ?? randomUUID(),
-        location: 'Kestrel Valley yard, bay 3',
-      });
+    const { token = tokens.driver, startedAt = nextStart(), ...rest } = options;
+    return postInspection(t.url, token, { vehicleIds, startedAt, location: 'Kestrel Valley yard, bay 3', ...rest });
   }
 
   async function started(vehicleIds: string[], options: Parameters<typeof start>[1] = {}) {
@@ -147,8 +100,8 @@ describe('inspections and defects', () => {
   }
 
   it('builds the checklist from the power unit and trailer, and a retried create answers the same inspection', async () => {
-    const power = await addVehicle(tractor(unit('IT')));
-    const van = await addVehicle(trailer(unit('IV')));
+    const power = await addVehicle(tractorRequest(unit('IT')));
+    const van = await addVehicle(trailerRequest(unit('IV')));
     const clientId = randomUUID();
     const startedAt = nextStart();
     const first = await start([power.id, van.id], { clientId, startedAt });
@@ -171,9 +124,9 @@ describe('inspections and defects', () => {
   });
 
   it('keeps the checklist of an inspection when its vehicle is edited later', async () => {
-    const power = await addVehicle(tractor(unit('IS')));
+    const power = await addVehicle(tractorRequest(unit('IS')));
     const inspection = await started([power.id]);
-    const config = tractor('x').config;
+    const config = tractorRequest('x').config;
     config.axles.push({ ...config.axles[1]!, position: 'drive' });
     const edit = await request(t.url).patch(`/api/vehicles/${power.id}`).set(bearer(tokens.admin)).send({ config });
     expect(edit.status).toBe(200);
@@ -184,9 +137,9 @@ describe('inspections and defects', () => {
   });
 
   it('refuses a combination with the trailer first or two power units, with a sentence', async () => {
-    const power = await addVehicle(tractor(unit('IC')));
-    const power2 = await addVehicle(tractor(unit('ID')));
-    const van = await addVehicle(trailer(unit('IW')));
+    const power = await addVehicle(tractorRequest(unit('IC')));
+    const power2 = await addVehicle(tractorRequest(unit('ID')));
+    const van = await addVehicle(trailerRequest(unit('IW')));
     for (const ids of [
       [van.id, power.id],
       [power.id, power2.id],
@@ -208,7 +161,7 @@ describe('inspections and defects', () => {
   });
 
   it('stores the same batch sent twice as the same rows', async () => {
-    const power = await addVehicle(tractor(unit('IB')));
+    const power = await addVehicle(tractorRequest(unit('IB')));
     const inspection = await started([power.id]);
     const at = Date.parse(inspection.startedAt);
     const batch = inspection.checklist.items
@@ -225,7 +178,7 @@ describe('inspections and defects', () => {
   });
 
   it('keeps the latest answer of an item when batches arrive out of order', async () => {
-    const power = await addVehicle(tractor(unit('IO')));
+    const power = await addVehicle(tractorRequest(unit('IO')));
     const inspection = await started([power.id]);
     const item = nonSafetyCheck(inspection.checklist.items);
     const at = Date.parse(inspection.startedAt);
@@ -248,7 +201,7 @@ describe('inspections and defects', () => {
   });
 
   it("corrects a client verdict that contradicts the limit and names the limit's source", async () => {
-    const power = await addVehicle(tractor(unit('IL')));
+    const power = await addVehicle(tractorRequest(unit('IL')));
     const inspection = await started([power.id]);
     const item = steerTread(inspection.checklist.items);
     const at = new Date(Date.parse(inspection.startedAt) + 60_000).toISOString();
@@ -277,7 +230,7 @@ describe('inspections and defects', () => {
   });
 
   it('refuses item keys not on the checklist with a 400 naming them, and stores nothing of the batch', async () => {
-    const power = await addVehicle(tractor(unit('IK')));
+    const power = await addVehicle(tractorRequest(unit('IK')));
     const inspection = await started([power.id]);
     const at = new Date(Date.parse(inspection.startedAt) + 5000).toISOString();
     const good = answer(inspection.checklist.items[0]!, at);
@@ -299,7 +252,7 @@ describe('inspections and defects', () => {
   });
 
   it("answers 404 for another organisation's inspection and for another driver's", async () => {
-    const power = await addVehicle(tractor(unit('IN')));
+    const power = await addVehicle(tractorRequest(unit('IN')));
     const inspection = await started([power.id]);
     const other = await request(t.url).get(`/api/inspections/${inspection.id}`).set(bearer(otherAdmin));
     expect(other.status).toBe(404);
@@ -322,7 +275,7 @@ describe('inspections and defects', () => {
   });
 
   it('submits: signs, opens defects, takes the vehicle out of service, and then refuses every change with 409', async () => {
-    const power = await addVehicle(tractor(unit('IU')));
+    const power = await addVehicle(tractorRequest(unit('IU')));
     const inspection = await started([power.id]);
     const tread = steerTread(inspection.checklist.items);
     const oil = nonSafetyCheck(inspection.checklist.items);
@@ -366,7 +319,7 @@ describe('inspections and defects', () => {
   });
 
   it('certifies repairs: a deferral needs a reason and a future date, a safety defect cannot wait, and the last repair returns the vehicle to service', async () => {
-    const power = await addVehicle(tractor(unit('IR')));
+    const power = await addVehicle(tractorRequest(unit('IR')));
     const inspection = await started([power.id]);
     const tread = steerTread(inspection.checklist.items);
     const oil = nonSafetyCheck(inspection.checklist.items);
@@ -449,7 +402,7 @@ describe('inspections and defects', () => {
   });
 
   it("blocks the next pre-trip until a driver has reviewed and signed the last report's certified repairs", async () => {
-    const power = await addVehicle(tractor(unit('IA')));
+    const power = await addVehicle(tractorRequest(unit('IA')));
     const inspection = await started([power.id]);
     const tread = steerTread(inspection.checklist.items);
     await put(inspection.id, [
@@ -517,7 +470,7 @@ describe('inspections and defects', () => {
   });
 
   it('lists newest first with filters, and pages without duplicates or gaps', async () => {
-    const power = await addVehicle(tractor(unit('IP')));
+    const power = await addVehicle(tractorRequest(unit('IP')));
     const created: InspectionResponse[] = [];
     const tie = nextStart();
     for (let i = 0; i < 7; i += 1) {

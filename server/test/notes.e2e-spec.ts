@@ -5,8 +5,6 @@ import {
   type InspectionResponse,
   type PhotoResponse,
   type Role,
-  type VehicleRequest,
-  type VehicleResponse,
   type VoiceNoteResponse,
 } from '@yardcall/shared';
 import { createHash, randomInt, randomUUID } from 'node:crypto';
@@ -14,47 +12,24 @@ import { existsSync } from 'node:fs';
 import { readFile, rm } from 'node:fs/promises';
 import { dirname, join } from 'node:path';
 import request from 'supertest';
-import { bearer, bodyOf, errorBody, login, OTHER_ORG_ADMIN, startApp, tokensByRole, type TestApp } from './helpers';
+import {
+  bearer,
+  binary,
+  bodyOf,
+  createVehicle,
+  errorBody,
+  OTHER_ORG_ADMIN,
+  SECOND_DRIVER,
+  signIn,
+  startApp,
+  startInspection,
+  tokensByRole,
+  tractorRequest,
+  type TestApp,
+} from './helpers';
 import { makeOggOpusHead, makePng, makeWav } from './media-fixtures';
 
 const sha256 = (bytes: Buffer) => createHash('sha256').update(bytes).digest('hex');
-
-function tractor(unitNumber: string): VehicleRequest {
-  return {
-    unitNumber,
-    kind: 'tractor',
-    vin: '7YCTA3K28SN100217',
-    plate: 'KVN 4410',
-    config: {
-      axles: [
-        {
-          position: 'steer',
-          tires: 'single',
-          brake: 'air_drum',
-          chamber: { size: 20, stroke: 'standard' },
-          tire: { size: '11R22.5', coldInflationPsi: 110, sidewallMaxPsi: 120 },
-        },
-        {
-          position: 'drive',
-          tires: 'dual',
-          brake: 'air_drum',
-          chamber: { size: 30, stroke: 'long' },
-          tire: { size: '11R22.5', coldInflationPsi: 100, sidewallMaxPsi: 120 },
-        },
-      ],
-      steering: { wheelDiameterIn: 20, type: 'power' },
-    },
-  };
-}
-
-// Buffers the response body whatever its type, so binary bodies compare byte for byte.
-function binary(call: request.Test): request.Test {
-  return call.buffer(true).parse((response, done) => {
-    const chunks: Buffer[] = [];
-    response.on('data', (chunk: Buffer) => chunks.push(chunk));
-    response.on('end', () => done(null, Buffer.concat(chunks)));
-  });
-}
 
 describe('voice notes and photos', () => {
   let t: TestApp;
@@ -67,8 +42,8 @@ describe('voice notes and photos', () => {
   beforeAll(async () => {
     t = await startApp();
     tokens = await tokensByRole(t.url);
-    otherAdmin = (await login(t.url, OTHER_ORG_ADMIN)).accessToken;
-    inspection = await startInspection();
+    otherAdmin = await signIn(t.url, OTHER_ORG_ADMIN);
+    inspection = await newInspection();
     itemKey = inspection.checklist.items[0]!.key;
   });
   afterAll(async () => {
@@ -76,21 +51,9 @@ describe('voice notes and photos', () => {
     await rm(dirname(NOTES_STORAGE_DIR), { recursive: true, force: true });
   });
 
-  async function startInspection(): Promise<InspectionResponse> {
-    const unit = `NT-${randomInt(10_000, 99_999)}`;
-    const vehicle = await request(t.url).post('/api/vehicles').set(bearer(tokens.admin)).send(tractor(unit));
-    expect(vehicle.status).toBe(201);
-    const response = await request(t.url)
-      .post('/api/inspections')
-      .set(bearer(tokens.driver))
-      .send({
-        vehicleIds: [bodyOf<VehicleResponse>(vehicle).id],
-        kind: 'pre_trip',
-        startedAt: new Date().toISOString(),
-        clientId: randomUUID(),
-      });
-    expect(response.status).toBe(201);
-    return bodyOf<InspectionResponse>(response);
+  async function newInspection(): Promise<InspectionResponse> {
+    const vehicle = await createVehicle(t.url, tokens.admin, tractorRequest(`NT-${randomInt(10_000, 99_999)}`));
+    return startInspection(t.url, tokens.driver, { vehicleIds: [vehicle.id] });
   }
 
   interface NoteFields {
@@ -242,7 +205,7 @@ describe('voice notes and photos', () => {
     });
 
     it("refuses anyone but the inspection's driver: another driver gets 404, other roles 403", async () => {
-      const otherDriver = (await login(t.url, 'tomas.reyes@yardcall.test')).accessToken;
+      const otherDriver = await signIn(t.url, SECOND_DRIVER);
       const response = await uploadNote(inspection.id, wav, {}, otherDriver);
       expect(response.status).toBe(404);
       expect(errorBody(response).message).toMatch(/inspection/i);
@@ -362,7 +325,7 @@ describe('voice notes and photos', () => {
 
   describe('after the inspection is submitted', () => {
     it('refuses a new note with 409 but still answers a retried one', async () => {
-      const own = await startInspection();
+      const own = await newInspection();
       const clientId = randomUUID();
       const key = own.checklist.items[0]!.key;
       expect((await uploadNote(own.id, wav, { clientId, itemKey: key })).status).toBe(201);

@@ -1,18 +1,27 @@
 import {
   safetyCaution,
   type DefectResponse,
-  type InspectionResponse,
   type ItemResultResponse,
   type Role,
-  type VehicleRequest,
-  type VehicleResponse,
   type VoiceNoteResponse,
 } from '@yardcall/shared';
 import { randomInt, randomUUID } from 'node:crypto';
 import request from 'supertest';
 import { renderInspectionReport, type InspectionReport } from '../src/reports/inspection-report';
 import { pathBounds } from '../src/reports/signature-drawing';
-import { bearer, bodyOf, errorBody, login, OTHER_ORG_ADMIN, startApp, tokensByRole, type TestApp } from './helpers';
+import {
+  bearer,
+  binary,
+  createVehicle,
+  errorBody,
+  OTHER_ORG_ADMIN,
+  signIn,
+  startApp,
+  startInspection,
+  tokensByRole,
+  tractorRequest,
+  type TestApp,
+} from './helpers';
 import { makePng } from './media-fixtures';
 import { pdfText, squash } from './pdf-text';
 
@@ -213,34 +222,6 @@ describe('signature path bounds', () => {
   });
 });
 
-function tractor(unitNumber: string): VehicleRequest {
-  return {
-    unitNumber,
-    kind: 'tractor',
-    vin: '7YCTA3K28SN100217',
-    plate: 'KVR 5120',
-    config: {
-      axles: [
-        {
-          position: 'steer',
-          tires: 'single',
-          brake: 'air_drum',
-          chamber: { size: 20, stroke: 'standard' },
-          tire: { size: '11R22.5', coldInflationPsi: 110, sidewallMaxPsi: 120 },
-        },
-        {
-          position: 'drive',
-          tires: 'dual',
-          brake: 'air_drum',
-          chamber: { size: 30, stroke: 'long' },
-          tire: { size: '11R22.5', coldInflationPsi: 100, sidewallMaxPsi: 120 },
-        },
-      ],
-      steering: { wheelDiameterIn: 20, type: 'power' },
-    },
-  };
-}
-
 describe('GET /api/inspections/:id/report.pdf', () => {
   let t: TestApp;
   let tokens: Record<Role, string>;
@@ -255,21 +236,13 @@ describe('GET /api/inspections/:id/report.pdf', () => {
 
   it("answers the submitted report with the driver's defect words and signature, and 404 to another organisation", async () => {
     const unit = `RP-${randomInt(10_000, 99_999)}`;
-    const vehicle = bodyOf<VehicleResponse>(
-      await request(t.url).post('/api/vehicles').set(bearer(tokens.admin)).send(tractor(unit)),
-    );
-    const started = await request(t.url)
-      .post('/api/inspections')
-      .set(bearer(tokens.driver))
-      .send({
-        vehicleIds: [vehicle.id],
-        kind: 'post_trip',
-        startedAt: new Date().toISOString(),
-        clientId: randomUUID(),
-        location: 'North gate',
-      });
-    expect(started.status).toBe(201);
-    const inspection = bodyOf<InspectionResponse>(started);
+    // The report below is read for this VIN.
+    const vehicle = await createVehicle(t.url, tokens.admin, tractorRequest(unit, { vin: '7YCTA3K28SN100217' }));
+    const inspection = await startInspection(t.url, tokens.driver, {
+      vehicleIds: [vehicle.id],
+      kind: 'post_trip',
+      location: 'North gate',
+    });
     const item = inspection.checklist.items.find((i) => i.expects.type === 'check')!;
     const results = await request(t.url)
       .put(`/api/inspections/${inspection.id}/results`)
@@ -292,15 +265,9 @@ describe('GET /api/inspections/:id/report.pdf', () => {
       .send({ signature: { name: 'Dana Okafor', drawing: 'M10 10 L40 20 L60 5' }, odometer: 98765 });
     expect(submit.status).toBeLessThan(300);
 
-    const response = await request(t.url)
-      .get(`/api/inspections/${inspection.id}/report.pdf`)
-      .set(bearer(tokens.supervisor))
-      .buffer(true)
-      .parse((res, done) => {
-        const chunks: Buffer[] = [];
-        res.on('data', (chunk: Buffer) => chunks.push(chunk));
-        res.on('end', () => done(null, Buffer.concat(chunks)));
-      });
+    const response = await binary(
+      request(t.url).get(`/api/inspections/${inspection.id}/report.pdf`).set(bearer(tokens.supervisor)),
+    );
     expect(response.status).toBe(200);
     expect(response.headers['content-type']).toBe('application/pdf');
     expect(response.headers['content-disposition']).toMatch(/^inline; filename="yardcall-post_trip-RP-\d+-/);
@@ -319,7 +286,7 @@ describe('GET /api/inspections/:id/report.pdf', () => {
       expect({ expected, found: squash(text).includes(squash(expected)) }).toEqual({ expected, found: true });
     }
 
-    const other = (await login(t.url, OTHER_ORG_ADMIN)).accessToken;
+    const other = await signIn(t.url, OTHER_ORG_ADMIN);
     const foreign = await request(t.url).get(`/api/inspections/${inspection.id}/report.pdf`).set(bearer(other));
     expect(foreign.status).toBe(404);
     expect(errorBody(foreign).message).toMatch(/inspection/i);

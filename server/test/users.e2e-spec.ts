@@ -1,7 +1,17 @@
 import type { CaughtMail, InvitationSummary, LoginResponse, UserSummary } from '@yardcall/shared';
 import { randomUUID } from 'node:crypto';
 import request from 'supertest';
-import { bearer, login, OTHER_ORG_ADMIN, startApp, tokensByRole, type TestApp, errorBody, bodyOf } from './helpers';
+import {
+  bearer,
+  login,
+  OTHER_ORG_ADMIN,
+  signIn,
+  startApp,
+  tokensByRole,
+  type TestApp,
+  errorBody,
+  bodyOf,
+} from './helpers';
 
 // Each run invites fresh addresses, so the suite also passes against a database kept from an earlier run.
 const run = randomUUID().slice(0, 8);
@@ -169,7 +179,7 @@ describe('users and invitations', () => {
   it("shows an admin only the mail sent to their own organisation's users", async () => {
     const email = `private.${run}@yardcall.test`;
     expect((await invite(email)).status).toBe(201);
-    const otherAdmin = (await login(t.url, OTHER_ORG_ADMIN)).accessToken;
+    const otherAdmin = await signIn(t.url, OTHER_ORG_ADMIN);
     const outbox = await request(t.url).get('/api/mail/outbox').set(bearer(otherAdmin));
     expect(outbox.status).toBe(200);
     expect((outbox.body as CaughtMail[]).some((m) => m.to.includes(email))).toBe(false);

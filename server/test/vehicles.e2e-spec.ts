@@ -1,38 +1,21 @@
-import { validateVehicle, type VehicleRequest, type VehicleResponse } from '@yardcall/shared';
+import { validateVehicle, type VehicleResponse } from '@yardcall/shared';
 import { randomInt } from 'node:crypto';
 import request from 'supertest';
-import { bearer, login, OTHER_ORG_ADMIN, startApp, tokensByRole, type TestApp, errorBody, bodyOf } from './helpers';
+import {
+  bearer,
+  bodyOf,
+  createVehicle,
+  errorBody,
+  OTHER_ORG_ADMIN,
+  signIn,
+  startApp,
+  tokensByRole,
+  tractorRequest,
+  type TestApp,
+} from './helpers';
 
 // A unit number free in this run, so the suite also passes against a database kept from an earlier run.
 const unit = (prefix: string) => `${prefix}-${randomInt(10_000, 99_999)}`;
-
-function tractor(unitNumber: string): VehicleRequest {
-  return {
-    unitNumber,
-    kind: 'tractor',
-    vin: '7YCTA3K28SN100217',
-    plate: 'KVF 9001',
-    config: {
-      axles: [
-        {
-          position: 'steer',
-          tires: 'single',
-          brake: 'air_drum',
-          chamber: { size: 20, stroke: 'standard' },
-          tire: { size: '11R22.5', coldInflationPsi: 110, sidewallMaxPsi: 120 },
-        },
-        {
-          position: 'drive',
-          tires: 'dual',
-          brake: 'air_drum',
-          chamber: { size: 30, stroke: 'long' },
-          tire: { size: '11R22.5', coldInflationPsi: 100, sidewallMaxPsi: 120 },
-        },
-      ],
-      steering: { wheelDiameterIn: 20, type: 'power' },
-    },
-  };
-}
 
 describe('vehicles', () => {
   let t: TestApp;
@@ -75,7 +58,10 @@ describe('vehicles', () => {
 
   it('creates a vehicle, reads it back and refuses a second one with the same unit number in any case', async () => {
     const unitNumber = unit('KV');
-    const created = await request(t.url).post('/api/vehicles').set(bearer(tokens.supervisor)).send(tractor(unitNumber));
+    const created = await request(t.url)
+      .post('/api/vehicles')
+      .set(bearer(tokens.supervisor))
+      .send(tractorRequest(unitNumber));
     expect(created.status).toBe(201);
     expect(created.body).toMatchObject({ unitNumber, kind: 'tractor', status: 'in_service', statusReason: null });
     const read = await request(t.url)
@@ -86,7 +72,7 @@ describe('vehicles', () => {
     const duplicate = await request(t.url)
       .post('/api/vehicles')
       .set(bearer(tokens.admin))
-      .send(tractor(unitNumber.toLowerCase()));
+      .send(tractorRequest(unitNumber.toLowerCase()));
     expect(duplicate.status).toBe(409);
     expect(errorBody(duplicate).message).toBe(
       `Your organisation already has a unit ${unitNumber.toLowerCase()}: choose another unit number.`,
@@ -94,16 +80,18 @@ describe('vehicles', () => {
   });
 
   it('lets another organisation use the same unit number', async () => {
-    const otherAdmin = (await login(t.url, OTHER_ORG_ADMIN)).accessToken;
+    const otherAdmin = await signIn(t.url, OTHER_ORG_ADMIN);
     const response = await request(t.url)
       .post('/api/vehicles')
       .set(bearer(otherAdmin))
-      .send(tractor(unit('KV-101')));
+      .send(tractorRequest(unit('KV-101')));
     expect(response.status).toBe(201);
+    // The other organisation's fleet stays as seeded: access.e2e-spec.ts lists it exactly, in any file order.
+    await t.dataSource.query('DELETE FROM vehicles WHERE id = $1', [bodyOf<VehicleResponse>(response).id]);
   });
 
   it('answers 400 with each wrong axle field named by the shared vehicle rules', async () => {
-    const body = tractor(unit('KV'));
+    const body = tractorRequest(unit('KV'));
     const [steer, drive] = body.config.axles;
     body.config.axles = [
       { ...steer!, tires: 'dual' },
@@ -141,7 +129,9 @@ describe('vehicles', () => {
   });
 
   it('answers 400, never 500, for wrong types and unknown fields deep in the configuration', async () => {
-    const body = tractor(unit('KV')) as unknown as { config: { axles: Record<string, unknown>[]; paint?: string } };
+    const body = tractorRequest(unit('KV')) as unknown as {
+      config: { axles: Record<string, unknown>[]; paint?: string };
+    };
     body.config.axles[0] = {
       ...body.config.axles[0],
       brake: 7,
@@ -164,19 +154,14 @@ describe('vehicles', () => {
       const wrong = await request(t.url)
         .post('/api/vehicles')
         .set(bearer(tokens.admin))
-        .send({ ...tractor(unit('KV')), config });
+        .send({ ...tractorRequest(unit('KV')), config });
       expect({ config, status: wrong.status }).toEqual({ config, status: 400 });
       expect(errorBody(wrong).fields?.[0]?.field).toMatch(/^config/);
     }
   });
 
   it('takes a vehicle out of service with a reason, and back, with the time it changed', async () => {
-    const created = (
-      await request(t.url)
-        .post('/api/vehicles')
-        .set(bearer(tokens.admin))
-        .send(tractor(unit('KV')))
-    ).body as VehicleResponse;
+    const created = await createVehicle(t.url, tokens.admin, tractorRequest(unit('KV')));
     const out = await request(t.url)
       .patch(`/api/vehicles/${created.id}`)
       .set(bearer(tokens.supervisor))
@@ -195,12 +180,7 @@ describe('vehicles', () => {
   });
 
   it('re-checks the whole vehicle on PATCH: a tractor cannot become a trailer with its power-unit axles', async () => {
-    const created = (
-      await request(t.url)
-        .post('/api/vehicles')
-        .set(bearer(tokens.admin))
-        .send(tractor(unit('KV')))
-    ).body as VehicleResponse;
+    const created = await createVehicle(t.url, tokens.admin, tractorRequest(unit('KV')));
     const response = await request(t.url)
       .patch(`/api/vehicles/${created.id}`)
       .set(bearer(tokens.admin))

@@ -10,7 +10,7 @@ import {
 import { InjectRepository } from '@nestjs/typeorm';
 import type { Checklist, PhotoResponse, VoiceNoteResponse } from '@yardcall/shared';
 import { createHash, randomUUID } from 'node:crypto';
-import { Repository } from 'typeorm';
+import { Repository, type FindOptionsWhere } from 'typeorm';
 import type { AuthUser } from '../auth/auth-user';
 import { ApiValidationException } from '../common/api-validation.exception';
 import { isUniqueViolation } from '../common/database-errors';
@@ -45,6 +45,36 @@ interface CheckedFile {
   sha256: string;
 }
 
+interface StoredUpload {
+  sha256: string;
+  clientId: string;
+}
+
+// The columns every stored upload has; each kind adds its own when it creates the row.
+interface UploadColumns {
+  id: string;
+  organizationId: string;
+  inspectionId: string;
+  itemKey: string;
+  clientId: string;
+  objectKey: string;
+  mimeType: string;
+  sizeBytes: number;
+  sha256: string;
+}
+
+// What tells a voice note from a photo on the way in.
+interface UploadKind<E extends StoredUpload, R> {
+  kind: MediaKind<string>;
+  folder: 'notes' | 'photos';
+  uniqueIndex: string;
+  repository: Repository<E>;
+  // The record stored under this inspection and clientId.
+  where: FindOptionsWhere<E>;
+  create: (columns: UploadColumns) => E;
+  toResponse: (record: E) => R;
+}
+
 export function toVoiceNoteResponse(note: VoiceNote): VoiceNoteResponse {
   return {
     id: note.id,
@@ -73,7 +103,7 @@ export function toPhotoResponse(photo: Photo): PhotoResponse {
 }
 
 // A clientId names one upload: sent again it answers the stored record, with other bytes it is a mistake.
-function sameUpload<T extends { sha256: string; clientId: string }>(existing: T, checked: CheckedFile): T {
+function sameUpload<T extends StoredUpload>(existing: T, checked: CheckedFile): T {
   if (existing.sha256 !== checked.sha256) {
     throw new ConflictException(
       `The client id ${existing.clientId} was already used for a different file: give each new upload its own client id.`,
@@ -115,38 +145,16 @@ export class NotesService implements InspectionAttachmentSource, OnModuleInit {
     dto: VoiceNoteUploadDto,
     file: Express.Multer.File | undefined,
   ): Promise<UploadResult<VoiceNoteResponse>> {
-    const findStored = () => this.notes.findOneBy({ inspectionId, clientId: dto.clientId });
-    const prepared = await this.prepare(user, inspectionId, file, VOICE_NOTE_MEDIA, findStored);
-    if (prepared.existing) return { record: toVoiceNoteResponse(prepared.existing), created: false };
-    const { inspection, checklist, checked } = prepared;
-    assertOnChecklist(checklist, dto.itemKey);
-
-    const id = randomUUID();
-    const objectKey = `notes/${inspectionId}/${id}.${checked.extension}`;
-    await this.storage.put(objectKey, checked.buffer, { contentType: checked.mimeType });
-    const note = this.notes.create({
-      id,
-      organizationId: inspection.organizationId,
-      inspectionId,
-      itemKey: dto.itemKey,
-      clientId: dto.clientId,
-      objectKey,
-      mimeType: checked.mimeType,
-      durationMs: dto.durationMs,
-      sizeBytes: checked.buffer.length,
-      sha256: checked.sha256,
-      heard: dto.heard?.trim() || null,
+    return this.storeUpload(user, inspectionId, dto, file, {
+      kind: VOICE_NOTE_MEDIA,
+      folder: 'notes',
+      uniqueIndex: UNIQUE_NOTE,
+      repository: this.notes,
+      where: { inspectionId, clientId: dto.clientId },
+      create: (columns) =>
+        this.notes.create({ ...columns, durationMs: dto.durationMs, heard: dto.heard?.trim() || null }),
+      toResponse: toVoiceNoteResponse,
     });
-    try {
-      return { record: toVoiceNoteResponse(await this.notes.save(note)), created: true };
-    } catch (error) {
-      // No row points at this copy's file: drop it, whatever went wrong.
-      await this.storage.delete(objectKey);
-      if (!isUniqueViolation(error, UNIQUE_NOTE)) throw error;
-      // The same upload raced in twice: the first one stands.
-      const first = await this.notes.findOneByOrFail({ inspectionId, clientId: dto.clientId });
-      return { record: toVoiceNoteResponse(sameUpload(first, checked)), created: false };
-    }
   }
 
   async addPhoto(
@@ -155,34 +163,15 @@ export class NotesService implements InspectionAttachmentSource, OnModuleInit {
     dto: PhotoUploadDto,
     file: Express.Multer.File | undefined,
   ): Promise<UploadResult<PhotoResponse>> {
-    const findStored = () => this.photos.findOneBy({ inspectionId, clientId: dto.clientId });
-    const prepared = await this.prepare(user, inspectionId, file, PHOTO_MEDIA, findStored);
-    if (prepared.existing) return { record: toPhotoResponse(prepared.existing), created: false };
-    const { inspection, checklist, checked } = prepared;
-    assertOnChecklist(checklist, dto.itemKey);
-
-    const id = randomUUID();
-    const objectKey = `photos/${inspectionId}/${id}.${checked.extension}`;
-    await this.storage.put(objectKey, checked.buffer, { contentType: checked.mimeType });
-    const photo = this.photos.create({
-      id,
-      organizationId: inspection.organizationId,
-      inspectionId,
-      itemKey: dto.itemKey,
-      clientId: dto.clientId,
-      objectKey,
-      mimeType: checked.mimeType,
-      sizeBytes: checked.buffer.length,
-      sha256: checked.sha256,
+    return this.storeUpload(user, inspectionId, dto, file, {
+      kind: PHOTO_MEDIA,
+      folder: 'photos',
+      uniqueIndex: UNIQUE_PHOTO,
+      repository: this.photos,
+      where: { inspectionId, clientId: dto.clientId },
+      create: (columns) => this.photos.create(columns),
+      toResponse: toPhotoResponse,
     });
-    try {
-      return { record: toPhotoResponse(await this.photos.save(photo)), created: true };
-    } catch (error) {
-      await this.storage.delete(objectKey);
-      if (!isUniqueViolation(error, UNIQUE_PHOTO)) throw error;
-      const first = await this.photos.findOneByOrFail({ inspectionId, clientId: dto.clientId });
-      return { record: toPhotoResponse(sameUpload(first, checked)), created: false };
-    }
   }
 
   // Whoever may read the inspection may listen (InspectionsService.findReadable); to anyone else,
@@ -211,6 +200,47 @@ export class NotesService implements InspectionAttachmentSource, OnModuleInit {
     return { notes: notes.map(toVoiceNoteResponse), photos: photos.map(toPhotoResponse) };
   }
 
+  // The steps every upload shares: the stored record for a retried clientId, else the file kept in
+  // ObjectStorage under <folder>/<inspection>/<id> and its row saved.
+  private async storeUpload<E extends StoredUpload, R>(
+    user: AuthUser,
+    inspectionId: string,
+    dto: { itemKey: string; clientId: string },
+    file: Express.Multer.File | undefined,
+    upload: UploadKind<E, R>,
+  ): Promise<UploadResult<R>> {
+    const { repository, where, toResponse } = upload;
+    const prepared = await this.prepare(user, inspectionId, file, upload.kind, () => repository.findOneBy(where));
+    if (!('checked' in prepared)) return { record: toResponse(prepared.existing), created: false };
+    const { inspection, checklist, checked } = prepared;
+    assertOnChecklist(checklist, dto.itemKey);
+
+    const id = randomUUID();
+    const objectKey = `${upload.folder}/${inspectionId}/${id}.${checked.extension}`;
+    await this.storage.put(objectKey, checked.buffer, { contentType: checked.mimeType });
+    const record = upload.create({
+      id,
+      organizationId: inspection.organizationId,
+      inspectionId,
+      itemKey: dto.itemKey,
+      clientId: dto.clientId,
+      objectKey,
+      mimeType: checked.mimeType,
+      sizeBytes: checked.buffer.length,
+      sha256: checked.sha256,
+    });
+    try {
+      return { record: toResponse(await repository.save(record)), created: true };
+    } catch (error) {
+      // No row points at this copy's file: drop it, whatever went wrong.
+      await this.storage.delete(objectKey);
+      if (!isUniqueViolation(error, upload.uniqueIndex)) throw error;
+      // The same upload raced in twice: the first one stands.
+      const first = await repository.findOneByOrFail(where);
+      return { record: toResponse(sameUpload(first, checked)), created: false };
+    }
+  }
+
   private async mayRead(user: AuthUser, inspectionId: string): Promise<boolean> {
     try {
       await this.inspections.findReadable(user, inspectionId);
@@ -224,7 +254,7 @@ export class NotesService implements InspectionAttachmentSource, OnModuleInit {
   // The caller's own inspection in progress (InspectionsService.findEditable: 404 for anyone else's)
   // and the checked file. A record already stored under the clientId is answered even after the
   // inspection was submitted: the client may be retrying an upload whose answer it lost.
-  private async prepare<T extends { sha256: string; clientId: string }>(
+  private async prepare<T extends StoredUpload>(
     user: AuthUser,
     inspectionId: string,
     file: Express.Multer.File | undefined,

@@ -1,16 +1,7 @@
 import { DEFECT_STATUSES, type DefectStatus, type MeasurementValue, type ResultLimit } from '@yardcall/shared';
-import {
-  Column,
-  CreateDateColumn,
-  Entity,
-  Index,
-  JoinColumn,
-  ManyToOne,
-  PrimaryGeneratedColumn,
-  UpdateDateColumn,
-} from 'typeorm';
+import { Column, Entity, Index, JoinColumn, ManyToOne } from 'typeorm';
 import { Inspection } from '../../inspections/entities/inspection.entity';
-import { Organization } from '../../organizations/entities/organization.entity';
+import { EditableOrganizationOwned } from '../../organizations/entities/organization-owned';
 import { Vehicle } from '../../vehicles/entities/vehicle.entity';
 
 // A defect a submitted report listed, until a mechanic certifies it.
@@ -18,17 +9,7 @@ import { Vehicle } from '../../vehicles/entities/vehicle.entity';
 @Index('IDX_defects_vehicle_status', ['vehicleId', 'status'])
 @Index('IDX_defects_inspection', ['inspectionId'])
 @Entity({ name: 'defects' })
-export class Defect {
-  @PrimaryGeneratedColumn('uuid')
-  id: string;
-
-  @Column({ name: 'organization_id', type: 'uuid' })
-  organizationId: string;
-
-  @ManyToOne(() => Organization, { onDelete: 'RESTRICT', nullable: false })
-  @JoinColumn({ name: 'organization_id' })
-  organization?: Organization;
-
+export class Defect extends EditableOrganizationOwned {
   @Column({ name: 'inspection_id', type: 'uuid' })
   inspectionId: string;
 
@@ -67,10 +48,4 @@ export class Defect {
 
   @Column({ type: 'enum', enum: [...DEFECT_STATUSES], enumName: 'defect_status', default: 'open' })
   status: DefectStatus;
-
-  @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
-  createdAt: Date;
-
-  @UpdateDateColumn({ name: 'updated_at', type: 'timestamptz' })
-  updatedAt: Date;
 }

@@ -7,17 +7,8 @@ import {
   type VehicleConfig,
   type VehicleKind,
 } from '@yardcall/shared';
-import {
-  Column,
-  CreateDateColumn,
-  Entity,
-  Index,
-  JoinColumn,
-  ManyToOne,
-  PrimaryGeneratedColumn,
-  UpdateDateColumn,
-} from 'typeorm';
-import { Organization } from '../../organizations/entities/organization.entity';
+import { Column, Entity, Index, JoinColumn, ManyToOne } from 'typeorm';
+import { EditableOrganizationOwned } from '../../organizations/entities/organization-owned';
 import { User } from '../../users/entities/user.entity';
 
 // The vehicles as they were configured when the walk-around began: the checklist is rebuilt from this,
@@ -35,17 +26,7 @@ export interface InspectionVehicleSnapshot {
 @Index('IDX_inspections_org_kind_started', { synchronize: false })
 @Index('UQ_inspections_driver_client', ['driverId', 'clientId'], { unique: true })
 @Entity({ name: 'inspections' })
-export class Inspection {
-  @PrimaryGeneratedColumn('uuid')
-  id: string;
-
-  @Column({ name: 'organization_id', type: 'uuid' })
-  organizationId: string;
-
-  @ManyToOne(() => Organization, { onDelete: 'RESTRICT', nullable: false })
-  @JoinColumn({ name: 'organization_id' })
-  organization?: Organization;
-
+export class Inspection extends EditableOrganizationOwned {
   @Column({ name: 'driver_id', type: 'uuid' })
   driverId: string;
 
@@ -85,10 +66,4 @@ export class Inspection {
 
   @Column({ name: 'defect_count', type: 'integer', default: 0 })
   defectCount: number;
-
-  @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
-  createdAt: Date;
-
-  @UpdateDateColumn({ name: 'updated_at', type: 'timestamptz' })
-  updatedAt: Date;
 }

@@ -1,46 +1,7 @@
-import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
-import { Inspection } from '../../inspections/entities/inspection.entity';
-import { Organization } from '../../organizations/entities/organization.entity';
+import { Entity, Index } from 'typeorm';
+import { InspectionUpload } from './inspection-upload';
 
-// A photo of a defect at one checklist item; the image itself lives in ObjectStorage under objectKey.
+// A photo of a defect at one checklist item.
 @Index('UQ_photos_inspection_client', ['inspectionId', 'clientId'], { unique: true })
 @Entity({ name: 'photos' })
-export class Photo {
-  @PrimaryGeneratedColumn('uuid')
-  id: string;
-
-  @Column({ name: 'organization_id', type: 'uuid' })
-  organizationId: string;
-
-  @ManyToOne(() => Organization, { onDelete: 'RESTRICT', nullable: false })
-  @JoinColumn({ name: 'organization_id' })
-  organization?: Organization;
-
-  @Column({ name: 'inspection_id', type: 'uuid' })
-  inspectionId: string;
-
-  @ManyToOne(() => Inspection, { onDelete: 'CASCADE', nullable: false })
-  @JoinColumn({ name: 'inspection_id' })
-  inspection?: Inspection;
-
-  @Column({ name: 'item_key', type: 'varchar', length: 160 })
-  itemKey: string;
-
-  @Column({ name: 'client_id', type: 'varchar', length: 64 })
-  clientId: string;
-
-  @Column({ name: 'object_key', type: 'varchar', length: 512 })
-  objectKey: string;
-
-  @Column({ name: 'mime_type', type: 'varchar', length: 40 })
-  mimeType: string;
-
-  @Column({ name: 'size_bytes', type: 'integer' })
-  sizeBytes: number;
-
-  @Column({ type: 'char', length: 64 })
-  sha256: string;
-
-  @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
-  createdAt: Date;
-}
+export class Photo extends InspectionUpload {}

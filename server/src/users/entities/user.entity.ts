@@ -1,15 +1,6 @@
 import { ROLES, type DisplaySettings, type Role } from '@yardcall/shared';
-import {
-  Column,
-  CreateDateColumn,
-  Entity,
-  Index,
-  JoinColumn,
-  ManyToOne,
-  PrimaryGeneratedColumn,
-  UpdateDateColumn,
-} from 'typeorm';
-import { Organization } from '../../organizations/entities/organization.entity';
+import { Column, Entity, Index } from 'typeorm';
+import { EditableOrganizationOwned } from '../../organizations/entities/organization-owned';
 
 export const USER_STATUSES = ['active', 'invited'] as const;
 export type UserStatus = (typeof USER_STATUSES)[number];
@@ -18,17 +9,7 @@ export type UserStatus = (typeof USER_STATUSES)[number];
 @Index('UQ_users_email_lower', { synchronize: false })
 @Index('IDX_users_organization_id', ['organizationId'])
 @Entity({ name: 'users' })
-export class User {
-  @PrimaryGeneratedColumn('uuid')
-  id: string;
-
-  @Column({ name: 'organization_id', type: 'uuid' })
-  organizationId: string;
-
-  @ManyToOne(() => Organization, { onDelete: 'RESTRICT', nullable: false })
-  @JoinColumn({ name: 'organization_id' })
-  organization?: Organization;
-
+export class User extends EditableOrganizationOwned {
   @Column({ type: 'varchar', length: 254 })
   email: string;
 
@@ -51,10 +32,4 @@ export class User {
   // Only the settings the user changed; the rest come from DEFAULT_DISPLAY_SETTINGS.
   @Column({ type: 'jsonb', default: {} })
   settings: Partial<DisplaySettings>;
-
-  @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
-  createdAt: Date;
-
-  @UpdateDateColumn({ name: 'updated_at', type: 'timestamptz' })
-  updatedAt: Date;
 }

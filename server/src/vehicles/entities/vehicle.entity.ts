@@ -5,32 +5,13 @@ import {
   type VehicleKind,
   type VehicleStatus,
 } from '@yardcall/shared';
-import {
-  Column,
-  CreateDateColumn,
-  Entity,
-  Index,
-  JoinColumn,
-  ManyToOne,
-  PrimaryGeneratedColumn,
-  UpdateDateColumn,
-} from 'typeorm';
-import { Organization } from '../../organizations/entities/organization.entity';
+import { Column, Entity, Index } from 'typeorm';
+import { EditableOrganizationOwned } from '../../organizations/entities/organization-owned';
 
 // Unit numbers are unique per organisation whatever their case; the functional index lives in the migration.
 @Index('UQ_vehicles_org_unit_number_lower', { synchronize: false })
 @Entity({ name: 'vehicles' })
-export class Vehicle {
-  @PrimaryGeneratedColumn('uuid')
-  id: string;
-
-  @Column({ name: 'organization_id', type: 'uuid' })
-  organizationId: string;
-
-  @ManyToOne(() => Organization, { onDelete: 'RESTRICT', nullable: false })
-  @JoinColumn({ name: 'organization_id' })
-  organization?: Organization;
-
+export class Vehicle extends EditableOrganizationOwned {
   @Column({ name: 'unit_number', type: 'varchar', length: 20 })
   unitNumber: string;
 
@@ -54,10 +35,4 @@ export class Vehicle {
 
   @Column({ type: 'jsonb' })
   config: VehicleConfig;
-
-  @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
-  createdAt: Date;
-
-  @UpdateDateColumn({ name: 'updated_at', type: 'timestamptz' })
-  updatedAt: Date;
 }
