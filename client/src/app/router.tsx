@@ -67,6 +67,12 @@ export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
               const route = await import('./routes/start-inspection');
               return { Component: route.StartInspectionRoute, loader: route.startInspectionLoader(queryClient) };
             }),
+            screen('driver/inspections/:clientId', ['driver'], async () => ({
+              Component: (await import('@/features/walkaround/routes/run-inspection')).RunInspectionRoute,
+            })),
+            screen('driver/inspections/:clientId/finish', ['driver'], async () => ({
+              Component: (await import('@/features/walkaround/routes/finish-inspection')).FinishInspectionRoute,
+            })),
             screen('mechanic', ['mechanic'], async () => ({
               Component: (await import('@/features/home/routes/mechanic-home')).MechanicHome,
             })),

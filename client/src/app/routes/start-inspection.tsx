@@ -1,6 +1,6 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { StartInspection } from '@/features/home/routes/start-inspection';
-import { vehiclesQueryOptions } from '@/features/vehicles/api/get-vehicles';
+import { StartWalkaround } from '@/features/walkaround/components/start-walkaround';
+import { useVehicles, vehiclesQueryOptions } from '@/features/vehicles/api/get-vehicles';
 import { VehiclePicker } from '@/features/vehicles/components/vehicle-picker';
 
 export function startInspectionLoader(queryClient: QueryClient) {
@@ -10,10 +10,10 @@ export function startInspectionLoader(queryClient: QueryClient) {
   };
 }
 
+// The app joins the two features: the vehicles' picker and the walk-around's start.
 export function StartInspectionRoute() {
+  const vehicles = useVehicles();
   return (
-    <StartInspection
-      renderPicker={(onPicked) => <VehiclePicker onPick={(vehicle) => onPicked(vehicle.unitNumber)} />}
-    />
+    <StartWalkaround vehicles={vehicles.data ?? []} renderPicker={(onPick) => <VehiclePicker onPick={onPick} />} />
   );
 }

@@ -35,6 +35,10 @@ export interface VoiceLoopView {
   // A button, handled as if spoken.
   command: (command: Exclude<Command, 'language'>) => void;
   setLocale: (locale: Locale) => void;
+  // A button answer ("good", "defect"), handled exactly as if it had been heard.
+  answer: (transcript: string) => void;
+  // Go to one item of the checklist.
+  jump: (itemKey: string) => void;
   stop: () => void;
 }
 
@@ -129,6 +133,14 @@ export function useVoiceLoop(options: UseVoiceLoopOptions): VoiceLoopView {
 
   const setLocale = useCallback((next: Locale) => sendEvent({ type: 'set_locale', locale: next }), [sendEvent]);
 
+  const answer = useCallback(
+    (transcript: string) =>
+      sendEvent({ type: 'heard', alternatives: [{ transcript, confidence: 1 }], at: new Date().toISOString() }),
+    [sendEvent],
+  );
+
+  const jump = useCallback((itemKey: string) => sendEvent({ type: 'jump', itemKey }), [sendEvent]);
+
   const stop = useCallback(() => {
     runnerRef.current?.stop();
     runnerRef.current = null;
@@ -136,5 +148,5 @@ export function useVoiceLoop(options: UseVoiceLoopOptions): VoiceLoopView {
   }, []);
 
   const item = checklistFor(checklist, state.locale).items[state.index];
-  return { state, item, running, speechFailure, lastTiming, start, command, setLocale, stop };
+  return { state, item, running, speechFailure, lastTiming, start, command, setLocale, answer, jump, stop };
 }

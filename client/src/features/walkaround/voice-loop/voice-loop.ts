@@ -95,7 +95,9 @@ export type VoiceLoopEvent =
   | { type: 'speech_error'; code: string; fatal: boolean; spoken: string; shown: string }
   // A button on the screen, said as if spoken.
   | { type: 'command'; command: Exclude<Command, 'language'>; at: string }
-  | { type: 'set_locale'; locale: Locale };
+  | { type: 'set_locale'; locale: Locale }
+  // The screen's list: go to one item (a skipped one, or any to answer again) and ask it in full.
+  | { type: 'jump'; itemKey: string };
 
 export type ListenMode = 'answer' | 'confirm' | 'offer' | 'paused' | 'note';
 
@@ -734,6 +736,15 @@ export function reduceVoiceLoop(state: VoiceLoopState, event: VoiceLoopEvent, ct
         return step.done();
       }
       return command(step, ctx, event.command, '').done();
+    }
+    case 'jump': {
+      // A note in progress is ended by its own words or button first; a finished walk-around is closed.
+      if (state.phase === 'noting' || state.phase === 'finished') return step.done();
+      const index = checklistOf(state, ctx).items.findIndex((item) => item.key === event.itemKey);
+      if (index < 0) return step.done();
+      // Leaving a round of revisiting: after this item the walk-around carries on in order.
+      step.set({ review: null });
+      return arrive(step, index, ctx, [], true).done();
     }
     case 'set_locale':
       if (state.phase === 'idle' || state.phase === 'finished') {

@@ -1,0 +1,382 @@
+import {
+  Suspense,
+  lazy,
+  useEffect,
+  useMemo,
+  useRef,
+  useState,
+  useSyncExternalStore,
+  type ChangeEvent,
+  type FormEvent,
+} from 'react';
+import { useTranslation } from 'react-i18next';
+import type { ItemResult, Locale } from '@yardcall/shared';
+import { ErrorAlert, Notice } from '@/components/ui/alert';
+import { Button } from '@/components/ui/button';
+import { describeError } from '@/lib/errors';
+import { getOfflineRuntime, useSyncStatus, type JsonValue } from '@/lib/offline';
+import { resizePhoto, startRecording, type NoteRecording } from '@/lib/recorder';
+import { TypedInputEngine, chooseSpeechEngine, type SpeechEngine } from '@/lib/speech';
+import type { LocalWalkaround } from '../api/get-local-inspection';
+import { VOICE_LOOP_WORDS, restoreVoiceLoop, serializeVoiceLoop, useVoiceLoop } from '../voice-loop';
+import { observeEngine } from './observed-engine';
+import { SafetyCaution } from './safety-caution';
+import { useMediaSession } from './use-media-session';
+import { useSwipe, type SwipeDirection } from './use-swipe';
+import { useWakeLock } from './use-wake-lock';
+
+// The list and its dialog code load on first opening, off the run screen's first load.
+const ItemListDialog = lazy(async () => ({ default: (await import('./item-list-dialog')).ItemListDialog }));
+
+// Our own practice: a note longer than two minutes is a conversation, not a note.
+export const NOTE_MAX_MS = 120_000;
+
+// At least 20 mm (about 76 CSS px) high and 8 mm (about 31 px) apart; bigger in glove mode. Marked
+// important: the button's own minimum heights would otherwise win by their place in the stylesheet.
+export const TARGET_CLASS = 'min-h-[max(76px,4.75rem)]! [.glove_&]:min-h-[max(112px,5.5rem)]! w-full text-3xl';
+export const TARGET_GAP_CLASS = 'gap-[max(31px,2rem)]';
+
+// The prompt begins with where the item is, which the card already shows.
+function withoutPosition(prompt: string, position: string | undefined): string {
+  const prefix = position ? `${position}. ` : '';
+  return prefix && prompt.startsWith(prefix) ? prompt.slice(prefix.length) : prompt;
+}
+
+// The words a button stands for, from the same list the recogniser is biased towards.
+function buttonWords(locale: Locale) {
+  const [good = 'good', defect = 'defect', yes = 'yes', no = 'no'] = VOICE_LOOP_WORDS[locale].phrases;
+  return { good, defect, yes, no };
+}
+
+function TypedAnswerField({ engine }: { engine: TypedInputEngine }) {
+  const { t } = useTranslation();
+  const snapshot = useSyncExternalStore(engine.subscribe, engine.getSnapshot, engine.getSnapshot);
+  const [text, setText] = useState('');
+  const submit = (event: FormEvent) => {
+    event.preventDefault();
+    if (engine.submit(text)) setText('');
+  };
+  return (
+    <form onSubmit={submit} className="flex flex-col gap-2" data-testid="typed-answer">
+      <label htmlFor="typed-answer-input" className="font-bold">
+        {t('walkaround.run.typedLabel')}
+      </label>
+      <div className="flex gap-2">
+        <input
+          id="typed-answer-input"
+          value={text}
+          onChange={(event) => setText(event.target.value)}
+          autoComplete="off"
+          className="block min-h-tap w-full rounded-lg border-2 border-line bg-surface px-3 text-xl text-ink"
+        />
+        <Button type="submit" disabled={!snapshot.listening}>
+          {t('walkaround.run.typedSend')}
+        </Button>
+      </div>
+    </form>
+  );
+}
+
+export interface GloveScreenProps {
+  walkaround: LocalWalkaround;
+  onFinished: () => void;
+  // Tests pass a scripted engine; the app picks the browser's own speech or typed input.
+  createEngine?: () => SpeechEngine;
+}
+
+// The screen of the walk-around itself: the current item in large text, three big targets, and the
+// voice loop running underneath. Every answer and the loop's state go to this device's store first.
+export function GloveScreen({ walkaround, onFinished, createEngine }: GloveScreenProps) {
+  const { t } = useTranslation();
+  const { inspection } = walkaround;
+  const { clientId } = inspection;
+  // Kept from the first read: a new checklist object would end the running loop.
+  const [checklist] = useState(inspection.checklist);
+  const { store } = getOfflineRuntime();
+  const sync = useSyncStatus();
+  const [baseEngine, setBaseEngine] = useState<SpeechEngine>(() =>
+    createEngine ? createEngine() : chooseSpeechEngine(window),
+  );
+  const [prompt, setPrompt] = useState<string | null>(null);
+  const [heard, setHeard] = useState<string | null>(null);
+  const [notice, setNotice] = useState<string | null>(null);
+  const [problem, setProblem] = useState<string | null>(null);
+  const [lastDefect, setLastDefect] = useState<ItemResult | null>(null);
+  const [listOpen, setListOpen] = useState(false);
+  const startWhenReady = useRef(false);
+  const screenRef = useRef<HTMLDivElement>(null);
+  const resultIds = useRef(new Map(walkaround.results.map((r) => [r.itemKey, r.clientId])));
+  const recording = useRef<{ itemKey: string; pending: Promise<NoteRecording | null> } | null>(null);
+  const commandRef = useRef<(command: 'end_note') => void>(() => undefined);
+
+  const engine = useMemo(() => observeEngine(baseEngine, { onSpoken: setPrompt, onHeard: setHeard }), [baseEngine]);
+  // Resume at the stored item after a reload; a state that no longer fits the checklist starts afresh.
+  const [initialState] = useState(() =>
+    inspection.voiceState === undefined
+      ? undefined
+      : (restoreVoiceLoop(JSON.stringify(inspection.voiceState), checklist) ?? undefined),
+  );
+
+  const startNote = (itemKey: string) => {
+    const pending = startRecording({ maxMs: NOTE_MAX_MS })
+      .then((rec) => {
+        // Stopped by silence or its length: end the note in the loop too, which saves it.
+        void rec.finished.then((note) => {
+          if (note.stoppedBy !== 'call' && recording.current?.pending === pending) commandRef.current('end_note');
+        });
+        return rec;
+      })
+      .catch(() => {
+        setNotice(t('walkaround.run.noRecorder'));
+        return null;
+      });
+    recording.current = { itemKey, pending };
+  };
+
+  const finishNote = async (heardWords: string) => {
+    const current = recording.current;
+    recording.current = null;
+    if (!current) return;
+    const rec = await current.pending;
+    if (!rec) return;
+    const note = await rec.stop();
+    await store.saveNote({
+      clientId: crypto.randomUUID(),
+      inspectionClientId: clientId,
+      itemKey: current.itemKey,
+      audio: note.blob,
+      mimeType: note.mimeType,
+      durationMs: note.durationMs,
+      heard: heardWords,
+    });
+    setNotice(t('walkaround.run.noteSaved'));
+  };
+
+  const voice = useVoiceLoop({
+    engine,
+    checklist,
+    initialState,
+    locale: initialState?.locale ?? checklist.locale,
+    host: {
+      onResult: async (result) => {
+        let id = resultIds.current.get(result.itemKey);
+        if (!id) {
+          id = crypto.randomUUID();
+          resultIds.current.set(result.itemKey, id);
+        }
+        setLastDefect(result.answer === 'defect' ? result : null);
+        await store.saveResults(clientId, [{ ...result, clientId: id }]);
+      },
+      onState: (state) => {
+        // The loop's state is plain JSON: stored as is, read back on reload.
+        const stored = JSON.parse(serializeVoiceLoop(state)) as JsonValue;
+        store.saveVoiceState(clientId, stored).catch((error: unknown) => setProblem(describeError(error)));
+      },
+      onStartNote: (itemKey) => startNote(itemKey),
+      onStopNote: (_itemKey, words) => finishNote(words),
+      onFinish: () => onFinished(),
+      onHostError: (error) => setProblem(describeError(error)),
+    },
+  });
+  useEffect(() => {
+    commandRef.current = voice.command;
+  });
+
+  // After switching to typed answers, carry on from where the loop stopped.
+  const { start } = voice;
+  useEffect(() => {
+    if (!startWhenReady.current) return;
+    startWhenReady.current = false;
+    start();
+  }, [start]);
+
+  const { state, item } = voice;
+  const phase = state.phase;
+  const words = buttonWords(state.locale);
+  const done = Object.keys(state.results).length;
+  const total = checklist.items.length;
+  const zoneTitle = checklist.zones.find((zone) => zone.key === item?.zone)?.title ?? '';
+  const started = voice.running || !['idle', 'stalled'].includes(phase);
+
+  const act = (direction: SwipeDirection | 'note') => {
+    if (!voice.running) return;
+    if (direction === 'note') return voice.command(phase === 'noting' ? 'end_note' : 'note');
+    if (direction === 'down') return voice.command('repeat');
+    const choosing = phase === 'confirming' || phase === 'offering';
+    if (direction === 'right') voice.answer(choosing ? words.yes : words.good);
+    else voice.answer(choosing ? words.no : words.defect);
+  };
+  const swipe = useSwipe(act);
+
+  useWakeLock(voice.running);
+  useMediaSession(started, {
+    pause: () => voice.command('pause'),
+    resume: () => (voice.running ? voice.command('resume') : voice.start()),
+    skip: () => voice.command('skip'),
+    back: () => voice.command('back'),
+  });
+
+  const addPhoto = async (event: ChangeEvent<HTMLInputElement>) => {
+    const file = event.target.files?.[0];
+    event.target.value = '';
+    if (!file || !lastDefect) return;
+    try {
+      const image = await resizePhoto(file);
+      await store.savePhoto({
+        clientId: crypto.randomUUID(),
+        inspectionClientId: clientId,
+        itemKey: lastDefect.itemKey,
+        image,
+        mimeType: image.type || 'image/jpeg',
+      });
+      setNotice(t('walkaround.run.photoSaved'));
+    } catch (error) {
+      setProblem(describeError(error));
+    }
+  };
+
+  const choosing = phase === 'confirming' || phase === 'offering';
+  const lastDefectItem = lastDefect ? checklist.items.find((i) => i.key === lastDefect.itemKey) : undefined;
+
+  return (
+    <div ref={screenRef} className="flex scroll-mt-2 flex-col gap-4" data-testid="glove-screen">
+      <h1 className="sr-only">{t('walkaround.run.title')}</h1>
+      <p className="flex flex-wrap justify-between gap-2 text-lg font-bold" data-testid="walkaround-progress">
+        <span>{t('walkaround.run.progress', { done, total })}</span>
+        <span>{zoneTitle}</span>
+      </p>
+
+      <section
+        aria-live="polite"
+        aria-label={t('walkaround.run.current')}
+        data-testid="walkaround-item"
+        data-item-key={item?.key ?? ''}
+        data-expects={item?.expects.type === 'measure' ? item.expects.quantity : 'check'}
+        data-phase={phase}
+        className="touch-pan-y select-none rounded-xl border-4 border-line bg-surface p-4"
+        {...swipe}
+      >
+        <p className="text-lg font-bold">{item?.positionLabel}</p>
+        <p className="text-3xl leading-tight font-bold hyphens-auto [overflow-wrap:break-word]">{item?.title}</p>
+        {phase === 'confirming' && state.pending ? (
+          <p className="mt-2 text-2xl font-bold">{state.pending.question}</p>
+        ) : null}
+        {phase === 'offering' || phase === 'paused' || phase === 'noting' ? (
+          <p className="mt-2 text-2xl font-bold">{t(`walkaround.run.phase.${phase}`)}</p>
+        ) : null}
+        {prompt && started ? <p className="mt-2 text-base">{withoutPosition(prompt, item?.positionLabel)}</p> : null}
+        <p className="mt-2 text-lg" data-testid="heard">
+          {heard ? t('walkaround.run.heard', { heard }) : t('walkaround.run.heardNothing')}
+        </p>
+      </section>
+
+      {!voice.running && phase !== 'finished' ? (
+        <Button
+          size="large"
+          className={TARGET_CLASS}
+          onClick={() => {
+            voice.start();
+            // The item and the three targets fill the phone; the app's header scrolls away.
+            screenRef.current?.scrollIntoView?.({ block: 'start' });
+          }}
+          data-testid="start-walkaround"
+        >
+          {phase === 'idle' && done === 0 ? t('walkaround.run.start') : t('walkaround.run.resume')}
+        </Button>
+      ) : null}
+
+      {voice.running && phase === 'paused' ? (
+        <Button size="large" className={TARGET_CLASS} onClick={() => voice.command('resume')}>
+          {t('walkaround.run.resume')}
+        </Button>
+      ) : null}
+
+      {voice.running && phase === 'noting' ? (
+        <Button size="large" className={TARGET_CLASS} onClick={() => voice.command('end_note')}>
+          {t('walkaround.run.endNote')}
+        </Button>
+      ) : null}
+
+      {voice.running && (phase === 'asking' || choosing) ? (
+        <div className={`flex flex-col ${TARGET_GAP_CLASS}`} data-testid="targets">
+          <Button size="large" className={TARGET_CLASS} onClick={() => act('right')}>
+            {choosing ? t('walkaround.run.yes') : t('walkaround.run.good')}
+          </Button>
+          <Button size="large" variant="danger" className={TARGET_CLASS} onClick={() => act('left')}>
+            {choosing ? t('walkaround.run.no') : t('walkaround.run.defect')}
+          </Button>
+          <Button size="large" variant="secondary" className={TARGET_CLASS} onClick={() => act('down')}>
+            {t('walkaround.run.repeat')}
+          </Button>
+        </div>
+      ) : null}
+
+      {baseEngine instanceof TypedInputEngine ? <TypedAnswerField engine={baseEngine} /> : null}
+
+      {item?.safety && started ? <SafetyCaution /> : null}
+      {problem ? <ErrorAlert>{problem}</ErrorAlert> : null}
+      {notice ? <Notice>{notice}</Notice> : null}
+      {voice.speechFailure ? (
+        <ErrorAlert>
+          <p>{voice.speechFailure.shown}</p>
+          <div className="mt-2 flex flex-wrap gap-tap-gap">
+            <Button onClick={() => voice.start()}>{t('walkaround.run.tryAgain')}</Button>
+            <Button
+              variant="secondary"
+              onClick={() => {
+                setBaseEngine(new TypedInputEngine());
+                startWhenReady.current = true;
+              }}
+            >
+              {t('walkaround.run.typeInstead')}
+            </Button>
+          </div>
+        </ErrorAlert>
+      ) : null}
+
+      {lastDefect && lastDefectItem ? (
+        <label className="inline-flex min-h-tap cursor-pointer items-center justify-center rounded-lg border-2 border-line bg-surface px-4 text-center text-xl font-bold focus-within:outline-3">
+          {t('walkaround.run.photo', { item: `${lastDefectItem.title}, ${lastDefectItem.positionLabel}` })}
+          <input
+            type="file"
+            accept="image/*"
+            capture="environment"
+            className="sr-only"
+            onChange={(event) => void addPhoto(event)}
+          />
+        </label>
+      ) : null}
+
+      <div className="grid grid-cols-1 gap-tap-gap min-[480px]:grid-cols-3">
+        <Button variant="secondary" disabled={!voice.running} onClick={() => act('note')}>
+          {phase === 'noting' ? t('walkaround.run.endNote') : t('walkaround.run.note')}
+        </Button>
+        <Button variant="secondary" onClick={() => setListOpen(true)}>
+          {t('walkaround.run.list', { skipped: state.skipped.length })}
+        </Button>
+        <Button variant="secondary" onClick={onFinished}>
+          {t('walkaround.run.finish')}
+        </Button>
+      </div>
+
+      <p className="text-lg" data-testid="sync-status">
+        {sync.waiting > 0 ? t('walkaround.run.waiting', { count: sync.waiting }) : t('walkaround.run.allSynced')}
+      </p>
+      <p className="text-base">{t('walkaround.run.gestures')}</p>
+
+      {listOpen ? (
+        <Suspense fallback={null}>
+          <ItemListDialog
+            open
+            onClose={() => setListOpen(false)}
+            checklist={checklist}
+            results={state.results}
+            skipped={state.skipped}
+            currentKey={state.itemKey}
+            onJump={(key) => (voice.running ? voice.jump(key) : undefined)}
+          />
+        </Suspense>
+      ) : null}
+    </div>
+  );
+}

@@ -1,0 +1,89 @@
+import { useEffect, useRef, type PointerEvent } from 'react';
+import { useTranslation } from 'react-i18next';
+import { Button } from '@/components/ui/button';
+
+// A small canvas the driver signs with a finger; the drawing goes to the report as a PNG data URL.
+export function SignaturePad({ onChange, label }: { onChange: (dataUrl: string | null) => void; label: string }) {
+  const { t } = useTranslation();
+  const canvasRef = useRef<HTMLCanvasElement>(null);
+  const drawing = useRef(false);
+  const drawn = useRef(false);
+
+  useEffect(() => {
+    const canvas = canvasRef.current;
+    const context = canvas?.getContext('2d');
+    if (!canvas || !context) return;
+    context.lineWidth = 3;
+    context.lineCap = 'round';
+    context.strokeStyle = '#000000';
+  }, []);
+
+  const point = (event: PointerEvent<HTMLCanvasElement>) => {
+    const canvas = event.currentTarget;
+    const box = canvas.getBoundingClientRect();
+    return {
+      x: ((event.clientX - box.left) / box.width) * canvas.width,
+      y: ((event.clientY - box.top) / box.height) * canvas.height,
+    };
+  };
+
+  const down = (event: PointerEvent<HTMLCanvasElement>) => {
+    const context = event.currentTarget.getContext('2d');
+    if (!context) return;
+    event.currentTarget.setPointerCapture?.(event.pointerId);
+    drawing.current = true;
+    const { x, y } = point(event);
+    context.beginPath();
+    context.moveTo(x, y);
+  };
+
+  const move = (event: PointerEvent<HTMLCanvasElement>) => {
+    if (!drawing.current) return;
+    const context = event.currentTarget.getContext('2d');
+    if (!context) return;
+    const { x, y } = point(event);
+    context.lineTo(x, y);
+    context.stroke();
+    drawn.current = true;
+  };
+
+  const up = (event: PointerEvent<HTMLCanvasElement>) => {
+    if (!drawing.current) return;
+    drawing.current = false;
+    if (drawn.current) onChange(event.currentTarget.toDataURL('image/png'));
+  };
+
+  const clear = () => {
+    const canvas = canvasRef.current;
+    canvas?.getContext('2d')?.clearRect(0, 0, canvas.width, canvas.height);
+    drawn.current = false;
+    onChange(null);
+  };
+
+  return (
+    <div className="flex flex-col gap-2">
+      <p className="font-bold" id="signature-label">
+        {label}
+      </p>
+      {/* White like paper in every theme, so the ink shows and the PNG reads on the report. */}
+      <canvas
+        ref={canvasRef}
+        width={600}
+        height={200}
+        role="img"
+        aria-labelledby="signature-label"
+        data-testid="signature-pad"
+        className="h-40 w-full touch-none rounded-lg border-2 border-line bg-white"
+        onPointerDown={down}
+        onPointerMove={move}
+        onPointerUp={up}
+        onPointerLeave={up}
+      />
+      <div>
+        <Button variant="secondary" onClick={clear}>
+          {t('walkaround.finish.clearSignature')}
+        </Button>
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,171 @@
+import { useState, type ReactNode } from 'react';
+import { useTranslation } from 'react-i18next';
+import { useNavigate } from 'react-router';
+import { useQueryClient } from '@tanstack/react-query';
+import { isPowerUnit, type InspectionKind, type PendingAcknowledgement, type VehicleResponse } from '@yardcall/shared';
+import { ErrorAlert, Loading } from '@/components/ui/alert';
+import { Button } from '@/components/ui/button';
+import { PageHeading, Section } from '@/components/ui/layout';
+import { ApiError, NETWORK_ERROR_STATUS } from '@/lib/api-client';
+import { describeError } from '@/lib/errors';
+import { isLocale } from '@/lib/i18n';
+import { useCreateLocalInspection } from '../api/create-local-inspection';
+import { pendingAcknowledgementQueryOptions } from '../api/get-pending-acknowledgement';
+import { PendingAcknowledgementReview } from './pending-acknowledgement-review';
+
+export const START_KINDS = ['pre_trip', 'post_trip', 'en_route'] as const satisfies readonly InspectionKind[];
+
+export function runPath(clientId: string): string {
+  return `/driver/inspections/${encodeURIComponent(clientId)}`;
+}
+
+export interface StartWalkaroundProps {
+  // The unit list (recent first, search); calls back with the tapped unit.
+  renderPicker: (onPick: (vehicle: VehicleResponse) => void) => ReactNode;
+  // Every unit the driver may pick, for the trailer step.
+  vehicles: readonly VehicleResponse[];
+}
+
+// Two taps: the power unit, then a trailer or "no trailer". The kind defaults to pre-trip.
+export function StartWalkaround({ renderPicker, vehicles }: StartWalkaroundProps) {
+  const { t, i18n } = useTranslation();
+  const navigate = useNavigate();
+  const queryClient = useQueryClient();
+  const [kind, setKind] = useState<InspectionKind>('pre_trip');
+  const [powerUnit, setPowerUnit] = useState<VehicleResponse | null>(null);
+  const [pending, setPending] = useState<{ list: PendingAcknowledgement[]; chosen: VehicleResponse[] } | null>(null);
+  const [problem, setProblem] = useState<string | null>(null);
+  const [checking, setChecking] = useState(false);
+  const create = useCreateLocalInspection();
+  const trailers = vehicles.filter((v) => v.kind === 'trailer');
+
+  const begin = async (chosen: VehicleResponse[]) => {
+    const locale = isLocale(i18n.language) ? i18n.language : 'en';
+    const inspection = await create.mutateAsync({ vehicles: chosen, kind, locale });
+    await navigate(runPath(inspection.clientId));
+  };
+
+  // The last report of each unit may wait for this driver's review (pre-trip only, 396.13).
+  const checkThenBegin = async (chosen: VehicleResponse[]) => {
+    setProblem(null);
+    if (kind !== 'pre_trip') return begin(chosen);
+    setChecking(true);
+    try {
+      const found = await Promise.all(
+        chosen.map((v) => queryClient.fetchQuery(pendingAcknowledgementQueryOptions(v.id))),
+      );
+      const list = found.filter((p): p is PendingAcknowledgement => p !== null);
+      if (list.length > 0) {
+        setPending({ list, chosen });
+        return;
+      }
+    } catch (error) {
+      // No signal: start anyway; the server asks for the review when the walk-around syncs.
+      if (!(error instanceof ApiError && error.status === NETWORK_ERROR_STATUS)) {
+        setProblem(describeError(error));
+        return;
+      }
+    } finally {
+      setChecking(false);
+    }
+    return begin(chosen);
+  };
+
+  const run = (chosen: VehicleResponse[]) => {
+    checkThenBegin(chosen).catch((error: unknown) => setProblem(describeError(error)));
+  };
+
+  const pickPowerUnit = (vehicle: VehicleResponse) => {
+    if (!isPowerUnit(vehicle.kind)) {
+      setProblem(t('walkaround.start.powerFirst'));
+      return;
+    }
+    setProblem(null);
+    // Only a tractor pulls a trailer in this version; a truck or bus starts at once.
+    if (vehicle.kind === 'tractor') setPowerUnit(vehicle);
+    else run([vehicle]);
+  };
+
+  const firstPending = pending?.list[0];
+
+  return (
+    <div data-testid="start-inspection-screen">
+      <PageHeading title={t('start.title')} lead={t('walkaround.start.lead')} />
+      {problem ? (
+        <div className="mb-4">
+          <ErrorAlert>{problem}</ErrorAlert>
+        </div>
+      ) : null}
+      {create.isError ? (
+        <div className="mb-4">
+          <ErrorAlert>{describeError(create.error)}</ErrorAlert>
+        </div>
+      ) : null}
+      {checking || create.isPending ? <Loading label={t('walkaround.start.preparing')} /> : null}
+
+      {pending && firstPending ? (
+        <PendingAcknowledgementReview
+          key={firstPending.inspectionId}
+          pending={firstPending}
+          onSigned={() => {
+            const rest = pending.list.slice(1);
+            if (rest.length > 0) setPending({ ...pending, list: rest });
+            else {
+              setPending(null);
+              run(pending.chosen);
+            }
+          }}
+        />
+      ) : powerUnit ? (
+        <Section title={t('walkaround.start.trailerTitle', { unit: powerUnit.unitNumber })} id="start-trailers">
+          <ul className="flex flex-col gap-tap-gap" aria-label={t('walkaround.start.trailers')}>
+            <li>
+              <Button size="large" variant="secondary" onClick={() => run([powerUnit])} data-testid="no-trailer">
+                {t('walkaround.start.noTrailer')}
+              </Button>
+            </li>
+            {trailers.map((trailer) => (
+              <li key={trailer.id}>
+                <Button size="large" variant="secondary" onClick={() => run([powerUnit, trailer])}>
+                  {t('vehicles.list.unit', { unit: trailer.unitNumber })}
+                </Button>
+              </li>
+            ))}
+          </ul>
+          <div className="mt-4">
+            <Button variant="quiet" onClick={() => setPowerUnit(null)}>
+              {t('walkaround.start.otherUnit')}
+            </Button>
+          </div>
+        </Section>
+      ) : (
+        <>
+          <fieldset className="mb-6">
+            <legend className="mb-2 text-xl font-bold">{t('walkaround.start.kind')}</legend>
+            <div className="flex flex-wrap gap-tap-gap">
+              {START_KINDS.map((k) => (
+                <label
+                  key={k}
+                  className="flex min-h-tap cursor-pointer items-center gap-2 rounded-lg border-2 border-line bg-surface px-4 has-[:checked]:border-4 has-[:checked]:border-primary"
+                >
+                  <input
+                    type="radio"
+                    name="inspection-kind"
+                    value={k}
+                    checked={kind === k}
+                    onChange={() => setKind(k)}
+                    className="size-6"
+                  />
+                  <span className="font-bold">{t(`walkaround.kinds.${k}`)}</span>
+                </label>
+              ))}
+            </div>
+          </fieldset>
+          <Section title={t('walkaround.start.powerUnit')} id="start-vehicles">
+            {renderPicker(pickPowerUnit)}
+          </Section>
+        </>
+      )}
+    </div>
+  );
+}
