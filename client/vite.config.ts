@@ -11,7 +11,19 @@ const apiProxy = { '/api': { target: 'http://127.0.0.1:3000', changeOrigin: fals
 export default defineConfig({
   plugins: [react(), tailwindcss()],
   resolve: { alias: { '@': new URL('./src', import.meta.url).pathname } },
-  build: { outDir: 'dist', emptyOutDir: true, target: 'es2022' },
+  build: {
+    outDir: 'dist',
+    emptyOutDir: true,
+    target: 'es2022',
+    // Two pages: the app, and the glove screen alone for a cold load of a walk-around's run route
+    // (the server serves driver-run/index.html there), without the router and the app's screens.
+    rolldownOptions: {
+      input: {
+        app: new URL('./index.html', import.meta.url).pathname,
+        run: new URL('./driver-run/index.html', import.meta.url).pathname,
+      },
+    },
+  },
   server: { proxy: apiProxy },
   preview: { proxy: apiProxy },
   test: {

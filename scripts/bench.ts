@@ -8,6 +8,7 @@ import { startCluster } from './lib/postgres.js';
 import { projectRoot, run } from './lib/run.js';
 import { freshDatabase, startSeededServer } from './lib/stack.js';
 import { measureFirstLoadJs } from './lib/first-load.js';
+import { measureVoiceLoop } from './lib/voice-loop-latency.js';
 
 export interface BenchFigure {
   name: string;
@@ -63,6 +64,8 @@ try {
   const server = await startSeededServer(cluster.adminUrl(), `yardcall_bench_web_${runId}`);
   try {
     figures.push(...(await measureFirstLoadJs(server.url)));
+    say('bench: a walk-around by voice in Chromium (answer-to-prompt latency, voice-note size)');
+    figures.push(...(await measureVoiceLoop(server.url)));
   } finally {
     await server.stop();
   }

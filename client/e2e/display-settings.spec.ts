@@ -84,6 +84,8 @@ test('night theme at 200 % text on a phone keeps every control visible and usabl
 
 test('glove mode makes the main controls at least 20 mm', async ({ page }) => {
   await signIn(page, 'driver@yardcall.test');
+  // Signed in first: settings changed before the session exists stay on the device and are never sent.
+  await expect(page.getByRole('heading', { level: 1, name: 'Driver home' })).toBeVisible();
   await page.goto('/settings');
   const saved = page.waitForResponse(
     (response) => response.url().endsWith('/api/auth/me/settings') && response.request().method() === 'PATCH',

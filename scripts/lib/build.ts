@@ -14,6 +14,7 @@ const INPUTS: Record<Workspace, string[]> = {
     'client/src',
     'client/public',
     'client/index.html',
+    'client/driver-run',
     'client/vite.config.ts',
     'client/tsconfig.json',
     'client/package.json',

@@ -1,3 +1,4 @@
+import { join } from 'node:path';
 import { Module } from '@nestjs/common';
 import { ConfigModule, ConfigService } from '@nestjs/config';
 import { APP_FILTER, APP_PIPE } from '@nestjs/core';
@@ -18,6 +19,9 @@ import { ReportsModule } from './reports/reports.module';
 import { StorageModule } from './storage/storage.module';
 import { UsersModule } from './users/users.module';
 import { VehiclesModule } from './vehicles/vehicles.module';
+
+// The client's run route, /driver/inspections/:clientId (not its /finish).
+const RUN_PAGE_PATH = /^\/driver\/inspections\/[^/]+\/?$/;
 
 // The environment is the only configuration source (no .env file), checked once at boot. forRoot answers a
 // promise that a bad value rejects; NestFactory.create then rejects with that sentence. The no-op catch only
@@ -41,8 +45,18 @@ void configModule.catch(() => undefined);
       inject: [ConfigService],
       useFactory: (config: ConfigService<AppEnv, true>) => {
         const clientDist = config.get('CLIENT_DIST', { infer: true });
-        // The SPA gets every path outside /api; /api paths fall through to the API (and its 404).
-        return clientDist ? [{ rootPath: clientDist, exclude: /^\/api(\/|$)/ }] : [];
+        if (!clientDist) return [];
+        return [
+          // A walk-around's run route opened cold gets the glove screen's own light page (no
+          // directory index from this folder, so "/" stays the app's).
+          {
+            rootPath: join(clientDist, 'driver-run'),
+            renderPath: RUN_PAGE_PATH,
+            serveStaticOptions: { index: false },
+          },
+          // The SPA gets every other path outside /api; /api paths fall through to the API (and its 404).
+          { rootPath: clientDist, exclude: /^\/api(\/|$)/ },
+        ];
       },
     }),
     AuthModule,

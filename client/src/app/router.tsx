@@ -5,6 +5,7 @@ import type { Role } from '@yardcall/shared';
 import { AppShell } from './layout/app-shell';
 import { RootError, RouteError, RouteLoading } from './layout/route-status';
 import { NotFound } from './layout/not-found';
+import type { ShellHandle } from './layout/shell-handle';
 import { redirectToRoleHome, requireRole } from './guards';
 
 interface ScreenModule {
@@ -19,10 +20,12 @@ function guardedScreen(
   path: string,
   roles: readonly Role[],
   load: () => Promise<ScreenModule>,
+  handle?: ShellHandle,
 ): RouteObject {
   const guard = requireRole(queryClient, roles);
   return {
     path,
+    handle,
     loader: async (args: LoaderFunctionArgs) => {
       const redirect = await guard(args);
       if (redirect) return redirect;
@@ -39,8 +42,8 @@ function publicScreen(path: string, load: () => Promise<ComponentType>): RouteOb
 
 // Every screen is its own chunk: a driver's first load carries no admin or supervisor code.
 export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
-  const screen = (path: string, roles: readonly Role[], load: () => Promise<ScreenModule>) =>
-    guardedScreen(queryClient, path, roles, load);
+  const screen = (path: string, roles: readonly Role[], load: () => Promise<ScreenModule>, handle?: ShellHandle) =>
+    guardedScreen(queryClient, path, roles, load, handle);
   return [
     {
       path: '/',
@@ -67,9 +70,14 @@ export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
               const route = await import('./routes/start-inspection');
               return { Component: route.StartInspectionRoute, loader: route.startInspectionLoader(queryClient) };
             }),
-            screen('driver/inspections/:clientId', ['driver'], async () => ({
-              Component: (await import('@/features/walkaround/routes/run-inspection')).RunInspectionRoute,
-            })),
+            screen(
+              'driver/inspections/:clientId',
+              ['driver'],
+              async () => ({
+                Component: (await import('@/features/walkaround/routes/run-inspection')).RunInspectionRoute,
+              }),
+              { focused: true },
+            ),
             screen('driver/inspections/:clientId/finish', ['driver'], async () => ({
               Component: (await import('@/features/walkaround/routes/finish-inspection')).FinishInspectionRoute,
             })),

@@ -1,7 +1,7 @@
 import type { QueryClient } from '@tanstack/react-query';
 import type { createBrowserRouter } from 'react-router';
 import { setUnauthorizedHandler } from '@/lib/api-client';
-import { SIGN_IN_PATH, signInPath } from '@/lib/session';
+import { SIGN_IN_PATH, signInPath } from '@/lib/sign-in';
 
 export type AppRouter = ReturnType<typeof createBrowserRouter>;
 

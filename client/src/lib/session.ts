@@ -25,10 +25,6 @@ export function useCurrentUser(): UserSummary {
   return useSuspenseQuery(meQueryOptions()).data;
 }
 
-export function hasSession(): boolean {
-  return tokenStore.get() !== null;
-}
-
 export function startSession(queryClient: QueryClient, accessToken: string, user: UserSummary): void {
   tokenStore.set(accessToken);
   queryClient.setQueryData(sessionKeys.me(), user);
@@ -37,17 +33,4 @@ export function startSession(queryClient: QueryClient, accessToken: string, user
 export function endSession(queryClient: QueryClient): void {
   tokenStore.clear();
   queryClient.clear();
-}
-
-export const SIGN_IN_PATH = '/sign-in';
-
-export function signInPath(next?: string): string {
-  return next && next !== '/' ? `${SIGN_IN_PATH}?next=${encodeURIComponent(next)}` : SIGN_IN_PATH;
-}
-
-// Only a path inside the app: never a full URL or a protocol-relative "//host" from a crafted link.
-export function safeNextPath(next: string | null | undefined): string {
-  if (!next || !next.startsWith('/') || next.startsWith('//') || next.startsWith('/\\')) return '/';
-  if (next === SIGN_IN_PATH || next.startsWith(`${SIGN_IN_PATH}?`)) return '/';
-  return next;
 }

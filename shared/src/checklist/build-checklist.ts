@@ -25,15 +25,8 @@ import {
   type MeasurementContext,
   type ZoneKey,
 } from './types.js';
-import {
-  checklistWords,
-  fillTemplate,
-  formatMeasure,
-  type AreaWordId,
-  type ChecklistWords,
-  type ItemWordId,
-  type PartWordId,
-} from './words.js';
+import { fillTemplate, formatMeasure, verdictWords } from './measure-words.js';
+import { checklistWords, type AreaWordId, type ChecklistWords, type ItemWordId, type PartWordId } from './words.js';
 
 // A checklist cannot be built from this input; problems name the vehicle fields at fault.
 export class ChecklistError extends Error {
@@ -422,7 +415,7 @@ class ChecklistBuilder {
     }
     let limit: string | undefined;
     // 393.47(e)(2): an unlisted actuator may not pass 80 % of the rated stroke marked on it.
-    if (draft.id === 'brake.stroke' && !draft.measure) limit = words.verdicts.unlistedStrokeLimit;
+    if (draft.id === 'brake.stroke' && !draft.measure) limit = verdictWords(this.locale).verdicts.unlistedStrokeLimit;
     if (draft.measure) limit = this.limitText(draft.measure);
     const values = { position: positionLabel, where, limit };
     const vehicle = this.vehicles[draft.unitIndex] as ChecklistVehicle;

@@ -2,4 +2,5 @@ export * from './types.js';
 export * from './build-checklist.js';
 export * from './chamber-code.js';
 export * from './fixtures.js';
-export { checklistWords, fillTemplate, formatMeasure, formatNumber, type ChecklistWords } from './words.js';
+export { checklistWords, type ChecklistWords } from './words.js';
+export { fillTemplate, formatMeasure, formatNumber, verdictWords, type VerdictWords } from './measure-words.js';

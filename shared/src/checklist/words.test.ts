@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { checklistWords, fillTemplate, formatMeasure } from './words.js';
+import { fillTemplate, formatMeasure, verdictWords } from './measure-words.js';
+import { checklistWords } from './words.js';
 
 // Every string of a words file with its path, to compare the two languages leaf by leaf.
 function leaves(value: unknown, path = ''): Map<string, string> {
@@ -18,8 +19,8 @@ function leaves(value: unknown, path = ''): Map<string, string> {
 const placeholders = (text: string) => [...text.matchAll(/\{(\w+)\}/g)].map((m) => m[1]).sort();
 
 describe('checklist words', () => {
-  const en = leaves(checklistWords('en'));
-  const es = leaves(checklistWords('es'));
+  const en = leaves({ ...checklistWords('en'), ...verdictWords('en') });
+  const es = leaves({ ...checklistWords('es'), ...verdictWords('es') });
 
   it('has the same texts in Spanish as in English, none empty', () => {
     expect([...es.keys()].sort()).toEqual([...en.keys()].sort());

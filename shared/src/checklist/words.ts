@@ -1,4 +1,5 @@
-// The spoken words of the checklist and its verdicts, per locale, kept as data in @yardcall/prompts.
+// The spoken words of the checklist's zones, positions and items, per locale, kept as data in
+// @yardcall/prompts (measures and verdicts are in measure-words.ts).
 import en from '@yardcall/prompts/en/checklist.json' with { type: 'json' };
 import es from '@yardcall/prompts/es/checklist.json' with { type: 'json' };
 import type { Locale } from './types.js';
@@ -15,68 +16,4 @@ const WORDS: Record<Locale, ChecklistWords> = { en, es: spanish };
 
 export function checklistWords(locale: Locale): ChecklistWords {
   return WORDS[locale];
-}
-
-const PLACEHOLDER = /\{(\w+)\}/g;
-
-// A template split once into literal text (even indexes) and placeholder names (odd indexes): filling is a join.
-const compiled = new Map<string, string[]>();
-
-function compile(template: string): string[] {
-  let parts = compiled.get(template);
-  if (!parts) {
-    parts = template.split(PLACEHOLDER);
-    compiled.set(template, parts);
-  }
-  return parts;
-}
-
-// Fills "{name}" placeholders; a placeholder without a value is a bug in the words, so it throws.
-export function fillTemplate(template: string, values: Readonly<Record<string, string | number | undefined>>): string {
-  const parts = compile(template);
-  let filled = parts[0] ?? '';
-  let hasEmpty = false;
-  for (let i = 1; i < parts.length; i += 2) {
-    const name = parts[i] as string;
-    const value = values[name];
-    if (value === undefined) {
-      throw new Error(`No value for "{${name}}" in "${template}".`);
-    }
-    const text = String(value);
-    if (text === '') hasEmpty = true;
-    filled += text + (parts[i + 1] ?? '');
-  }
-  // An empty placeholder (a single tire has no inner/outer) must not leave a double space.
-  return hasEmpty
-    ? filled
-        .replace(/\s{2,}/g, ' ')
-        .replace(/\s+([,.?:])/g, '$1')
-        .trim()
-    : filled;
-}
-
-// Places after the decimal point worth saying for each canonical unit.
-const DECIMALS: Record<string, number> = { 'in/32': 1, in: 4, psi: 1, deg: 1, 'psi/min': 2 };
-
-export function formatNumber(value: number, locale: Locale, decimals = 2): string {
-  const factor = 10 ** decimals;
-  const rounded = Math.round(value * factor) / factor;
-  const text = String(rounded);
-  return checklistWords(locale).decimal === '.' ? text : text.replace('.', checklistWords(locale).decimal);
-}
-
-type UnitWordKey = keyof ChecklistWords['verdicts']['unitWords'];
-
-function isUnitWordKey(unit: string): unit is UnitWordKey {
-  return unit in en.verdicts.unitWords;
-}
-
-// "4 thirty-seconds", "1.75 inches", "0,25 pulgadas": a measure as it is said.
-export function formatMeasure(value: number, unit: string, locale: Locale): string {
-  const number = formatNumber(value, locale, DECIMALS[unit] ?? 2);
-  if (!isUnitWordKey(unit)) {
-    return `${number} ${unit}`;
-  }
-  const words = checklistWords(locale).verdicts.unitWords[unit];
-  return `${number} ${Math.abs(value) === 1 ? words.one : words.many}`;
 }

@@ -10,7 +10,7 @@ import {
   type MeasurementContext,
   type Verdict,
 } from '../checklist/types.js';
-import { checklistWords, fillTemplate, formatMeasure } from '../checklist/words.js';
+import { fillTemplate, formatMeasure, verdictWords } from '../checklist/measure-words.js';
 import { canonicalUnitOf, isQuantity, parseUnit, toCanonical, unitFits, type Quantity } from '../units/index.js';
 import { AXLE_POSITIONS, BRAKE_TYPES, STEERING_TYPES } from '../vehicle/index.js';
 import {
@@ -250,7 +250,7 @@ function judge(applied: AppliedLimit, value: number): Judged {
 }
 
 function sayVerdict(judged: Judged, quantity: Quantity, context: MeasurementContext, locale: Locale): string {
-  const words = checklistWords(locale).verdicts;
+  const words = verdictWords(locale).verdicts;
   const { kind, limit, row } = judged.applied;
   const unit = canonicalUnitOf(quantity);
   const minimum = kind === 'at_least' || kind === 'more_than';
@@ -278,7 +278,7 @@ function sayVerdict(judged: Judged, quantity: Quantity, context: MeasurementCont
 
 // The caution every safety verdict carries, in the locale.
 export function safetyCaution(locale: Locale = 'en'): string {
-  return checklistWords(locale).verdicts.caution;
+  return verdictWords(locale).verdicts.caution;
 }
 
 export function evaluateMeasurement(

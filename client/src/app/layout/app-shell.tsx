@@ -7,8 +7,10 @@ import { BrandMark } from '@/components/ui/brand-mark';
 import { Loading } from '@/components/ui/alert';
 import { UserMenu } from '@/features/auth/components/user-menu';
 import { showDisplaySettings } from '@/lib/display-settings';
-import { hasSession, meQueryOptions, SIGN_IN_PATH } from '@/lib/session';
+import { meQueryOptions } from '@/lib/session';
+import { hasSession, SIGN_IN_PATH } from '@/lib/sign-in';
 import { homePathFor } from '../role-homes';
+import { useFocusedScreen } from './shell-handle';
 
 type NavKey = 'home' | 'start' | 'vehicles' | 'users' | 'outbox';
 
@@ -45,6 +47,7 @@ export function AppShell() {
   const me = useQuery({ ...meQueryOptions(), enabled: signedIn });
   const user = signedIn ? me.data : undefined;
   const settings = user?.settings;
+  const focused = useFocusedScreen();
 
   // The account's settings win over this device's cached ones once the user is known.
   useEffect(() => {
@@ -60,42 +63,54 @@ export function AppShell() {
         {t('nav.skip')}
       </a>
       <header className="border-b-4 border-primary bg-surface">
-        <div className="mx-auto flex max-w-6xl flex-wrap items-center justify-between gap-tap-gap px-3 py-2">
+        <div
+          className={`mx-auto flex max-w-6xl flex-wrap items-center justify-between gap-tap-gap px-3 ${focused ? 'py-0' : 'py-2'}`}
+        >
           <Link to="/" className="inline-flex min-h-tap items-center no-underline" aria-label={t('nav.homeLink')}>
             <BrandMark label={t('app.name')} />
           </Link>
-          <nav aria-label={t('nav.main')} className="min-w-0">
-            <ul className="flex flex-wrap items-center gap-tap-gap">
-              {(user ? NAV_BY_ROLE[user.role] : []).map((item) => (
-                <li key={item.key}>
-                  <NavLink to={item.to} end className={navLinkClass}>
-                    {t(`nav.${item.key}`)}
-                  </NavLink>
-                </li>
-              ))}
-              <li>
-                <NavLink to="/settings" className={navLinkClass} data-testid="settings-link">
-                  {t('nav.settings')}
-                </NavLink>
-              </li>
-              {user ? null : (
-                <li>
-                  <NavLink to={SIGN_IN_PATH} className={navLinkClass}>
-                    {t('nav.signIn')}
-                  </NavLink>
-                </li>
-              )}
-            </ul>
-          </nav>
-          {user ? <UserMenu user={user} /> : null}
+          {focused ? null : (
+            <>
+              <nav aria-label={t('nav.main')} className="min-w-0">
+                <ul className="flex flex-wrap items-center gap-tap-gap">
+                  {(user ? NAV_BY_ROLE[user.role] : []).map((item) => (
+                    <li key={item.key}>
+                      <NavLink to={item.to} end className={navLinkClass}>
+                        {t(`nav.${item.key}`)}
+                      </NavLink>
+                    </li>
+                  ))}
+                  <li>
+                    <NavLink to="/settings" className={navLinkClass} data-testid="settings-link">
+                      {t('nav.settings')}
+                    </NavLink>
+                  </li>
+                  {user ? null : (
+                    <li>
+                      <NavLink to={SIGN_IN_PATH} className={navLinkClass}>
+                        {t('nav.signIn')}
+                      </NavLink>
+                    </li>
+                  )}
+                </ul>
+              </nav>
+              {user ? <UserMenu user={user} /> : null}
+            </>
+          )}
         </div>
       </header>
-      <main id="main" tabIndex={-1} className="mx-auto w-full max-w-6xl flex-1 px-3 py-6 focus:outline-none">
+      <main
+        id="main"
+        tabIndex={-1}
+        className={`mx-auto w-full max-w-6xl flex-1 px-3 focus:outline-none ${focused ? 'py-2' : 'py-6'}`}
+      >
         <Suspense fallback={<Loading label={t('common.loading')} />}>
           <Outlet />
         </Suspense>
       </main>
-      <footer className="border-t-2 border-line px-3 py-4 text-center text-muted">{t('app.footer')}</footer>
+      {focused ? null : (
+        <footer className="border-t-2 border-line px-3 py-4 text-center text-muted">{t('app.footer')}</footer>
+      )}
     </div>
   );
 }

@@ -1,7 +1,7 @@
 import { useTranslation } from 'react-i18next';
 import { isRouteErrorResponse, useRouteError } from 'react-router';
 import { ErrorAlert, Loading } from '@/components/ui/alert';
-import { LinkButton } from '@/components/ui/button';
+import { LinkButton } from '@/components/ui/link-button';
 import { ApiError } from '@/lib/api-client';
 import { describeError } from '@/lib/errors';
 

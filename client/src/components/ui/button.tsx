@@ -1,5 +1,4 @@
-import type { ButtonHTMLAttributes, ReactNode } from 'react';
-import { Link, type LinkProps } from 'react-router';
+import type { ButtonHTMLAttributes } from 'react';
 
 export type ButtonVariant = 'primary' | 'secondary' | 'danger' | 'quiet';
 export type ButtonSize = 'normal' | 'large';
@@ -51,19 +50,5 @@ export function Button({
     >
       {children}
     </button>
-  );
-}
-
-export interface LinkButtonProps extends LinkProps {
-  variant?: ButtonVariant;
-  size?: ButtonSize;
-  children: ReactNode;
-}
-
-export function LinkButton({ variant, size, className = '', children, ...rest }: LinkButtonProps) {
-  return (
-    <Link className={buttonClassName(variant, size, typeof className === 'string' ? className : '')} {...rest}>
-      {children}
-    </Link>
   );
 }

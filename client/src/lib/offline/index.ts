@@ -10,7 +10,7 @@ export type {
   OutboxKind,
 } from './offline-db';
 export { createOfflineStore } from './offline-store';
-export type { NewInspection, NewNote, NewPhoto, OfflineStore } from './offline-store';
+export type { LocalWalkaround, NewInspection, NewNote, NewPhoto, OfflineStore } from './offline-store';
 export {
   createSyncEngine,
   defaultRetryDelayMs,

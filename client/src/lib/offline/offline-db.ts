@@ -1,7 +1,7 @@
-import { Dexie, type EntityTable } from 'dexie';
+import { openDB, type DBSchema, type IDBPDatabase } from 'idb';
 import type { Checklist, CreateInspectionRequest, InspectionVehicle, ResultUpsert } from '@yardcall/shared';
 
-export const OFFLINE_DB_NAME = 'yardcall-offline';
+export const OFFLINE_DB_NAME = 'yardcall-walkarounds';
 
 // Opaque to this store: the voice loop saves its own state and reads it back to resume.
 export type JsonValue = string | number | boolean | null | JsonValue[] | { [key: string]: JsonValue };
@@ -71,23 +71,68 @@ export interface OutboxEntry {
   inspectionClientId: string;
 }
 
-export type OfflineDb = Dexie & {
-  inspections: EntityTable<LocalInspection, 'clientId'>;
-  results: EntityTable<LocalResult, 'clientId'>;
-  notes: EntityTable<LocalNote, 'clientId'>;
-  photos: EntityTable<LocalPhoto, 'clientId'>;
-  outbox: EntityTable<OutboxEntry, 'seq'>;
-};
+export interface OfflineSchema extends DBSchema {
+  inspections: { key: string; value: LocalInspection; indexes: { serverId: string; synced: SyncedFlag } };
+  results: {
+    key: string;
+    value: LocalResult;
+    indexes: { inspectionClientId: string; inspectionItem: [string, string]; synced: SyncedFlag };
+  };
+  notes: { key: string; value: LocalNote; indexes: { inspectionClientId: string; synced: SyncedFlag } };
+  photos: { key: string; value: LocalPhoto; indexes: { inspectionClientId: string; synced: SyncedFlag } };
+  outbox: {
+    key: number;
+    value: OutboxEntry;
+    indexes: { kindClientId: [OutboxKind, string]; kind: OutboxKind; inspectionClientId: string };
+  };
+}
 
-// Each call opens its own connection: a new instance on the same name is what a reload sees.
+export type OfflineStoreName = 'inspections' | 'results' | 'notes' | 'photos' | 'outbox';
+export type OfflineConnection = IDBPDatabase<OfflineSchema>;
+
+export interface OfflineDb {
+  name: string;
+  // The connection, opened on first use and shared after.
+  connection(): Promise<OfflineConnection>;
+  close(): void;
+}
+
+// A fresh name and version 1 of our own schema: nothing of an earlier store format is read.
+const SCHEMA_VERSION = 1;
+
+function createSchema(db: OfflineConnection): void {
+  const inspections = db.createObjectStore('inspections', { keyPath: 'clientId' });
+  inspections.createIndex('serverId', 'serverId');
+  inspections.createIndex('synced', 'synced');
+  const results = db.createObjectStore('results', { keyPath: 'clientId' });
+  results.createIndex('inspectionClientId', 'inspectionClientId');
+  results.createIndex('inspectionItem', ['inspectionClientId', 'itemKey']);
+  results.createIndex('synced', 'synced');
+  for (const name of ['notes', 'photos'] as const) {
+    const store = db.createObjectStore(name, { keyPath: 'clientId' });
+    store.createIndex('inspectionClientId', 'inspectionClientId');
+    store.createIndex('synced', 'synced');
+  }
+  const outbox = db.createObjectStore('outbox', { keyPath: 'seq', autoIncrement: true });
+  outbox.createIndex('kindClientId', ['kind', 'clientId'], { unique: true });
+  outbox.createIndex('kind', 'kind');
+  outbox.createIndex('inspectionClientId', 'inspectionClientId');
+}
+
+// Each call makes its own connection: a new one on the same name is what a reload sees.
 export function openOfflineDb(name: string = OFFLINE_DB_NAME): OfflineDb {
-  const db = new Dexie(name) as OfflineDb;
-  db.version(1).stores({
-    inspections: 'clientId, serverId, synced',
-    results: 'clientId, inspectionClientId, [inspectionClientId+itemKey], synced',
-    notes: 'clientId, inspectionClientId, synced',
-    photos: 'clientId, inspectionClientId, synced',
-    outbox: '++seq, &[kind+clientId], kind, inspectionClientId',
-  });
-  return db;
+  let opening: Promise<OfflineConnection> | undefined;
+  return {
+    name,
+    connection: () =>
+      (opening ??= openDB<OfflineSchema>(name, SCHEMA_VERSION, {
+        upgrade(db, oldVersion) {
+          if (oldVersion < 1) createSchema(db);
+        },
+      })),
+    close() {
+      void opening?.then((db) => db.close());
+      opening = undefined;
+    },
+  };
 }

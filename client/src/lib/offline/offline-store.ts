@@ -1,3 +1,4 @@
+import type { IDBPTransaction } from 'idb';
 import type { Checklist, CreateInspectionRequest, InspectionVehicle, ResultUpsert } from '@yardcall/shared';
 import type {
   JsonValue,
@@ -6,6 +7,8 @@ import type {
   LocalPhoto,
   LocalResult,
   OfflineDb,
+  OfflineSchema,
+  OfflineStoreName,
   OutboxEntry,
   OutboxKind,
 } from './offline-db';
@@ -44,6 +47,12 @@ export interface PendingResult {
   revision: number;
 }
 
+// A walk-around as the glove screen resumes it: the inspection and every answer saved so far.
+export interface LocalWalkaround {
+  inspection: LocalInspection;
+  results: LocalResult[];
+}
+
 export interface ResultAck {
   clientId: string;
   revision: number;
@@ -51,7 +60,13 @@ export interface ResultAck {
 
 type WriteListener = () => void;
 
+type WriteTransaction = IDBPTransaction<OfflineSchema, OfflineStoreName[], 'readwrite'>;
+
 export type OfflineStore = ReturnType<typeof createOfflineStore>;
+
+function present<T>(row: T | undefined): row is T {
+  return row !== undefined;
+}
 
 // Every answer, note and photo lands here first; the sync engine sends what the outbox lists.
 export function createOfflineStore(db: OfflineDb, now: () => Date = () => new Date()) {
@@ -60,24 +75,60 @@ export function createOfflineStore(db: OfflineDb, now: () => Date = () => new Da
     for (const listener of listeners) listener();
   };
 
-  async function enqueue(kind: OutboxKind, clientId: string, inspectionClientId: string): Promise<void> {
+  // One read-write transaction over the named stores; only IndexedDB requests may be awaited
+  // inside it, or it commits early.
+  async function write<T>(names: OfflineStoreName[], work: (tx: WriteTransaction) => Promise<T>): Promise<T> {
+    const tx = (await db.connection()).transaction(names, 'readwrite');
+    const [result] = await Promise.all([work(tx), tx.done]);
+    return result;
+  }
+
+  async function enqueue(
+    tx: WriteTransaction,
+    kind: OutboxKind,
+    clientId: string,
+    inspectionClientId: string,
+  ): Promise<void> {
     // Unique on kind+clientId: a second write of something still waiting keeps its first place.
-    const existing = await db.outbox.where('[kind+clientId]').equals([kind, clientId]).first();
-    if (!existing) await db.outbox.add({ kind, clientId, inspectionClientId });
+    const outbox = tx.objectStore('outbox');
+    const existing = await outbox.index('kindClientId').getKey([kind, clientId]);
+    if (existing === undefined) await outbox.add({ kind, clientId, inspectionClientId });
   }
 
-  async function dequeue(kind: OutboxKind, clientId: string): Promise<void> {
-    await db.outbox.where('[kind+clientId]').equals([kind, clientId]).delete();
+  async function dequeue(tx: WriteTransaction, kind: OutboxKind, clientId: string): Promise<void> {
+    const outbox = tx.objectStore('outbox');
+    const seq = await outbox.index('kindClientId').getKey([kind, clientId]);
+    if (seq !== undefined) await outbox.delete(seq);
   }
 
-  async function requireInspection(clientId: string): Promise<LocalInspection> {
-    const inspection = await db.inspections.get(clientId);
+  async function requireInspection(tx: WriteTransaction, clientId: string): Promise<LocalInspection> {
+    const inspection = await tx.objectStore('inspections').get(clientId);
     if (!inspection) throw new Error(`No inspection ${clientId} is stored on this device.`);
     return inspection;
   }
 
-  async function pendingOf(kind: OutboxKind): Promise<OutboxEntry[]> {
-    return db.outbox.where('kind').equals(kind).sortBy('seq');
+  // Outbox entries of a kind in the order they were written (the index keeps the key order).
+  async function pendingOf<Name extends 'inspections' | 'results' | 'notes' | 'photos'>(kind: OutboxKind, name: Name) {
+    const connection = await db.connection();
+    const tx = connection.transaction(['outbox', name], 'readonly');
+    const entries: OutboxEntry[] = await tx.objectStore('outbox').index('kind').getAll(kind);
+    const rows = await Promise.all(entries.map((entry) => tx.objectStore(name).get(entry.clientId)));
+    await tx.done;
+    return rows.filter(present);
+  }
+
+  async function markSynced(
+    name: 'inspections' | 'notes' | 'photos',
+    kind: OutboxKind,
+    clientId: string,
+    serverId: string,
+  ): Promise<void> {
+    await write([name, 'outbox'], async (tx) => {
+      const store = tx.objectStore(name);
+      const row = await store.get(clientId);
+      if (row) await store.put({ ...row, serverId, synced: 1 });
+      await dequeue(tx, kind, clientId);
+    });
   }
 
   return {
@@ -102,16 +153,16 @@ export function createOfflineStore(db: OfflineDb, now: () => Date = () => new Da
         createdAt: stamp,
         updatedAt: stamp,
       };
-      await db.transaction('rw', db.inspections, db.outbox, async () => {
-        const existing = await db.inspections.get(inspection.clientId);
+      await write(['inspections', 'outbox'], async (tx) => {
+        const existing = await tx.objectStore('inspections').get(inspection.clientId);
         // Saving again never forgets a server id already learnt.
         if (existing?.serverId) {
           inspection.serverId = existing.serverId;
           inspection.synced = 1;
         }
         if (existing) inspection.createdAt = existing.createdAt;
-        await db.inspections.put(inspection);
-        if (!inspection.serverId) await enqueue('inspection', inspection.clientId, inspection.clientId);
+        await tx.objectStore('inspections').put(inspection);
+        if (!inspection.serverId) await enqueue(tx, 'inspection', inspection.clientId, inspection.clientId);
       });
       notifyWrite();
       return inspection;
@@ -119,31 +170,30 @@ export function createOfflineStore(db: OfflineDb, now: () => Date = () => new Da
 
     // Local only: the voice loop's resume point is never sent.
     async saveVoiceState(inspectionClientId: string, voiceState: JsonValue): Promise<void> {
-      const updated = await db.inspections.update(inspectionClientId, {
-        voiceState,
-        updatedAt: now().toISOString(),
+      await write(['inspections'], async (tx) => {
+        const inspection = await requireInspection(tx, inspectionClientId);
+        await tx.objectStore('inspections').put({ ...inspection, voiceState, updatedAt: now().toISOString() });
       });
-      if (updated === 0) throw new Error(`No inspection ${inspectionClientId} is stored on this device.`);
     },
 
-    getInspection(clientId: string): Promise<LocalInspection | undefined> {
-      return db.inspections.get(clientId);
+    async getInspection(clientId: string): Promise<LocalInspection | undefined> {
+      return (await db.connection()).get('inspections', clientId);
     },
 
-    listInspections(): Promise<LocalInspection[]> {
-      return db.inspections.orderBy('clientId').toArray();
+    async listInspections(): Promise<LocalInspection[]> {
+      return (await db.connection()).getAll('inspections');
     },
 
     async saveResults(inspectionClientId: string, upserts: ResultUpsert[]): Promise<void> {
       const stamp = now().toISOString();
-      await db.transaction('rw', db.inspections, db.results, db.outbox, async () => {
-        await requireInspection(inspectionClientId);
+      await write(['inspections', 'results', 'outbox'], async (tx) => {
+        await requireInspection(tx, inspectionClientId);
         for (const upsert of upserts) {
-          const existing = await db.results.get(upsert.clientId);
+          const existing = await tx.objectStore('results').get(upsert.clientId);
           if (existing && existing.inspectionClientId !== inspectionClientId) {
             throw new Error(`Result ${upsert.clientId} belongs to another inspection.`);
           }
-          await db.results.put({
+          await tx.objectStore('results').put({
             clientId: upsert.clientId,
             inspectionClientId,
             itemKey: upsert.itemKey,
@@ -152,14 +202,21 @@ export function createOfflineStore(db: OfflineDb, now: () => Date = () => new Da
             revision: (existing?.revision ?? 0) + 1,
             updatedAt: stamp,
           });
-          await enqueue('result', upsert.clientId, inspectionClientId);
+          await enqueue(tx, 'result', upsert.clientId, inspectionClientId);
         }
       });
       notifyWrite();
     },
 
-    getResults(inspectionClientId: string): Promise<LocalResult[]> {
-      return db.results.where('inspectionClientId').equals(inspectionClientId).toArray();
+    async getResults(inspectionClientId: string): Promise<LocalResult[]> {
+      return (await db.connection()).getAllFromIndex('results', 'inspectionClientId', inspectionClientId);
+    },
+
+    async getWalkaround(clientId: string): Promise<LocalWalkaround | null> {
+      const connection = await db.connection();
+      const inspection = await connection.get('inspections', clientId);
+      if (!inspection) return null;
+      return { inspection, results: await connection.getAllFromIndex('results', 'inspectionClientId', clientId) };
     },
 
     async saveNote(input: NewNote): Promise<void> {
@@ -175,17 +232,17 @@ export function createOfflineStore(db: OfflineDb, now: () => Date = () => new Da
         synced: 0,
         createdAt: now().toISOString(),
       };
-      await db.transaction('rw', db.inspections, db.notes, db.outbox, async () => {
-        await requireInspection(input.inspectionClientId);
-        if ((await db.notes.get(note.clientId))?.synced === 1) return;
-        await db.notes.put(note);
-        await enqueue('note', note.clientId, note.inspectionClientId);
+      await write(['inspections', 'notes', 'outbox'], async (tx) => {
+        await requireInspection(tx, input.inspectionClientId);
+        if ((await tx.objectStore('notes').get(note.clientId))?.synced === 1) return;
+        await tx.objectStore('notes').put(note);
+        await enqueue(tx, 'note', note.clientId, note.inspectionClientId);
       });
       notifyWrite();
     },
 
-    getNotes(inspectionClientId: string): Promise<LocalNote[]> {
-      return db.notes.where('inspectionClientId').equals(inspectionClientId).toArray();
+    async getNotes(inspectionClientId: string): Promise<LocalNote[]> {
+      return (await db.connection()).getAllFromIndex('notes', 'inspectionClientId', inspectionClientId);
     },
 
     async savePhoto(input: NewPhoto): Promise<void> {
@@ -199,85 +256,66 @@ export function createOfflineStore(db: OfflineDb, now: () => Date = () => new Da
         synced: 0,
         createdAt: now().toISOString(),
       };
-      await db.transaction('rw', db.inspections, db.photos, db.outbox, async () => {
-        await requireInspection(input.inspectionClientId);
-        if ((await db.photos.get(photo.clientId))?.synced === 1) return;
-        await db.photos.put(photo);
-        await enqueue('photo', photo.clientId, photo.inspectionClientId);
+      await write(['inspections', 'photos', 'outbox'], async (tx) => {
+        await requireInspection(tx, input.inspectionClientId);
+        if ((await tx.objectStore('photos').get(photo.clientId))?.synced === 1) return;
+        await tx.objectStore('photos').put(photo);
+        await enqueue(tx, 'photo', photo.clientId, photo.inspectionClientId);
       });
       notifyWrite();
     },
 
-    getPhotos(inspectionClientId: string): Promise<LocalPhoto[]> {
-      return db.photos.where('inspectionClientId').equals(inspectionClientId).toArray();
+    async getPhotos(inspectionClientId: string): Promise<LocalPhoto[]> {
+      return (await db.connection()).getAllFromIndex('photos', 'inspectionClientId', inspectionClientId);
     },
 
-    countWaiting(): Promise<number> {
-      return db.outbox.count();
+    async countWaiting(): Promise<number> {
+      return (await db.connection()).count('outbox');
+    },
+
+    async countWaitingFor(inspectionClientId: string): Promise<number> {
+      return (await db.connection()).countFromIndex('outbox', 'inspectionClientId', inspectionClientId);
     },
 
     // What the sync engine reads and settles.
 
-    async pendingCreates(): Promise<LocalInspection[]> {
-      const entries = await pendingOf('inspection');
-      const rows = await db.inspections.bulkGet(entries.map((entry) => entry.clientId));
-      return rows.filter((row): row is LocalInspection => row !== undefined);
-    },
+    pendingCreates: (): Promise<LocalInspection[]> => pendingOf('inspection', 'inspections'),
 
-    async markInspectionCreated(clientId: string, serverId: string): Promise<void> {
-      await db.transaction('rw', db.inspections, db.outbox, async () => {
-        await db.inspections.update(clientId, { serverId, synced: 1 });
-        await dequeue('inspection', clientId);
-      });
-    },
+    markInspectionCreated: (clientId: string, serverId: string): Promise<void> =>
+      markSynced('inspections', 'inspection', clientId, serverId),
 
     async pendingResults(): Promise<PendingResult[]> {
-      const entries = await pendingOf('result');
-      const rows = await db.results.bulkGet(entries.map((entry) => entry.clientId));
-      return rows
-        .filter((row): row is LocalResult => row !== undefined)
-        .map((row) => ({ inspectionClientId: row.inspectionClientId, upsert: row.upsert, revision: row.revision }));
+      const rows = await pendingOf('result', 'results');
+      return rows.map((row) => ({
+        inspectionClientId: row.inspectionClientId,
+        upsert: row.upsert,
+        revision: row.revision,
+      }));
     },
 
     // Settles only the revisions the server saw; a result changed meanwhile stays queued.
     async markResultsSynced(acks: ResultAck[]): Promise<void> {
-      await db.transaction('rw', db.results, db.outbox, async () => {
+      await write(['results', 'outbox'], async (tx) => {
         for (const ack of acks) {
-          const row = await db.results.get(ack.clientId);
+          const row = await tx.objectStore('results').get(ack.clientId);
           if (!row || row.revision !== ack.revision) continue;
-          await db.results.update(ack.clientId, { synced: 1 });
-          await dequeue('result', ack.clientId);
+          await tx.objectStore('results').put({ ...row, synced: 1 });
+          await dequeue(tx, 'result', ack.clientId);
         }
       });
     },
 
-    async pendingNotes(): Promise<LocalNote[]> {
-      const entries = await pendingOf('note');
-      const rows = await db.notes.bulkGet(entries.map((entry) => entry.clientId));
-      return rows.filter((row): row is LocalNote => row !== undefined);
-    },
+    pendingNotes: (): Promise<LocalNote[]> => pendingOf('note', 'notes'),
 
-    async markNoteSynced(clientId: string, serverId: string): Promise<void> {
-      await db.transaction('rw', db.notes, db.outbox, async () => {
-        await db.notes.update(clientId, { serverId, synced: 1 });
-        await dequeue('note', clientId);
-      });
-    },
+    markNoteSynced: (clientId: string, serverId: string): Promise<void> =>
+      markSynced('notes', 'note', clientId, serverId),
 
-    async pendingPhotos(): Promise<LocalPhoto[]> {
-      const entries = await pendingOf('photo');
-      const rows = await db.photos.bulkGet(entries.map((entry) => entry.clientId));
-      return rows.filter((row): row is LocalPhoto => row !== undefined);
-    },
+    pendingPhotos: (): Promise<LocalPhoto[]> => pendingOf('photo', 'photos'),
 
-    async markPhotoSynced(clientId: string, serverId: string): Promise<void> {
-      await db.transaction('rw', db.photos, db.outbox, async () => {
-        await db.photos.update(clientId, { serverId, synced: 1 });
-        await dequeue('photo', clientId);
-      });
-    },
+    markPhotoSynced: (clientId: string, serverId: string): Promise<void> =>
+      markSynced('photos', 'photo', clientId, serverId),
 
     serverIdOf: async (inspectionClientId: string): Promise<string | undefined> =>
-      (await db.inspections.get(inspectionClientId))?.serverId,
+      (await db.connection()).get('inspections', inspectionClientId).then((row) => row?.serverId),
   };
 }

@@ -3,7 +3,8 @@ import { useTranslation } from 'react-i18next';
 import { useNavigate } from 'react-router';
 import type { UserSummary } from '@yardcall/shared';
 import { Button } from '@/components/ui/button';
-import { endSession, SIGN_IN_PATH } from '@/lib/session';
+import { endSession } from '@/lib/session';
+import { SIGN_IN_PATH } from '@/lib/sign-in';
 import { tokenStore } from '@/lib/api-client';
 
 // Who is signed in, and the way out.

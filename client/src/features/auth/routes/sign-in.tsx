@@ -1,7 +1,7 @@
 import { useTranslation } from 'react-i18next';
 import { useNavigate, useSearchParams } from 'react-router';
 import { PageHeading } from '@/components/ui/layout';
-import { safeNextPath } from '@/lib/session';
+import { safeNextPath } from '@/lib/sign-in';
 import { SignInForm } from '../components/sign-in-form';
 
 export function SignInRoute() {

@@ -1,5 +1,5 @@
 import { useTranslation } from 'react-i18next';
-import { LinkButton } from '@/components/ui/button';
+import { LinkButton } from '@/components/ui/link-button';
 import { EmptyState, Section } from '@/components/ui/layout';
 import { HomePage } from '../components/home-page';
 

@@ -3,7 +3,8 @@ import { useTranslation } from 'react-i18next';
 import { Loading } from '@/components/ui/alert';
 import { PageHeading } from '@/components/ui/layout';
 import { readCachedDisplaySettings } from '@/lib/display-settings';
-import { hasSession, meQueryOptions } from '@/lib/session';
+import { meQueryOptions } from '@/lib/session';
+import { hasSession } from '@/lib/sign-in';
 import { SettingsForm } from '../components/settings-form';
 
 // Reachable signed in or not: the sign-in screen at night needs it too.

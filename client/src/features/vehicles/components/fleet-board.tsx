@@ -1,6 +1,6 @@
 import { useTranslation } from 'react-i18next';
 import { ErrorAlert, Loading } from '@/components/ui/alert';
-import { LinkButton } from '@/components/ui/button';
+import { LinkButton } from '@/components/ui/link-button';
 import { describeError } from '@/lib/errors';
 import { useVehicles } from '../api/get-vehicles';
 import { VehicleList } from './vehicle-list';

@@ -2,7 +2,7 @@ import type { QueryClient } from '@tanstack/react-query';
 import { useTranslation } from 'react-i18next';
 import { useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { ErrorAlert, Loading } from '@/components/ui/alert';
-import { LinkButton } from '@/components/ui/button';
+import { LinkButton } from '@/components/ui/link-button';
 import { PageHeading } from '@/components/ui/layout';
 import { describeError } from '@/lib/errors';
 import { useCurrentUser } from '@/lib/session';

@@ -24,7 +24,7 @@ export async function syncThenSubmit(clientId: string, body: SubmitInspectionReq
   }
   await engine.syncNow();
   await engine.idle();
-  const waiting = await store.db.outbox.where('inspectionClientId').equals(clientId).count();
+  const waiting = await store.countWaitingFor(clientId);
   const serverId = await store.serverIdOf(clientId);
   if (waiting > 0 || !serverId) throw new WaitingToSyncError(waiting);
   return submitInspection(serverId, body);

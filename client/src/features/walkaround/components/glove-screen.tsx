@@ -17,7 +17,7 @@ import { describeError } from '@/lib/errors';
 import { getOfflineRuntime, useSyncStatus, type JsonValue } from '@/lib/offline';
 import { resizePhoto, startRecording, type NoteRecording } from '@/lib/recorder';
 import { TypedInputEngine, chooseSpeechEngine, type SpeechEngine } from '@/lib/speech';
-import type { LocalWalkaround } from '../api/get-local-inspection';
+import type { LocalWalkaround } from '@/lib/offline';
 import { VOICE_LOOP_WORDS, restoreVoiceLoop, serializeVoiceLoop, useVoiceLoop } from '../voice-loop';
 import { observeEngine } from './observed-engine';
 import { SafetyCaution } from './safety-caution';

@@ -1,7 +1,8 @@
 import { useTranslation } from 'react-i18next';
 import { formatMeasure, type InspectionResponse, type Locale } from '@yardcall/shared';
 import { ErrorAlert } from '@/components/ui/alert';
-import { Button, LinkButton } from '@/components/ui/button';
+import { Button } from '@/components/ui/button';
+import { LinkButton } from '@/components/ui/link-button';
 import { Card, EmptyState, Section } from '@/components/ui/layout';
 import { describeError } from '@/lib/errors';
 import { useReportPdf } from '../api/get-report-pdf';

@@ -11,13 +11,10 @@ import { describeError } from '@/lib/errors';
 import { isLocale } from '@/lib/i18n';
 import { useCreateLocalInspection } from '../api/create-local-inspection';
 import { pendingAcknowledgementQueryOptions } from '../api/get-pending-acknowledgement';
+import { runPath } from '../walkaround-paths';
 import { PendingAcknowledgementReview } from './pending-acknowledgement-review';
 
 export const START_KINDS = ['pre_trip', 'post_trip', 'en_route'] as const satisfies readonly InspectionKind[];
-
-export function runPath(clientId: string): string {
-  return `/driver/inspections/${encodeURIComponent(clientId)}`;
-}
 
 export interface StartWalkaroundProps {
   // The unit list (recent first, search); calls back with the tapped unit.

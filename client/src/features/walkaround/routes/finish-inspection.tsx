@@ -8,6 +8,7 @@ import { localInspectionQueryOptions } from '../api/get-local-inspection';
 import { useInspection } from '../api/get-inspection';
 import { FinishReview } from '../components/finish-review';
 import { ReportView } from '../components/report-view';
+import { runPath } from '../walkaround-paths';
 
 export function FinishInspectionRoute() {
   const { t } = useTranslation();
@@ -19,5 +20,5 @@ export function FinishInspectionRoute() {
   if (local.isError) return <ErrorAlert>{describeError(local.error)}</ErrorAlert>;
   if (!local.data) return <EmptyState title={t('walkaround.run.notHere')} />;
   if (server.data?.status === 'submitted') return <ReportView inspection={server.data} />;
-  return <FinishReview walkaround={local.data} runPath={`/driver/inspections/${encodeURIComponent(clientId)}`} />;
+  return <FinishReview walkaround={local.data} runPath={runPath(clientId)} />;
 }

@@ -1,15 +1,12 @@
 import { useTranslation } from 'react-i18next';
 import { useNavigate, useParams } from 'react-router';
 import { ErrorAlert, Loading } from '@/components/ui/alert';
-import { LinkButton } from '@/components/ui/button';
+import { LinkButton } from '@/components/ui/link-button';
 import { EmptyState } from '@/components/ui/layout';
 import { describeError } from '@/lib/errors';
 import { useLocalInspection } from '../api/get-local-inspection';
 import { GloveScreen } from '../components/glove-screen';
-
-export function finishPath(clientId: string): string {
-  return `/driver/inspections/${encodeURIComponent(clientId)}/finish`;
-}
+import { finishPath } from '../walkaround-paths';
 
 export function RunInspectionRoute() {
   const { t } = useTranslation();

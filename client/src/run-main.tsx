@@ -1,0 +1,19 @@
+import '@fontsource/atkinson-hyperlegible/400.css';
+import '@fontsource/atkinson-hyperlegible/700.css';
+import './index.css';
+import { StrictMode } from 'react';
+import { createRoot } from 'react-dom/client';
+import { RunPage } from '@/app/run-page';
+import { applyDisplaySettings, readCachedDisplaySettings } from '@/lib/display-settings';
+
+// A walk-around opened cold (a reload, a resume from a link): the glove screen alone, without the
+// router and the rest of the app, so the phone loads as little as it can.
+applyDisplaySettings(readCachedDisplaySettings());
+
+const root = document.getElementById('root');
+if (!root) throw new Error('driver-run/index.html has no #root element.');
+createRoot(root).render(
+  <StrictMode>
+    <RunPage clientId={decodeURIComponent(window.location.pathname.split('/').filter(Boolean).at(-1) ?? '')} />
+  </StrictMode>,
+);
