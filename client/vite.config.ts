@@ -25,6 +25,9 @@ export default defineConfig({
     },
   },
   server: { proxy: apiProxy },
+  // ffmpeg.wasm starts its worker from `new URL('./worker.js', import.meta.url)`: pre-bundling would
+  // move the module away from its worker file in the dev server.
+  optimizeDeps: { exclude: ['@ffmpeg/ffmpeg'] },
   preview: { proxy: apiProxy },
   test: {
     environment: 'jsdom',

@@ -29,6 +29,15 @@ const SHARED_BENCHES: { file: string; run: string }[] = [
   { file: 'shared/src/narration/narration.bench.ts', run: 'runNarrationBench' },
 ];
 
+const SERVER_BENCHES: { file: string; what: string; database: string }[] = [
+  { file: 'server/bench/results-upsert.bench.ts', what: 'PUT /api/inspections/:id/results', database: 'results' },
+  {
+    file: 'server/bench/inspections-list.bench.ts',
+    what: 'GET /api/inspections over 100 000 inspections',
+    database: 'list',
+  },
+];
+
 const figures: BenchFigure[] = [];
 const loadBefore = loadavg()[0] ?? 0;
 
@@ -49,15 +58,18 @@ const cluster = startCluster({
 });
 try {
   const runId = `${Date.now().toString(36)}_${process.pid}`;
-  say('bench: PUT /api/inspections/:id/results (server/bench/results-upsert.bench.ts)');
-  const resultsDb = await freshDatabase(cluster.adminUrl(), `yardcall_bench_results_${runId}`);
-  const results = await run('npx', ['tsx', 'server/bench/results-upsert.bench.ts'], {
-    capture: true,
-    env: { ...process.env, DATABASE_URL: resultsDb, NODE_ENV: 'test' },
-  });
-  if (results.code !== 0) throw new Error('The results benchmark failed (see above).');
-  for (const line of results.output.split('\n')) {
-    if (line.startsWith('{')) figures.push(JSON.parse(line) as BenchFigure);
+  // Each against the built server on a database of its own; each prints one JSON figure a line.
+  for (const bench of SERVER_BENCHES) {
+    say(`bench: ${bench.what} (${bench.file})`);
+    const database = await freshDatabase(cluster.adminUrl(), `yardcall_bench_${bench.database}_${runId}`);
+    const result = await run('npx', ['tsx', bench.file], {
+      capture: true,
+      env: { ...process.env, DATABASE_URL: database, NODE_ENV: 'test' },
+    });
+    if (result.code !== 0) throw new Error(`${bench.file} failed (see above).`);
+    for (const line of result.output.split('\n')) {
+      if (line.startsWith('{')) figures.push(JSON.parse(line) as BenchFigure);
+    }
   }
 
   say('bench: first-load JavaScript of the driver routes in Chromium');

@@ -6,4 +6,5 @@ export const DEMO_SIGN_INS = [
   { role: 'supervisor', email: 'supervisor@yardcall.test' },
   { role: 'trainer', email: 'trainer@yardcall.test' },
   { role: 'admin', email: 'admin@yardcall.test' },
+  { role: 'student driver', email: 'student@yardcall.test' },
 ] as const;

@@ -2,22 +2,9 @@
 // (migrated and seeded here first; both are idempotent), and GET /api/health in the same run.
 // Run: npm run build -w shared && npm run build -w server && DATABASE_URL=... npx tsx server/bench/results-upsert.bench.ts
 import type { ChecklistItem, InspectionResponse, LoginResponse, ResultUpsert, VehicleResponse } from '@yardcall/shared';
-import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
 import { randomUUID } from 'node:crypto';
-import { createServer } from 'node:net';
-import { join } from 'node:path';
+import { percentile, runScript, startServer, type BenchFigure } from './bench-server';
 
-export interface BenchFigure {
-  name: string;
-  unit: string;
-  p50: number;
-  p95: number;
-  p99: number;
-  goal: number;
-  ratioToHealth: number;
-}
-
-const SERVER_DIR = join(__dirname, '..');
 const CALLS = 200;
 const WARMUP = 20;
 const ITEMS_PER_CALL = 150;
@@ -36,64 +23,9 @@ const READINGS: Record<string, { value: number; unit: string }> = {
   leak_rate: { value: 1, unit: 'psi/min' },
 };
 
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const probe = createServer();
-    probe.once('error', reject);
-    probe.listen(0, '127.0.0.1', () => {
-      const address = probe.address();
-      const port = typeof address === 'object' && address ? address.port : 0;
-      probe.close(() => resolve(port));
-    });
-  });
-}
-
-function runScript(script: string, databaseUrl: string): void {
-  const result = spawnSync(process.execPath, [join(SERVER_DIR, 'dist', 'database', script)], {
-    cwd: SERVER_DIR,
-    env: { ...process.env, DATABASE_URL: databaseUrl },
-    stdio: ['ignore', 'ignore', 'inherit'],
-  });
-  if (result.status !== 0) throw new Error(`${script} failed with code ${result.status ?? 'null'}.`);
-}
-
-async function startServer(databaseUrl: string): Promise<{ url: string; child: ChildProcess }> {
-  const port = await freePort();
-  const child = spawn(process.execPath, [join(SERVER_DIR, 'dist', 'main.js')], {
-    cwd: SERVER_DIR,
-    env: {
-      ...process.env,
-      DATABASE_URL: databaseUrl,
-      PORT: String(port),
-      HOST: '127.0.0.1',
-      JWT_SECRET: process.env.JWT_SECRET ?? 'yardcall-bench-secret-0123456789abcdef',
-      CLIENT_DIST: '/nonexistent/yardcall-client-dist',
-    },
-    stdio: ['ignore', 'ignore', 'inherit'],
-  });
-  const url = `http://127.0.0.1:${port}`;
-  const deadline = Date.now() + 60_000;
-  while (Date.now() < deadline) {
-    if (child.exitCode !== null) throw new Error(`The server exited with code ${child.exitCode}.`);
-    try {
-      if ((await fetch(`${url}/api/health`)).ok) return { url, child };
-    } catch {
-      // not listening yet
-    }
-    await new Promise((resolve) => setTimeout(resolve, 250));
-  }
-  child.kill('SIGTERM');
-  throw new Error(`The server did not answer ${url}/api/health within 60 s.`);
-}
-
 async function json<T>(response: Response): Promise<T> {
   if (!response.ok) throw new Error(`${response.url} answered ${response.status}: ${await response.text()}`);
   return (await response.json()) as T;
-}
-
-function percentile(sorted: readonly number[], p: number): number {
-  const index = Math.min(sorted.length - 1, Math.max(0, Math.ceil((p / 100) * sorted.length) - 1));
-  return sorted[index] ?? Number.NaN;
 }
 
 function batch(items: readonly ChecklistItem[], at: number): ResultUpsert[] {

@@ -10,13 +10,16 @@ import { createValidationPipe } from './common/validation';
 import { validateEnv, type AppEnv } from './config/env.validation';
 import { buildDataSourceOptions } from './database/data-source';
 import { DefectsModule } from './defects/defects.module';
+import { FleetModule } from './fleet/fleet.module';
 import { HealthModule } from './health/health.module';
 import { InspectionsModule } from './inspections/inspections.module';
+import { JobsModule } from './jobs/jobs.module';
 import { MailModule } from './mail/mail.module';
 import { NotesModule } from './notes/notes.module';
 import { OrganizationsModule } from './organizations/organizations.module';
 import { ReportsModule } from './reports/reports.module';
 import { StorageModule } from './storage/storage.module';
+import { TrainingModule } from './training/training.module';
 import { UsersModule } from './users/users.module';
 import { VehiclesModule } from './vehicles/vehicles.module';
 
@@ -59,15 +62,18 @@ void configModule.catch(() => undefined);
         ];
       },
     }),
+    JobsModule,
     AuthModule,
     OrganizationsModule,
     UsersModule,
     VehiclesModule,
     InspectionsModule,
     DefectsModule,
+    FleetModule,
     StorageModule,
     NotesModule,
     ReportsModule,
+    TrainingModule,
     MailModule,
     HealthModule,
   ],

@@ -13,7 +13,8 @@ export function configureApp(app: INestApplication): INestApplication {
         useDefaults: true,
         directives: {
           defaultSrc: ["'self'"],
-          scriptSrc: ["'self'"],
+          // The reviewer's audio tools compile ffmpeg's WebAssembly; nothing else is evaluated.
+          scriptSrc: ["'self'", "'wasm-unsafe-eval'"],
           // Tailwind and Headless UI set inline style attributes.
           styleSrc: ["'self'", "'unsafe-inline'"],
           imgSrc: ["'self'", 'data:', 'blob:'],

@@ -52,6 +52,20 @@ const ROUTES: RouteRow[] = [
   { method: 'post', path: '/api/inspections/{id}/photos', access: ['driver'] },
   { method: 'get', path: '/api/photos/{id}', access: 'signed-in' },
   { method: 'get', path: '/api/inspections/{id}/report.pdf', access: 'signed-in' },
+  { method: 'get', path: '/api/fleet/board', access: ['supervisor', 'admin', 'mechanic'] },
+  { method: 'get', path: '/api/inspections/export.csv', access: ['supervisor', 'admin'] },
+  { method: 'get', path: '/api/organizations/retention', access: ['admin'] },
+  { method: 'patch', path: '/api/organizations/retention', access: ['admin'] },
+  { method: 'post', path: '/api/organizations/retention/purge', access: ['admin'] },
+  { method: 'post', path: '/api/training/attempts', access: ['driver'] },
+  { method: 'get', path: '/api/training/attempts', access: ['trainer', 'driver'] },
+  { method: 'get', path: '/api/training/attempts/{id}', access: ['trainer', 'driver'] },
+  { method: 'put', path: '/api/training/attempts/{id}/segments', access: ['driver'] },
+  { method: 'post', path: '/api/training/attempts/{id}/audio', access: ['driver'] },
+  { method: 'get', path: '/api/training/attempts/{id}/audio', access: ['trainer', 'driver'] },
+  { method: 'post', path: '/api/training/attempts/{id}/finish', access: ['driver'] },
+  { method: 'put', path: '/api/training/attempts/{id}/review', access: ['trainer'] },
+  { method: 'get', path: '/api/training/progress', access: ['trainer', 'driver'] },
 ];
 
 interface OpenApiDocument {
@@ -86,6 +100,16 @@ describe('access control', () => {
       '/api/photos/{id}': NOWHERE_ID,
       '/api/inspections/{id}/report.pdf': NOWHERE_ID,
     });
+    // Training attempts: likewise an id that exists nowhere.
+    for (const path of [
+      '/api/training/attempts/{id}',
+      '/api/training/attempts/{id}/segments',
+      '/api/training/attempts/{id}/audio',
+      '/api/training/attempts/{id}/finish',
+      '/api/training/attempts/{id}/review',
+    ]) {
+      params[path] = NOWHERE_ID;
+    }
   });
   afterAll(async () => {
     await t.close();

@@ -8,3 +8,5 @@ export * from './limits/index.js';
 export * from './api/index.js';
 export * from './narration/index.js';
 export * from './summary/index.js';
+export * from './review/index.js';
+export * from './records/index.js';

@@ -44,6 +44,7 @@ describe('app routes', () => {
         body: [makeVehicle(), makeVehicle({ id: 'veh-2', unitNumber: 'T-415', status: 'out_of_service' })],
       },
       'GET /users': { body: [makeUser('driver', { id: 'student-1', name: 'Ren Adeyemi', isStudent: true })] },
+      'GET /defects': { body: [] },
     });
     const { router } = renderApp('/');
     expect(await screen.findByRole('heading', { level: 1, name: HOME_HEADINGS[role] })).toBeInTheDocument();
@@ -101,7 +102,11 @@ describe('app routes', () => {
 
   it('keeps the settings screen in reach from the header of every screen', async () => {
     tokenStore.set('token');
-    mockApi({ 'GET /auth/me': { body: makeUser('mechanic') } });
+    mockApi({
+      'GET /auth/me': { body: makeUser('mechanic') },
+      'GET /defects': { body: [] },
+      'GET /vehicles': { body: [] },
+    });
     renderApp('/mechanic');
     await screen.findByRole('heading', { level: 1, name: 'Shop' });
     const header = screen.getByRole('banner');

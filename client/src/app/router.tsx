@@ -81,16 +81,41 @@ export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
             screen('driver/inspections/:clientId/finish', ['driver'], async () => ({
               Component: (await import('@/features/walkaround/routes/finish-inspection')).FinishInspectionRoute,
             })),
-            screen('mechanic', ['mechanic'], async () => ({
-              Component: (await import('@/features/home/routes/mechanic-home')).MechanicHome,
-            })),
+            screen('mechanic', ['mechanic'], async () => {
+              const route = await import('./routes/mechanic-home');
+              return { Component: route.MechanicHomeRoute, loader: route.mechanicHomeLoader(queryClient) };
+            }),
             screen('supervisor', ['supervisor'], async () => {
               const route = await import('./routes/supervisor-home');
               return { Component: route.SupervisorHomeRoute, loader: route.supervisorHomeLoader(queryClient) };
             }),
+            screen('supervisor/inspections', ['supervisor', 'admin'], async () => {
+              const route = await import('@/features/inspections/routes/inspections');
+              return { Component: route.InspectionsRoute, loader: route.inspectionsLoader(queryClient) };
+            }),
+            screen('supervisor/inspections/:inspectionId', ['supervisor', 'admin'], async () => {
+              const route = await import('@/features/inspections/routes/inspection-detail');
+              return { Component: route.InspectionDetailRoute, loader: route.inspectionDetailLoader(queryClient) };
+            }),
             screen('trainer', ['trainer'], async () => {
               const route = await import('./routes/trainer-home');
               return { Component: route.TrainerHomeRoute, loader: route.trainerHomeLoader(queryClient) };
+            }),
+            screen('trainer/attempts/:attemptId', ['trainer'], async () => {
+              const route = await import('@/features/training/routes/review-attempt');
+              return { Component: route.ReviewAttemptRoute, loader: route.reviewAttemptLoader(queryClient) };
+            }),
+            screen('training/practice', ['driver'], async () => {
+              const route = await import('@/features/training/routes/practice');
+              return { Component: route.PracticeRoute, loader: route.practiceLoader(queryClient) };
+            }),
+            screen('training/feedback', ['driver'], async () => {
+              const route = await import('@/features/training/routes/feedback');
+              return { Component: route.FeedbackRoute, loader: route.feedbackLoader(queryClient) };
+            }),
+            screen('training/feedback/:attemptId', ['driver'], async () => {
+              const route = await import('@/features/training/routes/feedback-attempt');
+              return { Component: route.FeedbackAttemptRoute, loader: route.feedbackAttemptLoader(queryClient) };
             }),
             screen('vehicles', ['admin', 'supervisor', 'mechanic'], async () => {
               const route = await import('@/features/vehicles/routes/vehicles');
@@ -109,6 +134,10 @@ export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
             screen('admin/users', ['admin'], async () => {
               const route = await import('@/features/users/routes/users');
               return { Component: route.UsersRoute, loader: route.usersLoader(queryClient) };
+            }),
+            screen('admin/retention', ['admin'], async () => {
+              const route = await import('@/features/organization/routes/retention');
+              return { Component: route.RetentionRoute, loader: route.retentionLoader(queryClient) };
             }),
             screen('admin/outbox', ['admin'], async () => {
               const route = await import('@/features/users/routes/outbox');

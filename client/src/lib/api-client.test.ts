@@ -26,6 +26,21 @@ describe('api client', () => {
     expect(error).toMatchObject({ status: 400, message: 'Check the highlighted fields.', fields: [{ field: 'vin' }] });
   });
 
+  it('fetches a guarded file as a Blob with the token and the type asked for, and names a refusal', async () => {
+    const { calls } = mockApi({
+      'GET /inspections/i1/report.pdf': { body: { pdf: true } },
+      'GET /inspections/i2/report.pdf': { status: 404, body: errorBody(404, 'No inspection with this id.') },
+    });
+    tokenStore.set('token-123');
+    const blob = await api.getBlob('/inspections/i1/report.pdf', { accept: 'application/pdf' });
+    expect(await blob.text()).toBe('{"pdf":true}');
+    expect(calls[0]?.headers).toMatchObject({ Accept: 'application/pdf', Authorization: 'Bearer token-123' });
+    await expect(api.getBlob('/inspections/i2/report.pdf')).rejects.toMatchObject({
+      status: 404,
+      message: 'No inspection with this id.',
+    });
+  });
+
   it('on a 401 clears the token and calls the registered handler', async () => {
     mockApi({ 'GET /vehicles': { status: 401, body: errorBody(401, 'Your session has expired.') } });
     const handler = vi.fn();

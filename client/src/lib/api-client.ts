@@ -50,6 +50,8 @@ export interface RequestOptions {
   signal?: AbortSignal;
   // The sign-in call answers 401 for a wrong password: that is a message, not a lost session.
   skipUnauthorizedHandler?: boolean;
+  // What the caller reads back; JSON unless said otherwise (a PDF, a CSV, a voice note).
+  accept?: string;
 }
 
 export function buildApiUrl(path: string, query?: QueryParams): string {
@@ -79,8 +81,10 @@ async function readErrorBody(response: Response): Promise<ApiError> {
   return new ApiError(response.status, response.statusText || `Request failed (${response.status}).`);
 }
 
-export async function apiRequest<T>(path: string, options: RequestOptions = {}): Promise<T> {
-  const headers: Record<string, string> = { Accept: 'application/json' };
+// One request with the session's token; answers the response when it is ok, else throws an ApiError
+// that names the problem (and signs out on a lost session).
+async function send(path: string, options: RequestOptions): Promise<Response> {
+  const headers: Record<string, string> = { Accept: options.accept ?? 'application/json' };
   const token = tokenStore.get();
   if (token) headers.Authorization = `Bearer ${token}`;
   // A FormData body (a voice note, a photo) goes as multipart: the browser sets its boundary.
@@ -113,8 +117,19 @@ export async function apiRequest<T>(path: string, options: RequestOptions = {}):
     }
     throw error;
   }
+  return response;
+}
+
+export async function apiRequest<T>(path: string, options: RequestOptions = {}): Promise<T> {
+  const response = await send(path, options);
   if (response.status === 204) return undefined as T;
   return (await response.json()) as T;
+}
+
+// A file the session's token guards (a report PDF, a CSV, a recording), which a plain link or an
+// <audio src> cannot fetch: read as a Blob.
+export async function apiBlob(path: string, options: RequestOptions = {}): Promise<Blob> {
+  return (await send(path, options)).blob();
 }
 
 export const api = {
@@ -125,4 +140,5 @@ export const api = {
     apiRequest<T>(path, { ...options, method: 'PATCH', body }),
   put: <T>(path: string, body?: unknown, options: Omit<RequestOptions, 'method' | 'body'> = {}) =>
     apiRequest<T>(path, { ...options, method: 'PUT', body }),
+  getBlob: (path: string, options: Omit<RequestOptions, 'method' | 'body'> = {}) => apiBlob(path, options),
 };

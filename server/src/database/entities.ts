@@ -7,6 +7,8 @@ import { Signature } from '../inspections/entities/signature.entity';
 import { Photo } from '../notes/entities/photo.entity';
 import { VoiceNote } from '../notes/entities/voice-note.entity';
 import { Organization } from '../organizations/entities/organization.entity';
+import { TrainingAttempt } from '../training/entities/training-attempt.entity';
+import { TrainingReview } from '../training/entities/training-review.entity';
 import { Invitation } from '../users/entities/invitation.entity';
 import { User } from '../users/entities/user.entity';
 import { Vehicle } from '../vehicles/entities/vehicle.entity';
@@ -25,4 +27,6 @@ export const ENTITIES = [
   Signature,
   VoiceNote,
   Photo,
+  TrainingAttempt,
+  TrainingReview,
 ];

@@ -81,6 +81,7 @@ export const SEED_ORGANIZATIONS: SeedOrganization[] = [
       { email: 'tomas.reyes@yardcall.test', name: 'Tomas Reyes', role: 'driver' },
       { email: 'aiyana.brooks@yardcall.test', name: 'Aiyana Brooks', role: 'driver' },
       { email: 'student@yardcall.test', name: 'Jordan Pike', role: 'driver', isStudent: true },
+      { email: 'noor.haddad@yardcall.test', name: 'Noor Haddad', role: 'driver', isStudent: true },
     ],
     vehicles: [
       {

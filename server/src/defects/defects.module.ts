@@ -4,10 +4,12 @@ import { DefectsController } from './defects.controller';
 import { DefectsService } from './defects.service';
 import { Defect } from './entities/defect.entity';
 import { Repair } from './entities/repair.entity';
+import { SafetyDefectAlerts } from './safety-defect-alerts';
+import { MailModule } from '../mail/mail.module';
 
 @Module({
-  imports: [TypeOrmModule.forFeature([Defect, Repair])],
+  imports: [TypeOrmModule.forFeature([Defect, Repair]), MailModule],
   controllers: [DefectsController],
-  providers: [DefectsService],
+  providers: [DefectsService, SafetyDefectAlerts],
 })
 export class DefectsModule {}

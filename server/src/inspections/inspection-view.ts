@@ -24,6 +24,8 @@ export function toListItem(inspection: Inspection, driverName: string): Inspecti
     vehicles: toVehicleRefs(inspection.vehicles),
     defectCount: inspection.defectCount,
     rushed: inspection.rushed,
+    recurringDefect: inspection.recurringDefect,
+    durationSeconds: inspection.durationSeconds,
   };
 }
 

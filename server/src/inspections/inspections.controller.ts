@@ -8,8 +8,10 @@ import {
   ApiNotFoundResponse,
   ApiOkResponse,
   ApiOperation,
+  ApiProduces,
   ApiTags,
 } from '@nestjs/swagger';
+import { INSPECTION_CSV_COLUMNS, INSPECTION_CSV_MAX_ROWS } from '@yardcall/shared';
 import type {
   InspectionPage,
   InspectionResponse,
@@ -35,6 +37,7 @@ import {
 } from './dto/inspection.dto';
 import { PutResultsDto, PutResultsResponseDto } from './dto/result.dto';
 import { SignatureResponseDto } from './dto/signature.dto';
+import { CSV_BOM, csvHeader, csvRows } from './inspections-csv';
 import { InspectionsService } from './inspections.service';
 
 @ApiTags('inspections')
@@ -70,12 +73,45 @@ export class InspectionsController {
   @Get()
   @ApiOperation({
     summary:
-      'Inspections newest first, one page at a time (cursor). Drivers see their own, trainers practice ones, the others all of the organisation.',
+      'Inspections newest first unless sorted otherwise, one page at a time (cursor), with filters. Drivers see their own, trainers practice ones, the others all of the organisation.',
   })
   @ApiOkResponse({ type: InspectionPageDto })
   @ApiBadRequestResponse({ type: ApiErrorBodyDto })
   list(@CurrentUser() user: AuthUser, @Query() query: ListInspectionsQuery): Promise<InspectionPage> {
     return this.inspections.list(user, query);
+  }
+
+  @Get('export.csv')
+  @Roles('supervisor', 'admin')
+  @ApiOperation({
+    summary: `The list as CSV (UTF-8, RFC 4180) with the same filters and sort, up to ${INSPECTION_CSV_MAX_ROWS} rows; columns: ${INSPECTION_CSV_COLUMNS.join(', ')}.`,
+  })
+  @ApiProduces('text/csv')
+  @ApiOkResponse({ description: 'An attachment: inspections-<date>.csv.' })
+  @ApiBadRequestResponse({ type: ApiErrorBodyDto })
+  async exportCsv(
+    @CurrentUser() user: AuthUser,
+    @Query() query: ListInspectionsQuery,
+    @Res() response: Response,
+  ): Promise<void> {
+    const pages = this.inspections.listAll(user, query, INSPECTION_CSV_MAX_ROWS);
+    // The first page before any byte is sent, so a wrong filter still answers a plain 400.
+    const first = await pages.next();
+    const day = new Date().toISOString().slice(0, 10);
+    response.status(200).set({
+      'Content-Type': 'text/csv; charset=utf-8',
+      'Content-Disposition': `attachment; filename="inspections-${day}.csv"`,
+      'Cache-Control': 'no-store',
+    });
+    response.write(CSV_BOM + csvHeader());
+    try {
+      if (!first.done) response.write(csvRows(first.value));
+      for await (const items of pages) response.write(csvRows(items));
+      response.end();
+    } catch {
+      // Half a file must not pass for a whole one: break the connection.
+      response.destroy();
+    }
   }
 
   @Get(':id')

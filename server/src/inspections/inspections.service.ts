@@ -7,11 +7,14 @@ import {
   buildChecklist,
   canonicalUnitOf,
   evaluateMeasurement,
+  rushedFlag,
   summarizeInspection,
   toCanonical,
+  walkedRoute,
   type Checklist,
   type ChecklistItem,
   type FieldProblem,
+  type InspectionListItem,
   type InspectionPage,
   type InspectionResponse,
   type ItemResultResponse,
@@ -26,6 +29,8 @@ import { Defect } from '../defects/entities/defect.entity';
 import { refreshVehicleStatus } from '../defects/vehicle-status';
 import { User } from '../users/entities/user.entity';
 import { Vehicle } from '../vehicles/entities/vehicle.entity';
+import { JOB_SAFETY_DEFECT_REPORTED, type SafetyDefectReportedJob } from '../jobs/job-names';
+import { JobsService } from '../jobs/jobs.service';
 import { AcknowledgementsService } from './acknowledgements.service';
 import { decodeCursor, encodeCursor } from './cursor';
 import {
@@ -41,6 +46,7 @@ import { ItemResult } from './entities/item-result.entity';
 import { Signature } from './entities/signature.entity';
 import { InspectionAttachmentsRegistry } from './inspection-attachments';
 import { toListItem, toResultResponse, toSharedResult, toSignatureResponse } from './inspection-view';
+import { recurringDefectsOf } from './review';
 import { driverStatement } from './statements';
 
 export const SUBMITTED_MESSAGE =
@@ -147,6 +153,19 @@ function timeOf(iso: string): number {
   return Date.parse(iso);
 }
 
+const EXPORT_PAGE = 500;
+const BARE_DATE = /^\d{4}-\d{2}-\d{2}$/;
+
+// A bare date is a UTC day: `from` its start, `to` the end of it (the next day's start, exclusive).
+function dayOrTime(text: string, bound: 'from' | 'to'): Date {
+  const date = new Date(BARE_DATE.test(text) ? `${text}T00:00:00.000Z` : text);
+  if (Number.isNaN(date.getTime())) {
+    throw new ApiValidationException([{ field: bound, message: `${text} is not a day or time this list knows.` }]);
+  }
+  if (BARE_DATE.test(text) && bound === 'to') date.setUTCDate(date.getUTCDate() + 1);
+  return date;
+}
+
 @Injectable()
 export class InspectionsService {
   private readonly checklists = new Map<string, BuiltChecklist>();
@@ -158,6 +177,7 @@ export class InspectionsService {
     private readonly dataSource: DataSource,
     private readonly attachments: InspectionAttachmentsRegistry,
     private readonly acknowledgements: AcknowledgementsService,
+    private readonly jobs: JobsService,
   ) {}
 
   async create(
@@ -238,7 +258,28 @@ export class InspectionsService {
   }
 
   async list(user: AuthUser, query: ListInspectionsQuery): Promise<InspectionPage> {
-    const limit = query.limit ?? PAGE_LIMIT_DEFAULT;
+    return this.page(user, query, query.limit ?? PAGE_LIMIT_DEFAULT);
+  }
+
+  // Every row the filters select, page after page (the CSV export), up to `max` rows.
+  async *listAll(user: AuthUser, query: ListInspectionsQuery, max: number): AsyncGenerator<InspectionListItem[]> {
+    let cursor = query.cursor;
+    let left = max;
+    while (left > 0) {
+      const page = await this.page(user, { ...query, cursor }, Math.min(EXPORT_PAGE, left));
+      if (page.items.length > 0) yield page.items;
+      left -= page.items.length;
+      if (!page.nextCursor) return;
+      cursor = page.nextCursor;
+    }
+  }
+
+  // Keyset pages: (sort time, id) after the cursor, backed by the (organization_id, time DESC, id DESC)
+  // indexes (read backwards for asc). The driver's name comes from a join on the primary key.
+  private async page(user: AuthUser, query: ListInspectionsQuery, limit: number): Promise<InspectionPage> {
+    const sort = query.sort ?? 'startedAt';
+    const order = query.order ?? 'desc';
+    const column = sort === 'submittedAt' ? 'inspection.submitted_at' : 'inspection.started_at';
     const builder = this.inspections
       .createQueryBuilder('inspection')
       .innerJoin('inspection.driver', 'driver')
@@ -247,14 +288,17 @@ export class InspectionsService {
     // Drivers see their own walk-arounds; trainers their students' practice ones; the shop and the office all.
     if (user.role === 'driver') builder.andWhere('inspection.driver_id = :self', { self: user.id });
     if (user.role === 'trainer') builder.andWhere("inspection.kind = 'practice'");
+    if (sort === 'submittedAt') builder.andWhere('inspection.submitted_at IS NOT NULL');
     if (query.driverId) builder.andWhere('inspection.driver_id = :driverId', { driverId: query.driverId });
     if (query.kind) builder.andWhere('inspection.kind = :kind', { kind: query.kind });
     if (query.status) builder.andWhere('inspection.status = :status', { status: query.status });
-    if (query.from) builder.andWhere('inspection.started_at >= :from', { from: new Date(query.from) });
-    if (query.to) builder.andWhere('inspection.started_at < :to', { to: new Date(query.to) });
+    if (query.from) builder.andWhere('inspection.started_at >= :from', { from: dayOrTime(query.from, 'from') });
+    if (query.to) builder.andWhere('inspection.started_at < :to', { to: dayOrTime(query.to, 'to') });
+    // Written as the partial indexes' predicates, so the planner can use them.
     if (query.hasDefects !== undefined) {
       builder.andWhere(query.hasDefects ? 'inspection.defect_count > 0' : 'inspection.defect_count = 0');
     }
+    if (query.rushed !== undefined) builder.andWhere(query.rushed ? 'inspection.rushed' : 'NOT inspection.rushed');
     if (query.vehicleId) {
       builder.andWhere(
         'EXISTS (SELECT 1 FROM inspection_vehicles iv WHERE iv.inspection_id = inspection.id AND iv.vehicle_id = :vehicleId)',
@@ -262,22 +306,26 @@ export class InspectionsService {
       );
     }
     if (query.cursor) {
-      const cursor = decodeCursor(query.cursor);
-      builder.andWhere('(inspection.started_at, inspection.id) < (:cursorAt, :cursorId)', {
-        cursorAt: cursor.startedAt,
+      const cursor = decodeCursor(query.cursor, sort, order);
+      builder.andWhere(`(${column}, inspection.id) ${order === 'desc' ? '<' : '>'} (:cursorAt, :cursorId)`, {
+        cursorAt: cursor.at,
         cursorId: cursor.id,
       });
     }
-    const rows = await builder
-      .orderBy('inspection.started_at', 'DESC')
-      .addOrderBy('inspection.id', 'DESC')
+    const direction = order === 'desc' ? 'DESC' : 'ASC';
+    const { entities: rows, raw } = await builder
+      // The sort time to the microsecond, for the next cursor.
+      .addSelect(`to_char(${column} AT TIME ZONE 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.US"Z"')`, 'cursor_at')
+      .orderBy(column, direction)
+      .addOrderBy('inspection.id', direction)
       .limit(limit + 1)
-      .getMany();
+      .getRawAndEntities<{ cursor_at: string; inspection_id: string }>();
     const page = rows.slice(0, limit);
     const last = page[page.length - 1];
+    const lastAt = last ? raw.find((r) => r.inspection_id === last.id)?.cursor_at : undefined;
     return {
       items: page.map((i) => toListItem(i, i.driver?.name ?? '')),
-      nextCursor: rows.length > limit && last ? encodeCursor({ startedAt: last.startedAt, id: last.id }) : null,
+      nextCursor: rows.length > limit && last && lastAt ? encodeCursor({ sort, order, at: lastAt, id: last.id }) : null,
     };
   }
 
@@ -400,17 +448,25 @@ export class InspectionsService {
         });
       });
       if (defects.length > 0) await manager.save(Defect, defects);
+      const recurring = await recurringDefectsOf(manager, inspection, checklist, summary);
       await manager.update(Inspection, id, {
         status: 'submitted',
         submittedAt: now,
         odometer: dto.odometer ?? null,
         rushed: summary.rushed.rushed,
         defectCount: defects.length,
+        recurringDefect: recurring.length > 0,
+        durationSeconds: summary.totalDurationMs !== null ? Math.round(summary.totalDurationMs / 1000) : null,
       });
       await refreshVehicleStatus(
         manager,
         defects.filter((d) => d.safety).map((d) => d.vehicleId),
       );
+      // Committed with the report: the mechanics and supervisors hear of a safety defect exactly once.
+      if (defects.some((d) => d.safety)) {
+        const job: SafetyDefectReportedJob = { organizationId: user.organizationId, inspectionId: id };
+        await this.jobs.send(JOB_SAFETY_DEFECT_REPORTED, job, manager);
+      }
     });
     return this.get(user, id);
   }
@@ -528,12 +584,14 @@ export class InspectionsService {
     const order = new Map(checklist.items.map((item, index) => [item.key, index]));
     results.sort((a, b) => (order.get(a.itemKey) ?? 0) - (order.get(b.itemKey) ?? 0));
     const defectResponses = await toDefectResponses(manager, defects);
-    const summary = summarizeInspection(checklist, results.map(toSharedResult), {
+    const sharedResults = results.map(toSharedResult);
+    const summary = summarizeInspection(checklist, sharedResults, {
       startedAt: inspection.startedAt.toISOString(),
       certifications: defectResponses.flatMap((d) =>
         d.repair ? [{ itemKey: d.itemKey, action: d.repair.action }] : [],
       ),
     });
+    const recurring = await recurringDefectsOf(manager, inspection, checklist, summary);
     return {
       ...toListItem(inspection, driver?.name ?? ''),
       clientId: inspection.clientId,
@@ -547,6 +605,8 @@ export class InspectionsService {
       defects: defectResponses,
       signatures: signatures.map((s) => toSignatureResponse(s, s.signer?.name ?? '')),
       summary,
+      timeline: walkedRoute(checklist, sharedResults, { startedAt: inspection.startedAt.toISOString() }),
+      flags: { rushed: rushedFlag(summary.rushed, summary.answeredCount), recurring },
     };
   }
 }

@@ -47,6 +47,15 @@ export class MailService implements OnModuleInit, OnModuleDestroy {
     this.logger.log(`Sent "${mail.subject}" to ${mail.to}.`);
   }
 
+  // Tests only: the loopback catcher refuses the next `count` messages (whose subject contains
+  // `subjectContains`), so retries can be seen.
+  failNextSends(count: number, subjectContains = ''): void {
+    if (this.config.get('NODE_ENV', { infer: true }) !== 'test' || !this.catcher) {
+      throw new Error('Failing sends on purpose works only in test mode with the built-in catcher.');
+    }
+    this.catcher.failNext(count, subjectContains);
+  }
+
   // Caught messages sent to this organisation's users only: an admin never reads another organisation's mail.
   async outboxFor(organizationId: string): Promise<CaughtMail[]> {
     if (!this.catcher) {

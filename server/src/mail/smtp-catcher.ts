@@ -18,6 +18,9 @@ export class SmtpCatcher {
   private readonly logger = new Logger('SmtpCatcher');
   private readonly messages: CaughtMail[] = [];
   private readonly server: SMTPServer;
+  // Test mode only: how many of the next messages (whose subject contains `failMatch`) to refuse.
+  private failuresLeft = 0;
+  private failMatch = '';
 
   constructor() {
     this.server = new SMTPServer({
@@ -27,6 +30,11 @@ export class SmtpCatcher {
       onData: (stream, _session, callback) => {
         simpleParser(stream)
           .then((parsed) => {
+            if (this.failuresLeft > 0 && (parsed.subject ?? '').includes(this.failMatch)) {
+              this.failuresLeft -= 1;
+              callback(Object.assign(new Error('Try again later (test failure)'), { responseCode: 451 }));
+              return;
+            }
             this.messages.push({
               id: randomUUID(),
               to: addresses(parsed.to),
@@ -53,6 +61,12 @@ export class SmtpCatcher {
         resolve(port);
       });
     });
+  }
+
+  // Refuses the next `count` messages whose subject contains `match` with 451, as a busy server would.
+  failNext(count: number, match = ''): void {
+    this.failuresLeft = count;
+    this.failMatch = match;
   }
 
   list(): CaughtMail[] {

@@ -1,21 +1,57 @@
-import { Controller, Get } from '@nestjs/common';
-import { ApiBearerAuth, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
-import type { OrganizationSummary } from '@yardcall/shared';
+import { Body, Controller, Get, HttpCode, Patch, Post } from '@nestjs/common';
+import { ApiBadRequestResponse, ApiBearerAuth, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
+import type { OrganizationSummary, RetentionPurgeResult, RetentionSettings } from '@yardcall/shared';
 import type { AuthUser } from '../auth/auth-user';
 import { CurrentUser } from '../auth/decorators/current-user.decorator';
+import { Roles } from '../auth/decorators/roles.decorator';
+import { ApiErrorBodyDto } from '../common/dto/api-error-body.dto';
 import { OrganizationSummaryDto } from './dto/organization-summary.dto';
+import { RetentionPurgeResultDto, RetentionSettingsDto, UpdateRetentionDto } from './dto/retention.dto';
 import { OrganizationsService } from './organizations.service';
+import { RetentionService } from './retention.service';
 
 @ApiTags('organizations')
 @ApiBearerAuth()
 @Controller('organizations')
 export class OrganizationsController {
-  constructor(private readonly organizations: OrganizationsService) {}
+  constructor(
+    private readonly organizations: OrganizationsService,
+    private readonly retention: RetentionService,
+  ) {}
 
   @Get('current')
   @ApiOperation({ summary: "The signed-in user's organisation." })
   @ApiOkResponse({ type: OrganizationSummaryDto })
   current(@CurrentUser() user: AuthUser): Promise<OrganizationSummary> {
     return this.organizations.summary(user.organizationId);
+  }
+
+  @Get('retention')
+  @Roles('admin')
+  @ApiOperation({ summary: 'How many months inspection records are kept (at least 3, 49 CFR 396.11(a)(4)).' })
+  @ApiOkResponse({ type: RetentionSettingsDto })
+  getRetention(@CurrentUser() user: AuthUser): Promise<RetentionSettings> {
+    return this.retention.settings(user.organizationId);
+  }
+
+  @Patch('retention')
+  @Roles('admin')
+  @ApiOperation({ summary: 'Keep records longer (never below 3 months).' })
+  @ApiOkResponse({ type: RetentionSettingsDto })
+  @ApiBadRequestResponse({ type: ApiErrorBodyDto, description: 'Below the minimum, or not a whole number.' })
+  updateRetention(@CurrentUser() user: AuthUser, @Body() body: UpdateRetentionDto): Promise<RetentionSettings> {
+    return this.retention.update(user.organizationId, body.months);
+  }
+
+  @Post('retention/purge')
+  @Roles('admin')
+  @HttpCode(200)
+  @ApiOperation({
+    summary:
+      'Remove now the submitted inspections whose every record is older than the setting; one with an open or deferred defect stays. Also runs daily.',
+  })
+  @ApiOkResponse({ type: RetentionPurgeResultDto })
+  purge(@CurrentUser() user: AuthUser): Promise<RetentionPurgeResult> {
+    return this.retention.purge(user.organizationId);
   }
 }

@@ -1,2 +1,4 @@
 export * from './api.js';
 export * from './inspections.js';
+export * from './fleet.js';
+export * from './training.js';

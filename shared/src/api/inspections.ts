@@ -8,6 +8,7 @@ import type {
   MeasurementValue,
   Verdict,
 } from '../checklist/index.js';
+import type { ReviewFlags, ZoneVisit } from '../review/index.js';
 import type { CertificationAction, InspectionSummary } from '../summary/index.js';
 import type { VehicleKind } from '../vehicle/index.js';
 
@@ -169,6 +170,10 @@ export interface InspectionListItem {
   vehicles: InspectionVehicle[];
   defectCount: number;
   rushed: boolean;
+  // A defect of this report was reported on the same vehicle and item before (see ../review).
+  recurringDefect: boolean;
+  // From the start to the last answer; null while nothing is answered or in progress.
+  durationSeconds: number | null;
 }
 
 export interface InspectionPage {
@@ -189,6 +194,9 @@ export interface InspectionResponse extends InspectionListItem {
   defects: DefectResponse[];
   signatures: SignatureResponse[];
   summary: InspectionSummary;
+  // The route as zones in the order walked.
+  timeline: ZoneVisit[];
+  flags: ReviewFlags;
 }
 
 export interface SubmitInspectionRequest {

@@ -12,7 +12,7 @@ import { hasSession, SIGN_IN_PATH } from '@/lib/sign-in';
 import { homePathFor } from '../role-homes';
 import { useFocusedScreen } from './shell-handle';
 
-type NavKey = 'home' | 'start' | 'vehicles' | 'users' | 'outbox';
+type NavKey = 'home' | 'start' | 'vehicles' | 'users' | 'outbox' | 'retention' | 'inspections';
 
 const NAV_BY_ROLE: Record<Role, { key: NavKey; to: string }[]> = {
   driver: [
@@ -25,16 +25,25 @@ const NAV_BY_ROLE: Record<Role, { key: NavKey; to: string }[]> = {
   ],
   supervisor: [
     { key: 'home', to: homePathFor('supervisor') },
+    { key: 'inspections', to: '/supervisor/inspections' },
     { key: 'vehicles', to: '/vehicles' },
   ],
   trainer: [{ key: 'home', to: homePathFor('trainer') }],
   admin: [
     { key: 'home', to: homePathFor('admin') },
     { key: 'users', to: '/admin/users' },
+    { key: 'inspections', to: '/supervisor/inspections' },
     { key: 'vehicles', to: '/vehicles' },
     { key: 'outbox', to: '/admin/outbox' },
+    { key: 'retention', to: '/admin/retention' },
   ],
 };
+
+// Drivers in training also practise narrated walk-arounds and read their trainer's feedback.
+const STUDENT_NAV = [
+  { key: 'practice', to: '/training/practice', label: 'training.nav.practice' },
+  { key: 'feedback', to: '/training/feedback', label: 'training.nav.feedback' },
+] as const;
 
 const navLinkClass = ({ isActive }: { isActive: boolean }) =>
   `inline-flex min-h-tap items-center rounded-lg border-2 px-3 font-bold no-underline ${
@@ -73,10 +82,13 @@ export function AppShell() {
             <>
               <nav aria-label={t('nav.main')} className="min-w-0">
                 <ul className="flex flex-wrap items-center gap-tap-gap">
-                  {(user ? NAV_BY_ROLE[user.role] : []).map((item) => (
+                  {(user
+                    ? [...NAV_BY_ROLE[user.role], ...(user.role === 'driver' && user.isStudent ? STUDENT_NAV : [])]
+                    : []
+                  ).map((item) => (
                     <li key={item.key}>
                       <NavLink to={item.to} end className={navLinkClass}>
-                        {t(`nav.${item.key}`)}
+                        {'label' in item ? t(item.label) : t(`nav.${item.key}`)}
                       </NavLink>
                     </li>
                   ))}

@@ -1,11 +1,12 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { SupervisorHome } from '@/features/home/routes/supervisor-home';
-import { vehiclesQueryOptions } from '@/features/vehicles/api/get-vehicles';
+import { fleetBoardQueryOptions } from '@/features/vehicles/api/get-fleet-board';
 import { FleetBoard } from '@/features/vehicles/components/fleet-board';
 
 export function supervisorHomeLoader(queryClient: QueryClient) {
   return async () => {
-    await queryClient.ensureQueryData(vehiclesQueryOptions());
+    // Prefetch, not ensure: a board that fails to load shows its error inside the home screen.
+    await queryClient.prefetchQuery(fleetBoardQueryOptions());
     return null;
   };
 }

@@ -1,6 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import en from './en.json';
-import es from './es.json';
+import enCore from './en/core.json';
+import enScreens from './en/screens.json';
+import esCore from './es/core.json';
+import esScreens from './es/screens.json';
+
+const en = { ...enCore, ...enScreens };
+const es = { ...esCore, ...esScreens };
 
 function keysOf(value: unknown, prefix = ''): string[] {
   if (typeof value !== 'object' || value === null) return [prefix];
@@ -17,5 +22,11 @@ describe('UI strings', () => {
   it('has no Spanish string English lacks, apart from plural forms', () => {
     const english = new Set(keysOf(en));
     expect(keysOf(es).filter((key) => !english.has(key) && !key.endsWith('_many'))).toEqual([]);
+  });
+
+  it('keeps each section in one part only, the same part in both languages', () => {
+    expect(Object.keys(enCore).filter((key) => key in enScreens)).toEqual([]);
+    expect(Object.keys(esCore).sort()).toEqual(Object.keys(enCore).sort());
+    expect(Object.keys(esScreens).sort()).toEqual(Object.keys(enScreens).sort());
   });
 });

@@ -1,8 +1,15 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import {
   INSPECTION_KINDS,
+  INSPECTION_SORT_FIELDS,
   INSPECTION_STATUSES,
   LOCALES,
+  SORT_DIRECTIONS,
+  type InspectionListQuery,
+  type InspectionSortField,
+  type ReviewFlags,
+  type SortDirection,
+  type ZoneVisit,
   type AcknowledgeRequest,
   type Checklist,
   type CreateInspectionRequest,
@@ -114,7 +121,10 @@ function toBoolean({ value }: { value: unknown }): unknown {
   return value;
 }
 
-export class ListInspectionsQuery {
+// A day ("2026-11-30") or a moment ("2026-11-30T06:00:00Z"); days are UTC.
+const DATE_OR_TIME = 'a date (2026-11-30) or an ISO 8601 time (2026-11-30T06:00:00Z)';
+
+export class ListInspectionsQuery implements InspectionListQuery {
   @ApiPropertyOptional({ format: 'uuid' })
   @IsOptional()
   @IsUUID('all', { message: 'vehicleId must be a vehicle id (a UUID).' })
@@ -135,14 +145,17 @@ export class ListInspectionsQuery {
   @IsIn(INSPECTION_STATUSES, { message: `Choose a status: ${INSPECTION_STATUSES.join(', ')}.` })
   status?: InspectionStatus;
 
-  @ApiPropertyOptional({ format: 'date-time', description: 'Started at or after this time.' })
+  @ApiPropertyOptional({ description: 'Started at or after this day (UTC) or time.', example: '2026-11-01' })
   @IsOptional()
-  @IsISO8601({ strict: true }, { message: `Send from as ${ISO_TIME}.` })
+  @IsISO8601({ strict: true }, { message: `Send from as ${DATE_OR_TIME}.` })
   from?: string;
 
-  @ApiPropertyOptional({ format: 'date-time', description: 'Started before this time.' })
+  @ApiPropertyOptional({
+    description: 'Started before this time, or on or before this day (UTC) when a bare date.',
+    example: '2026-11-30',
+  })
   @IsOptional()
-  @IsISO8601({ strict: true }, { message: `Send to as ${ISO_TIME}.` })
+  @IsISO8601({ strict: true }, { message: `Send to as ${DATE_OR_TIME}.` })
   to?: string;
 
   @ApiPropertyOptional({ description: 'Only reports with defects (true) or without (false).' })
@@ -150,6 +163,26 @@ export class ListInspectionsQuery {
   @Transform(toBoolean)
   @IsBoolean({ message: 'hasDefects is true or false.' })
   hasDefects?: boolean;
+
+  @ApiPropertyOptional({ description: 'Only reports flagged as rushed (true) or not (false).' })
+  @IsOptional()
+  @Transform(toBoolean)
+  @IsBoolean({ message: 'rushed is true or false.' })
+  rushed?: boolean;
+
+  @ApiPropertyOptional({
+    enum: INSPECTION_SORT_FIELDS,
+    default: 'startedAt',
+    description: 'submittedAt leaves out inspections in progress.',
+  })
+  @IsOptional()
+  @IsIn(INSPECTION_SORT_FIELDS, { message: `Sort by ${INSPECTION_SORT_FIELDS.join(' or ')}.` })
+  sort?: InspectionSortField;
+
+  @ApiPropertyOptional({ enum: SORT_DIRECTIONS, default: 'desc' })
+  @IsOptional()
+  @IsIn(SORT_DIRECTIONS, { message: 'order is asc (oldest first) or desc (newest first).' })
+  order?: SortDirection;
 
   @ApiPropertyOptional({ description: 'The nextCursor of the previous page.' })
   @IsOptional()
@@ -193,6 +226,32 @@ export class InspectionListItemDto implements InspectionListItem {
 
   @ApiProperty({ description: 'Answered faster than the walk-around usually takes; asks a supervisor to look.' })
   rushed: boolean;
+
+  @ApiProperty({ description: 'A defect of this report was reported before on the same vehicle and item.' })
+  recurringDefect: boolean;
+
+  @ApiProperty({ type: Number, nullable: true, description: 'From the start to the last answer.' })
+  durationSeconds: number | null;
+}
+
+export class ZoneVisitDto implements ZoneVisit {
+  @ApiProperty()
+  zone: string;
+
+  @ApiProperty()
+  title: string;
+
+  @ApiProperty({ format: 'date-time' })
+  firstAnsweredAt: string;
+
+  @ApiProperty({ format: 'date-time' })
+  lastAnsweredAt: string;
+
+  @ApiProperty({ description: 'Time credited to this stretch; the stretches add up to the walk-around.' })
+  seconds: number;
+
+  @ApiProperty()
+  answerCount: number;
 }
 
 export class InspectionPageDto implements InspectionPage {
@@ -240,6 +299,16 @@ export class InspectionResponseDto extends InspectionListItemDto implements Insp
 
   @ApiProperty({ type: 'object', additionalProperties: true, description: 'Defects, gaps, zone times, rushed flag.' })
   summary: InspectionSummary;
+
+  @ApiProperty({ type: [ZoneVisitDto], description: 'The route as zones in the order walked.' })
+  timeline: ZoneVisitDto[];
+
+  @ApiProperty({
+    type: 'object',
+    additionalProperties: true,
+    description: 'rushed (why, or null) and recurring defects (naming the earlier inspection).',
+  })
+  flags: ReviewFlags;
 }
 
 export class PendingAcknowledgementDto implements PendingAcknowledgement {

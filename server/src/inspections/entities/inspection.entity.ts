@@ -24,6 +24,10 @@ export interface InspectionVehicleSnapshot {
 @Index('IDX_inspections_org_started', { synchronize: false })
 @Index('IDX_inspections_org_driver_started', { synchronize: false })
 @Index('IDX_inspections_org_kind_started', { synchronize: false })
+@Index('IDX_inspections_org_submitted', { synchronize: false })
+@Index('IDX_inspections_org_defects_started', { synchronize: false })
+@Index('IDX_inspections_org_rushed_started', { synchronize: false })
+@Index('IDX_inspections_org_open_started', { synchronize: false })
 @Index('UQ_inspections_driver_client', ['driverId', 'clientId'], { unique: true })
 @Entity({ name: 'inspections' })
 export class Inspection extends EditableOrganizationOwned {
@@ -66,4 +70,12 @@ export class Inspection extends EditableOrganizationOwned {
 
   @Column({ name: 'defect_count', type: 'integer', default: 0 })
   defectCount: number;
+
+  // Set at submit: a defect of this report was reported before on the same vehicle and item.
+  @Column({ name: 'recurring_defect', type: 'boolean', default: false })
+  recurringDefect: boolean;
+
+  // Set at submit: from the start to the last answer.
+  @Column({ name: 'duration_seconds', type: 'integer', nullable: true })
+  durationSeconds: number | null;
 }

@@ -8,11 +8,12 @@ export function AdminHome() {
     { to: '/admin/users', label: t('admin.users'), hint: t('admin.usersHint') },
     { to: '/vehicles', label: t('admin.vehicles'), hint: t('admin.vehiclesHint') },
     { to: '/admin/outbox', label: t('admin.outbox'), hint: t('admin.outboxHint') },
+    { to: '/admin/retention', label: t('retention.homeLink'), hint: t('retention.homeHint') },
   ];
   return (
     <HomePage role="admin" title={t('admin.title')} lead={t('admin.lead')}>
       <nav aria-label={t('admin.title')}>
-        <ul className="grid grid-cols-1 gap-tap-gap md:grid-cols-3">
+        <ul className="grid grid-cols-1 gap-tap-gap md:grid-cols-2 lg:grid-cols-4">
           {links.map((link) => (
             <li key={link.to} className="flex flex-col gap-2 rounded-xl border-2 border-line bg-surface p-4">
               <LinkButton to={link.to}>{link.label}</LinkButton>

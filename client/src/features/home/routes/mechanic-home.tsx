@@ -1,16 +1,18 @@
+import type { ReactNode } from 'react';
 import { useTranslation } from 'react-i18next';
-import { EmptyState, Section } from '@/components/ui/layout';
+import { Section } from '@/components/ui/layout';
 import { HomePage } from '../components/home-page';
 
-export function MechanicHome() {
+// The shop's home; the app fills it with the defects feature's lists.
+export function MechanicHome({ openDefects, recentRepairs }: { openDefects: ReactNode; recentRepairs: ReactNode }) {
   const { t } = useTranslation();
   return (
     <HomePage role="mechanic" title={t('mechanic.title')} lead={t('mechanic.lead')}>
       <Section title={t('mechanic.openDefects')} id="open-defects">
-        <EmptyState title={t('mechanic.noDefects')}>{t('mechanic.noDefectsHint')}</EmptyState>
+        {openDefects}
       </Section>
       <Section title={t('mechanic.recentRepairs')} id="recent-repairs">
-        <EmptyState title={t('mechanic.noRepairs')} />
+        {recentRepairs}
       </Section>
     </HomePage>
   );

@@ -5,13 +5,13 @@ import { ErrorAlert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { LinkButton } from '@/components/ui/link-button';
 import { TextField } from '@/components/ui/field';
+import { SignaturePad } from '@/components/ui/signature-pad';
 import { Card, EmptyState, PageHeading, Section } from '@/components/ui/layout';
 import { ApiError, NETWORK_ERROR_STATUS } from '@/lib/api-client';
 import { describeError } from '@/lib/errors';
 import type { LocalWalkaround } from '@/lib/offline';
 import { WaitingToSyncError, useSubmitInspection } from '../api/submit-inspection';
-import { SafetyCaution } from './safety-caution';
-import { SignaturePad } from './signature-pad';
+import { SafetyCaution } from '@/components/ui/safety-caution';
 
 // How many unanswered items are named one by one; the rest are counted.
 const UNANSWERED_SHOWN = 10;
@@ -142,7 +142,11 @@ export function FinishReview({ walkaround, runPath }: { walkaround: LocalWalkaro
           error={errors.name}
           autoComplete="name"
         />
-        <SignaturePad label={t('walkaround.finish.signature')} onChange={setDrawing} />
+        <SignaturePad
+          label={t('walkaround.finish.signature')}
+          clearLabel={t('walkaround.finish.clearSignature')}
+          onChange={setDrawing}
+        />
         <p>{t('walkaround.finish.needsConnection')}</p>
         {submit.isError ? <ErrorAlert>{submitError(submit.error)}</ErrorAlert> : null}
         <Button type="submit" size="large" busy={submit.isPending} data-testid="submit-report">

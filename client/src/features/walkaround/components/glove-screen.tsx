@@ -1,14 +1,4 @@
-import {
-  Suspense,
-  lazy,
-  useEffect,
-  useMemo,
-  useRef,
-  useState,
-  useSyncExternalStore,
-  type ChangeEvent,
-  type FormEvent,
-} from 'react';
+import { Suspense, lazy, useEffect, useMemo, useRef, useState, type ChangeEvent } from 'react';
 import { useTranslation } from 'react-i18next';
 import type { ItemResult, Locale } from '@yardcall/shared';
 import { ErrorAlert, Notice } from '@/components/ui/alert';
@@ -20,10 +10,11 @@ import { TypedInputEngine, chooseSpeechEngine, type SpeechEngine } from '@/lib/s
 import type { LocalWalkaround } from '@/lib/offline';
 import { VOICE_LOOP_WORDS, restoreVoiceLoop, serializeVoiceLoop, useVoiceLoop } from '../voice-loop';
 import { observeEngine } from './observed-engine';
-import { SafetyCaution } from './safety-caution';
+import { SafetyCaution } from '@/components/ui/safety-caution';
 import { useMediaSession } from './use-media-session';
 import { useSwipe, type SwipeDirection } from './use-swipe';
 import { useWakeLock } from './use-wake-lock';
+import { TypedInputForm } from '@/components/ui/typed-input-form';
 
 // The list and its dialog code load on first opening, off the run screen's first load.
 const ItemListDialog = lazy(async () => ({ default: (await import('./item-list-dialog')).ItemListDialog }));
@@ -46,35 +37,6 @@ function withoutPosition(prompt: string, position: string | undefined): string {
 function buttonWords(locale: Locale) {
   const [good = 'good', defect = 'defect', yes = 'yes', no = 'no'] = VOICE_LOOP_WORDS[locale].phrases;
   return { good, defect, yes, no };
-}
-
-function TypedAnswerField({ engine }: { engine: TypedInputEngine }) {
-  const { t } = useTranslation();
-  const snapshot = useSyncExternalStore(engine.subscribe, engine.getSnapshot, engine.getSnapshot);
-  const [text, setText] = useState('');
-  const submit = (event: FormEvent) => {
-    event.preventDefault();
-    if (engine.submit(text)) setText('');
-  };
-  return (
-    <form onSubmit={submit} className="flex flex-col gap-2" data-testid="typed-answer">
-      <label htmlFor="typed-answer-input" className="font-bold">
-        {t('walkaround.run.typedLabel')}
-      </label>
-      <div className="flex gap-2">
-        <input
-          id="typed-answer-input"
-          value={text}
-          onChange={(event) => setText(event.target.value)}
-          autoComplete="off"
-          className="block min-h-tap w-full rounded-lg border-2 border-line bg-surface px-3 text-xl text-ink"
-        />
-        <Button type="submit" disabled={!snapshot.listening}>
-          {t('walkaround.run.typedSend')}
-        </Button>
-      </div>
-    </form>
-  );
 }
 
 export interface GloveScreenProps {
@@ -311,7 +273,14 @@ export function GloveScreen({ walkaround, onFinished, createEngine }: GloveScree
         </div>
       ) : null}
 
-      {baseEngine instanceof TypedInputEngine ? <TypedAnswerField engine={baseEngine} /> : null}
+      {baseEngine instanceof TypedInputEngine ? (
+        <TypedInputForm
+          engine={baseEngine}
+          label={t('walkaround.run.typedLabel')}
+          sendLabel={t('walkaround.run.typedSend')}
+          testId="typed-answer"
+        />
+      ) : null}
 
       {item?.safety && started ? <SafetyCaution /> : null}
       {problem ? <ErrorAlert>{problem}</ErrorAlert> : null}

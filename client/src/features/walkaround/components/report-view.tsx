@@ -6,7 +6,7 @@ import { LinkButton } from '@/components/ui/link-button';
 import { Card, EmptyState, Section } from '@/components/ui/layout';
 import { describeError } from '@/lib/errors';
 import { useReportPdf } from '../api/get-report-pdf';
-import { SafetyCaution } from './safety-caution';
+import { SafetyCaution } from '@/components/ui/safety-caution';
 
 // The signed report as the server stored it: its defects and the PDF.
 export function ReportView({ inspection }: { inspection: InspectionResponse }) {

@@ -104,6 +104,10 @@ export function StartWalkaround({ renderPicker, vehicles }: StartWalkaroundProps
         <PendingAcknowledgementReview
           key={firstPending.inspectionId}
           pending={firstPending}
+          onCancel={() => {
+            setPending(null);
+            setPowerUnit(null);
+          }}
           onSigned={() => {
             const rest = pending.list.slice(1);
             if (rest.length > 0) setPending({ ...pending, list: rest });

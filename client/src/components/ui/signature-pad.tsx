@@ -1,10 +1,20 @@
-import { useEffect, useRef, type PointerEvent } from 'react';
-import { useTranslation } from 'react-i18next';
-import { Button } from '@/components/ui/button';
+import { useEffect, useId, useRef, type PointerEvent } from 'react';
+import { Button } from './button';
+import { FieldError } from './field';
 
-// A small canvas the driver signs with a finger; the drawing goes to the report as a PNG data URL.
-export function SignaturePad({ onChange, label }: { onChange: (dataUrl: string | null) => void; label: string }) {
-  const { t } = useTranslation();
+export interface SignaturePadProps {
+  onChange: (dataUrl: string | null) => void;
+  label: string;
+  clearLabel: string;
+  // Said beside the pad when a drawn signature is required and missing.
+  error?: string;
+}
+
+// A small canvas signed with a finger or a mouse; the drawing goes to the report as a PNG data URL.
+export function SignaturePad({ onChange, label, clearLabel, error }: SignaturePadProps) {
+  const id = useId();
+  const labelId = `${id}-label`;
+  const errorId = `${id}-error`;
   const canvasRef = useRef<HTMLCanvasElement>(null);
   const drawing = useRef(false);
   const drawn = useRef(false);
@@ -62,7 +72,7 @@ export function SignaturePad({ onChange, label }: { onChange: (dataUrl: string |
 
   return (
     <div className="flex flex-col gap-2">
-      <p className="font-bold" id="signature-label">
+      <p className="font-bold" id={labelId}>
         {label}
       </p>
       {/* White like paper in every theme, so the ink shows and the PNG reads on the report. */}
@@ -71,17 +81,20 @@ export function SignaturePad({ onChange, label }: { onChange: (dataUrl: string |
         width={600}
         height={200}
         role="img"
-        aria-labelledby="signature-label"
+        aria-labelledby={labelId}
+        aria-describedby={error ? errorId : undefined}
+        aria-invalid={error ? true : undefined}
         data-testid="signature-pad"
-        className="h-40 w-full touch-none rounded-lg border-2 border-line bg-white"
+        className={`h-40 w-full touch-none rounded-lg bg-white ${error ? 'border-4 border-danger' : 'border-2 border-line'}`}
         onPointerDown={down}
         onPointerMove={move}
         onPointerUp={up}
         onPointerLeave={up}
       />
+      <FieldError id={errorId} message={error} />
       <div>
         <Button variant="secondary" onClick={clear}>
-          {t('walkaround.finish.clearSignature')}
+          {clearLabel}
         </Button>
       </div>
     </div>

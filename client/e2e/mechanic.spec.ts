@@ -1,0 +1,209 @@
+import { readFileSync } from 'node:fs';
+import { dirname, join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { expect, test, type APIRequestContext, type Browser, type Page } from '@playwright/test';
+import type { InspectionResponse, ItemResult, VehicleResponse } from '@yardcall/shared';
+import config from '../playwright.config';
+import { DEMO_PASSWORD, expectNoAxeViolations, screenshot, signIn } from './support';
+
+const here = dirname(fileURLToPath(import.meta.url));
+const NOTE_WAV = join(here, '..', '..', 'test-audio', 'fixtures', 'en-note.wav');
+const UNIT = 'KV-102';
+// The steer tire's tread, said below the 4/32 in a steer tire needs (49 CFR 393.75(b)).
+const LOW_TREAD_KEY = 'u1.axle1.left.tire.tread';
+const DRIVER_WORDS = 'worn to the wear bars on the outside edge';
+const REPAIR_NOTE = 'Replaced the left steer tire; new tread 18/32 in.';
+
+const configArgs = config.use?.launchOptions?.args ?? [];
+// The mechanic plays the driver's note without a click on the player's own shadow button.
+test.use({
+  launchOptions: { ...config.use?.launchOptions, args: [...configArgs, '--autoplay-policy=no-user-gesture-required'] },
+});
+
+async function login(request: APIRequestContext, email: string): Promise<Record<string, string>> {
+  const response = await request.post('/api/auth/login', { data: { email, password: DEMO_PASSWORD } });
+  expect(response.ok()).toBe(true);
+  const { accessToken } = (await response.json()) as { accessToken: string };
+  return { Authorization: `Bearer ${accessToken}` };
+}
+
+async function vehicleByUnit(request: APIRequestContext, headers: Record<string, string>): Promise<VehicleResponse> {
+  const vehicles = (await (await request.get('/api/vehicles', { headers })).json()) as VehicleResponse[];
+  const vehicle = vehicles.find((v) => v.unitNumber === UNIT);
+  if (!vehicle) throw new Error(`No ${UNIT} in the demo fleet.`);
+  return vehicle;
+}
+
+// The driver's walk-around through the same HTTP calls the app's sync engine makes: every item
+// answered, the steer tread measured low with the driver's words, a voice note at that item, signed.
+async function driverReportsLowTread(request: APIRequestContext): Promise<InspectionResponse> {
+  const headers = await login(request, 'tomas.reyes@yardcall.test');
+  const vehicle = await vehicleByUnit(request, headers);
+  const started = Date.now() - 20 * 60_000;
+  const created = await request.post('/api/inspections', {
+    headers,
+    data: {
+      vehicleIds: [vehicle.id],
+      kind: 'pre_trip',
+      startedAt: new Date(started).toISOString(),
+      locale: 'en',
+      clientId: crypto.randomUUID(),
+    },
+  });
+  expect(created.status()).toBe(201);
+  const inspection = (await created.json()) as InspectionResponse;
+  const items = inspection.checklist.items;
+  expect(items.some((item) => item.key === LOW_TREAD_KEY)).toBe(true);
+  // About 6 s an item, so the report is not flagged as rushed.
+  const results: (ItemResult & { clientId: string })[] = items.map((item, index) => ({
+    itemKey: item.key,
+    clientId: crypto.randomUUID(),
+    answeredAt: new Date(started + (index + 1) * 6_000).toISOString(),
+    ...(item.key === LOW_TREAD_KEY
+      ? {
+          answer: 'defect' as const,
+          measurement: { quantity: 'tread_depth' as const, value: 2, unit: 'in/32' },
+          detail: DRIVER_WORDS,
+          heard: 'two thirty-seconds',
+          confidence: 0.93,
+        }
+      : { answer: 'pass' as const, heard: 'good', confidence: 0.95 }),
+  }));
+  const put = await request.put(`/api/inspections/${inspection.id}/results`, { headers, data: { results } });
+  expect(put.ok(), await put.text()).toBe(true);
+  const note = await request.post(`/api/inspections/${inspection.id}/notes`, {
+    headers,
+    multipart: {
+      file: { name: 'note.wav', mimeType: 'audio/wav', buffer: readFileSync(NOTE_WAV) },
+      itemKey: LOW_TREAD_KEY,
+      clientId: crypto.randomUUID(),
+      durationMs: '1500',
+      heard: DRIVER_WORDS,
+    },
+  });
+  expect(note.status(), await note.text()).toBe(201);
+  const submitted = await request.post(`/api/inspections/${inspection.id}/submit`, {
+    headers,
+    data: { signature: { name: 'Tomas Reyes' } },
+  });
+  expect(submitted.ok(), await submitted.text()).toBe(true);
+  return (await submitted.json()) as InspectionResponse;
+}
+
+async function drawSignature(page: Page): Promise<void> {
+  const pad = page.getByTestId('signature-pad');
+  await pad.scrollIntoViewIfNeeded();
+  const box = await pad.boundingBox();
+  if (!box) throw new Error('The signature pad has no box.');
+  await page.mouse.move(box.x + 20, box.y + box.height / 2);
+  await page.mouse.down();
+  await page.mouse.move(box.x + box.width / 2, box.y + 20, { steps: 5 });
+  await page.mouse.move(box.x + box.width - 20, box.y + box.height - 20, { steps: 5 });
+  await page.mouse.up();
+}
+
+async function newPage(browser: Browser, mobile: boolean): Promise<Page> {
+  const context = await browser.newContext(
+    mobile ? { viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true } : {},
+  );
+  return context.newPage();
+}
+
+test('a safety defect from a walk-around: the mechanic certifies it, the unit returns to service, the next driver acknowledges', async ({
+  browser,
+  request,
+}) => {
+  test.setTimeout(180_000);
+  const report = await driverReportsLowTread(request);
+  expect(report.defects.map((d) => d.itemKey)).toEqual([LOW_TREAD_KEY]);
+  expect(report.defects[0]?.safety).toBe(true);
+  const driverHeaders = await login(request, 'tomas.reyes@yardcall.test');
+  expect((await vehicleByUnit(request, driverHeaders)).status).toBe('out_of_service');
+
+  // The shop.
+  const shop = await newPage(browser, false);
+  await signIn(shop, 'mechanic@yardcall.test');
+  await expect(shop.getByRole('heading', { level: 1, name: 'Shop' })).toBeVisible();
+  const unit = shop.getByTestId('defect-unit').filter({ hasText: `Unit ${UNIT}` });
+  await expect(unit).toBeVisible();
+  await expect(unit.getByTestId('vehicle-status')).toHaveText(/Out of service/);
+  const defect = unit.getByTestId('open-defect');
+  await expect(defect).toHaveCount(1);
+  await expect(defect.getByTestId('defect-words')).toContainText(DRIVER_WORDS);
+  await expect(defect.getByTestId('defect-measurement')).toHaveText('2 thirty-seconds');
+  await expect(defect.getByTestId('defect-limit')).toContainText('49 CFR 393.75');
+  await expect(defect.getByTestId('safety-caution')).toContainText('limits it checks are minimums');
+  const audio = defect.getByTestId('defect-note-audio');
+  await expect(audio).toHaveAttribute('data-ready', 'true');
+  const played = await audio.evaluate(async (element: HTMLAudioElement) => {
+    element.muted = true;
+    await element.play();
+    await new Promise((resolve) => setTimeout(resolve, 400));
+    element.pause();
+    return { time: element.currentTime, duration: element.duration };
+  });
+  expect(played.time).toBeGreaterThan(0);
+  expect(played.duration).toBeGreaterThan(0.5);
+  await screenshot(shop, 'mechanic-open-defects');
+  await expectNoAxeViolations(shop, "the mechanic's open defects");
+
+  await defect.getByTestId('record-repair').click();
+  const form = defect.getByTestId('repair-form');
+  // A safety defect cannot be deferred: the option is not there and the reason is said.
+  await expect(form.getByRole('radio', { name: 'Deferred' })).toHaveCount(0);
+  await expect(form).toContainText('Deferral is not offered');
+  await form.getByRole('radio', { name: 'Repaired' }).check();
+  await form.getByLabel('What was done').fill(REPAIR_NOTE);
+  await form.getByLabel('Your full name').fill('Rui Almeida');
+  await form.getByTestId('certify-defect').click();
+  await expect(form.getByText('Draw your signature in the box to certify.')).toBeVisible();
+  await drawSignature(shop);
+  await screenshot(shop, 'mechanic-repair-form');
+  await expectNoAxeViolations(shop, 'the repair form');
+  await form.getByTestId('certify-defect').click();
+
+  const notice = shop.getByTestId('certified-notice');
+  await expect(notice).toContainText(`on unit ${UNIT}: Repaired`);
+  await expect(notice.getByTestId('vehicle-status')).toHaveText(/In service/);
+  await expect(shop.getByTestId('defect-unit').filter({ hasText: `Unit ${UNIT}` })).toHaveCount(0);
+  await expect(shop.getByTestId('recent-repair').first()).toContainText(UNIT);
+  await expect(shop.getByTestId('recent-repair').first()).toContainText(REPAIR_NOTE);
+  await screenshot(shop, 'mechanic-certified');
+  await expectNoAxeViolations(shop, 'the shop after the certification');
+  expect((await vehicleByUnit(request, driverHeaders)).status).toBe('in_service');
+  await shop.context().close();
+
+  // The next driver, on a phone.
+  const cab = await newPage(browser, true);
+  await signIn(cab, 'driver@yardcall.test');
+  await expect(cab.getByRole('heading', { level: 1, name: 'Driver home' })).toBeVisible();
+  await cab.goto('/driver/start');
+  await cab
+    .getByTestId('vehicle-picker')
+    .getByRole('button', { name: new RegExp(UNIT) })
+    .click();
+  await cab.getByTestId('no-trailer').click();
+  const review = cab.getByTestId('pending-acknowledgement');
+  await expect(review).toBeVisible();
+  await expect(review.getByTestId('ack-blocked')).toContainText(`The pre-trip of unit ${UNIT} starts only after`);
+  const repaired = review.getByTestId('acknowledged-defect');
+  await expect(repaired).toHaveCount(1);
+  await expect(repaired).toContainText(DRIVER_WORDS);
+  await expect(repaired.getByTestId('ack-action')).toHaveText('Repaired');
+  await expect(repaired).toContainText(REPAIR_NOTE);
+  await expect(repaired).toContainText('Rui Almeida');
+  // Nothing starts before the review is signed.
+  await expect(cab.getByTestId('glove-screen')).toHaveCount(0);
+  await screenshot(cab, 'next-driver-review');
+  await expectNoAxeViolations(cab, "the next driver's review");
+
+  await review.getByLabel('Your full name').fill('Dana Okafor');
+  await drawSignature(cab);
+  await review.getByTestId('sign-acknowledgement').click();
+  await expect(cab.getByTestId('glove-screen')).toBeVisible({ timeout: 30_000 });
+  const signatures = (await (
+    await request.get(`/api/inspections/${report.id}`, { headers: await login(request, 'supervisor@yardcall.test') })
+  ).json()) as InspectionResponse;
+  expect(signatures.signatures.map((s) => s.role).sort()).toEqual(['driver', 'mechanic', 'next_driver']);
+  await cab.context().close();
+});

@@ -1,0 +1,66 @@
+import { useEffect, useRef } from 'react';
+import { useTranslation } from 'react-i18next';
+import type { VoiceNoteResponse } from '@yardcall/shared';
+import { ErrorAlert } from '@/components/ui/alert';
+import { describeError } from '@/lib/errors';
+import { useInspectionNotes } from '../api/get-inspection-notes';
+import { useNoteAudio } from '@/lib/audio/get-note-audio';
+
+function NoteAudio({ note }: { note: VoiceNoteResponse }) {
+  const { t } = useTranslation();
+  const audio = useNoteAudio(note.id);
+  const element = useRef<HTMLAudioElement>(null);
+  const blob = audio.data;
+
+  // An object URL for the fetched audio, freed when the player goes away.
+  useEffect(() => {
+    const player = element.current;
+    if (!player || !blob) return undefined;
+    const url = URL.createObjectURL(blob);
+    player.src = url;
+    return () => {
+      player.removeAttribute('src');
+      URL.revokeObjectURL(url);
+    };
+  }, [blob]);
+
+  return (
+    <figure className="flex flex-col gap-1" data-testid="defect-note">
+      <figcaption className="font-bold">
+        {t('mechanic.note.title', { seconds: Math.max(1, Math.round(note.durationMs / 1000)) })}
+      </figcaption>
+      {note.heard ? <p>{t('mechanic.note.heard', { text: note.heard })}</p> : null}
+      {audio.isError ? (
+        <ErrorAlert>{describeError(audio.error)}</ErrorAlert>
+      ) : (
+        <audio
+          ref={element}
+          controls
+          preload="metadata"
+          aria-label={t('mechanic.note.play')}
+          aria-busy={blob ? undefined : true}
+          className="w-full max-w-md"
+          data-testid="defect-note-audio"
+          data-ready={blob ? 'true' : 'false'}
+        />
+      )}
+    </figure>
+  );
+}
+
+// The driver's voice notes at this defect's item, from the report it came from.
+export function NotePlayer({ inspectionId, itemKey }: { inspectionId: string; itemKey: string }) {
+  const { t } = useTranslation();
+  const notes = useInspectionNotes(inspectionId);
+  if (notes.isPending) return <p className="text-muted">{t('mechanic.note.loading')}</p>;
+  if (notes.isError) return <ErrorAlert>{describeError(notes.error)}</ErrorAlert>;
+  const here = notes.data.filter((note) => note.itemKey === itemKey);
+  if (here.length === 0) return <p className="text-muted">{t('mechanic.note.none')}</p>;
+  return (
+    <div className="flex flex-col gap-3">
+      {here.map((note) => (
+        <NoteAudio key={note.id} note={note} />
+      ))}
+    </div>
+  );
+}

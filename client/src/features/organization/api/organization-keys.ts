@@ -1,0 +1,5 @@
+// One key factory for the organisation's own settings.
+export const organizationKeys = {
+  all: ['organization'] as const,
+  retention: () => [...organizationKeys.all, 'retention'] as const,
+};

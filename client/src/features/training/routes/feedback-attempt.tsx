@@ -1,0 +1,42 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { useTranslation } from 'react-i18next';
+import { useParams, type LoaderFunctionArgs } from 'react-router';
+import { ErrorAlert, Loading } from '@/components/ui/alert';
+import { LinkButton } from '@/components/ui/link-button';
+import { PageHeading } from '@/components/ui/layout';
+import { describeError } from '@/lib/errors';
+import { attemptQueryOptions, useAttempt } from '../api/get-attempt';
+import { AttemptFeedback } from '../components/attempt-feedback';
+import { FEEDBACK_LIST_PATH } from '../paths';
+
+export function feedbackAttemptLoader(queryClient: QueryClient) {
+  return async ({ params }: LoaderFunctionArgs) => {
+    await queryClient.prefetchQuery(attemptQueryOptions(params.attemptId ?? ''));
+    return null;
+  };
+}
+
+export function FeedbackAttemptRoute() {
+  const { t } = useTranslation();
+  const { attemptId = '' } = useParams();
+  const attempt = useAttempt(attemptId);
+  return (
+    <div data-testid="feedback-attempt-screen">
+      <PageHeading
+        title={t('training.feedback.attemptTitle')}
+        actions={
+          <LinkButton to={FEEDBACK_LIST_PATH} variant="secondary">
+            {t('training.feedback.back')}
+          </LinkButton>
+        }
+      />
+      {attempt.isPending ? (
+        <Loading label={t('common.loading')} />
+      ) : attempt.isError ? (
+        <ErrorAlert>{describeError(attempt.error)}</ErrorAlert>
+      ) : (
+        <AttemptFeedback attempt={attempt.data} />
+      )}
+    </div>
+  );
+}

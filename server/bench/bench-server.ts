@@ -1,0 +1,73 @@
+// What the server benchmarks share: the built server started on a database of their own, and the
+// figures they print for `npm run bench` to collect.
+import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
+import { createServer } from 'node:net';
+import { join } from 'node:path';
+
+export interface BenchFigure {
+  name: string;
+  unit: string;
+  p50: number;
+  p95: number;
+  p99: number;
+  goal: number;
+  ratioToHealth: number;
+}
+
+const SERVER_DIR = join(__dirname, '..');
+
+function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const probe = createServer();
+    probe.once('error', reject);
+    probe.listen(0, '127.0.0.1', () => {
+      const address = probe.address();
+      const port = typeof address === 'object' && address ? address.port : 0;
+      probe.close(() => resolve(port));
+    });
+  });
+}
+
+// migrate.js or seed.js from the built server (both idempotent).
+export function runScript(script: string, databaseUrl: string): void {
+  const result = spawnSync(process.execPath, [join(SERVER_DIR, 'dist', 'database', script)], {
+    cwd: SERVER_DIR,
+    env: { ...process.env, DATABASE_URL: databaseUrl },
+    stdio: ['ignore', 'ignore', 'inherit'],
+  });
+  if (result.status !== 0) throw new Error(`${script} failed with code ${result.status ?? 'null'}.`);
+}
+
+export async function startServer(databaseUrl: string): Promise<{ url: string; child: ChildProcess }> {
+  const port = await freePort();
+  const child = spawn(process.execPath, [join(SERVER_DIR, 'dist', 'main.js')], {
+    cwd: SERVER_DIR,
+    env: {
+      ...process.env,
+      DATABASE_URL: databaseUrl,
+      PORT: String(port),
+      HOST: '127.0.0.1',
+      JWT_SECRET: process.env.JWT_SECRET ?? 'yardcall-bench-secret-0123456789abcdef',
+      CLIENT_DIST: '/nonexistent/yardcall-client-dist',
+    },
+    stdio: ['ignore', 'ignore', 'inherit'],
+  });
+  const url = `http://127.0.0.1:${port}`;
+  const deadline = Date.now() + 60_000;
+  while (Date.now() < deadline) {
+    if (child.exitCode !== null) throw new Error(`The server exited with code ${child.exitCode}.`);
+    try {
+      if ((await fetch(`${url}/api/health`)).ok) return { url, child };
+    } catch {
+      // not listening yet
+    }
+    await new Promise((resolve) => setTimeout(resolve, 250));
+  }
+  child.kill('SIGTERM');
+  throw new Error(`The server did not answer ${url}/api/health within 60 s.`);
+}
+
+export function percentile(sorted: readonly number[], p: number): number {
+  const index = Math.min(sorted.length - 1, Math.max(0, Math.ceil((p / 100) * sorted.length) - 1));
+  return sorted[index] ?? Number.NaN;
+}

@@ -1,0 +1,124 @@
+import type { ChecklistItem, FleetBoard, InspectionResponse, ResultUpsert, Role } from '@yardcall/shared';
+import { randomInt, randomUUID } from 'node:crypto';
+import request from 'supertest';
+import {
+  bearer,
+  bodyOf,
+  createVehicle,
+  OTHER_ORG_ADMIN,
+  signIn,
+  startInspection,
+  startApp,
+  tokensByRole,
+  tractorRequest,
+  trailerRequest,
+  type TestApp,
+} from './helpers';
+
+const unit = (prefix: string) => `${prefix}-${randomInt(10_000, 99_999)}`;
+
+describe('fleet board', () => {
+  let t: TestApp;
+  let tokens: Record<Role, string>;
+  let otherAdmin: string;
+
+  beforeAll(async () => {
+    t = await startApp();
+    tokens = await tokensByRole(t.url);
+    otherAdmin = await signIn(t.url, OTHER_ORG_ADMIN);
+  });
+  afterAll(async () => {
+    await t.close();
+  });
+
+  // A whole walk-around answered 6 s apart, `defects` answered as defects, then signed.
+  async function walkAround(vehicleIds: string[], defects: (items: ChecklistItem[]) => ChecklistItem[]) {
+    const started = await startInspection(t.url, tokens.driver, {
+      vehicleIds,
+      startedAt: new Date(Date.now() - 30 * 60_000).toISOString(),
+    });
+    const startMs = Date.parse(started.startedAt);
+    const bad = new Set(defects(started.checklist.items).map((i) => i.key));
+    const results: ResultUpsert[] = started.checklist.items.map((item, index) => ({
+      itemKey: item.key,
+      answer: bad.has(item.key) ? 'defect' : 'pass',
+      answeredAt: new Date(startMs + (index + 1) * 6000).toISOString(),
+      clientId: randomUUID(),
+    }));
+    const put = await request(t.url)
+      .put(`/api/inspections/${started.id}/results`)
+      .set(bearer(tokens.driver))
+      .send({ results });
+    expect(put.status).toBe(200);
+    const submitted = await request(t.url)
+      .post(`/api/inspections/${started.id}/submit`)
+      .set(bearer(tokens.driver))
+      .send({ signature: { name: 'Dana Okafor' } });
+    expect(submitted.status).toBe(200);
+    return bodyOf<InspectionResponse>(submitted);
+  }
+
+  it('shows each vehicle with its status, since when and why it is out of service, and its last report', async () => {
+    const tractor = await createVehicle(t.url, tokens.admin, tractorRequest(unit('FB')));
+    const trailer = await createVehicle(t.url, tokens.admin, trailerRequest(unit('FT')));
+    const report = await walkAround([tractor.id, trailer.id], (items) =>
+      items.filter((i) => i.safety && i.unitIndex === 0 && i.expects.type === 'check').slice(0, 2),
+    );
+    const safety = report.defects.filter((d) => d.safety);
+    expect(safety).toHaveLength(2);
+
+    const response = await request(t.url).get('/api/fleet/board').set(bearer(tokens.supervisor));
+    expect(response.status).toBe(200);
+    const board = bodyOf<FleetBoard>(response);
+    const row = board.vehicles.find((v) => v.id === tractor.id)!;
+    expect(row).toMatchObject({ unitNumber: tractor.unitNumber, kind: 'tractor', status: 'out_of_service' });
+    expect(row.outOfServiceSince).not.toBeNull();
+    expect(row.openSafetyDefects.map((d) => [d.title, d.positionLabel, d.inspectionId])).toEqual(
+      safety.map((d) => [d.title, d.positionLabel, report.id]),
+    );
+    expect(row.lastInspection).toEqual({
+      id: report.id,
+      kind: 'pre_trip',
+      submittedAt: report.submittedAt,
+      driver: report.driver,
+    });
+    const trailerRow = board.vehicles.find((v) => v.id === trailer.id)!;
+    expect(trailerRow).toMatchObject({ status: 'in_service', outOfServiceSince: null, openSafetyDefects: [] });
+    expect(trailerRow.lastInspection?.id).toBe(report.id);
+
+    // Out of service first; the counts match the rows; the database agrees.
+    const firstInService = board.vehicles.findIndex((v) => v.status === 'in_service');
+    expect(board.vehicles.slice(firstInService).every((v) => v.status === 'in_service')).toBe(true);
+    expect(board.outOfServiceCount + board.inServiceCount).toBe(board.vehicles.length);
+    const [db] = await t.dataSource.query<{ n: number }[]>(
+      "SELECT count(*)::int AS n FROM vehicles v JOIN users u ON u.organization_id = v.organization_id WHERE u.email = $1 AND v.status = 'out_of_service'",
+      ['admin@yardcall.test'],
+    );
+    expect(board.outOfServiceCount).toBe(db!.n);
+  });
+
+  it('is the same for a mechanic and an admin, and a vehicle never inspected has no last report', async () => {
+    const fresh = await createVehicle(t.url, tokens.admin, tractorRequest(unit('FN')));
+    for (const role of ['mechanic', 'admin'] as const) {
+      const board = bodyOf<FleetBoard>(await request(t.url).get('/api/fleet/board').set(bearer(tokens[role])));
+      expect(board.vehicles.find((v) => v.id === fresh.id)).toMatchObject({
+        status: 'in_service',
+        lastInspection: null,
+        openSafetyDefects: [],
+      });
+    }
+  });
+
+  it("shows only the caller's organisation", async () => {
+    const board = bodyOf<FleetBoard>(await request(t.url).get('/api/fleet/board').set(bearer(otherAdmin)));
+    expect(board.vehicles.map((v) => v.unitNumber)).toEqual(['TB-7']);
+    const own = bodyOf<FleetBoard>(await request(t.url).get('/api/fleet/board').set(bearer(tokens.admin)));
+    expect(own.vehicles.map((v) => v.unitNumber)).not.toContain('TB-7');
+  });
+
+  it('refuses drivers and trainers', async () => {
+    for (const role of ['driver', 'trainer'] as const) {
+      expect((await request(t.url).get('/api/fleet/board').set(bearer(tokens[role]))).status).toBe(403);
+    }
+  });
+});

@@ -1,0 +1,4 @@
+export * from './types.js';
+export * from './timeline.js';
+export * from './recurring.js';
+export * from './rushed-flag.js';
