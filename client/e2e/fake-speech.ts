@@ -10,6 +10,9 @@ export interface SpeechPlan {
   lowTreadKey: string | null;
   // How long a note is talked for before "end note" (default 2.5 s).
   noteMs?: number;
+  // A note on this item (said before its answer) instead of at turn `noteAt`, and its words.
+  noteKey?: string;
+  noteWords?: string;
 }
 
 // Headless Chromium cannot speak or listen: both are replaced before the app loads. The fake
@@ -69,14 +72,19 @@ function fakeSpeech(p: SpeechPlan): void {
     const expects = card?.dataset.expects ?? 'check';
     let answer: string | null;
     if (phase === 'confirming' || phase === 'offering') answer = 'yes';
-    else if (phase === 'noting') answer = noted++ === 0 ? 'the marker lens is cracked on the left side' : 'end note';
+    else if (phase === 'noting')
+      answer = noted++ === 0 ? (p.noteWords ?? 'the marker lens is cracked on the left side') : 'end note';
     else if (p.answerTurns !== null && asked >= p.answerTurns) answer = null;
     else {
       asked += 1;
       if (p.skipAt !== null && asked === p.skipAt && !skipped) {
         skipped = true;
         answer = 'skip';
-      } else if (p.noteAt !== null && asked === p.noteAt && noted === 0) answer = 'note';
+      } else if (
+        noted === 0 &&
+        ((p.noteAt !== null && asked === p.noteAt) || (p.noteKey !== undefined && key === p.noteKey))
+      )
+        answer = 'note';
       else if (key === p.lowTreadKey) answer = 'one thirty-second';
       else answer = expects === 'check' ? 'good' : measure(expects, key);
     }
