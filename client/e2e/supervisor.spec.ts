@@ -1,3 +1,4 @@
+import { execFileSync } from 'node:child_process';
 import { readFileSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -349,6 +350,21 @@ test('a supervisor finds a defect report on the board and in the list, replays, 
   // The clip is shorter than the note it came from.
   expect(clipBytes.length).toBeLessThan(prepared.note.sizeBytes);
   await screenshot(page, 'supervisor-clip-made');
+
+  // The report PDF holds what the page shows: the unit, each defect with the driver's words, the note.
+  const pdfDownload = page.waitForEvent('download');
+  await page.getByTestId('download-pdf').click();
+  const pdfPath = await (await pdfDownload).path();
+  const { text: pdfText } = JSON.parse(
+    execFileSync('node', [join(here, '..', '..', 'server', 'test', 'pdf-text.mjs')], {
+      input: readFileSync(pdfPath),
+    }).toString(),
+  ) as { text: string };
+  const flat = pdfText.replace(/\s+/g, ' ');
+  expect(flat).toContain(UNIT);
+  expect(flat).toContain(prepared.defectItem.title);
+  expect(flat).toContain('sidewall bulge');
+  expect(flat).toContain('the marker lens is cracked');
 
   // The same page at 200 % text.
   await page.evaluate(() => (document.documentElement.style.fontSize = '200%'));
