@@ -1,15 +1,7 @@
-import {
-  BadRequestException,
-  ConflictException,
-  Inject,
-  Injectable,
-  NotFoundException,
-  PayloadTooLargeException,
-  type OnModuleInit,
-} from '@nestjs/common';
+import { ConflictException, Inject, Injectable, NotFoundException, type OnModuleInit } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import type { Checklist, PhotoResponse, VoiceNoteResponse } from '@yardcall/shared';
-import { createHash, randomUUID } from 'node:crypto';
+import { randomUUID } from 'node:crypto';
 import { Repository, type FindOptionsWhere } from 'typeorm';
 import type { AuthUser } from '../auth/auth-user';
 import { ApiValidationException } from '../common/api-validation.exception';
@@ -25,9 +17,9 @@ import { OBJECT_STORAGE, type ObjectStorage } from '../storage/object-storage';
 import type { PhotoUploadDto, VoiceNoteUploadDto } from './dto/upload.dto';
 import { Photo } from './entities/photo.entity';
 import { VoiceNote } from './entities/voice-note.entity';
-import { detectMedia, PHOTO_MEDIA, VOICE_NOTE_MEDIA, type MediaKind } from './media-types';
+import { checkUpload, type CheckedUpload } from './check-upload';
+import { PHOTO_MEDIA, VOICE_NOTE_MEDIA, type MediaKind } from './media-types';
 import type { ServedObject } from './serve-object';
-import { formatBytes, UPLOAD_FIELD } from './upload.interceptor';
 
 export interface UploadResult<T> {
   record: T;
@@ -36,14 +28,7 @@ export interface UploadResult<T> {
 }
 
 type Prepared<T> =
-  { existing: T } | { existing: null; inspection: Inspection; checklist: Checklist; checked: CheckedFile };
-
-interface CheckedFile {
-  buffer: Buffer;
-  mimeType: string;
-  extension: string;
-  sha256: string;
-}
+  { existing: T } | { existing: null; inspection: Inspection; checklist: Checklist; checked: CheckedUpload };
 
 interface StoredUpload {
   sha256: string;
@@ -103,7 +88,7 @@ export function toPhotoResponse(photo: Photo): PhotoResponse {
 }
 
 // A clientId names one upload: sent again it answers the stored record, with other bytes it is a mistake.
-function sameUpload<T extends StoredUpload>(existing: T, checked: CheckedFile): T {
+function sameUpload<T extends StoredUpload>(existing: T, checked: CheckedUpload): T {
   if (existing.sha256 !== checked.sha256) {
     throw new ConflictException(
       `The client id ${existing.clientId} was already used for a different file: give each new upload its own client id.`,
@@ -270,42 +255,11 @@ export class NotesService implements InspectionAttachmentSource, OnModuleInit {
       if (!stored) {
         throw new ConflictException(`This inspection has been submitted: ${kind.label} can no longer be added to it.`);
       }
-      return { existing: sameUpload(stored, await this.checkFile(file, kind)) };
+      return { existing: sameUpload(stored, await checkUpload(file, kind)) };
     }
-    const checked = await this.checkFile(file, kind);
+    const checked = await checkUpload(file, kind);
     const stored = await findStored();
     if (stored) return { existing: sameUpload(stored, checked) };
     return { existing: null, ...editable, checked };
-  }
-
-  private async checkFile(file: Express.Multer.File | undefined, kind: MediaKind<string>): Promise<CheckedFile> {
-    if (!file) {
-      throw new BadRequestException(
-        `Attach ${kind.label} as the form field "${UPLOAD_FIELD}" of a multipart/form-data request.`,
-      );
-    }
-    if (file.size === 0 || file.buffer.length === 0) {
-      throw new BadRequestException(`The file is empty (0 bytes): send ${kind.label} with something in it.`);
-    }
-    // Multer stops at the limit; this guards a buffer that came another way.
-    if (file.buffer.length > kind.maxBytes) {
-      throw new PayloadTooLargeException(
-        `The file is larger than the ${formatBytes(kind.maxBytes)} (${kind.maxBytes} bytes) allowed for ${kind.label}.`,
-      );
-    }
-    const detection = await detectMedia(file.buffer, kind);
-    if (!detection.ok) {
-      throw new BadRequestException(
-        `This file is not ${kind.acceptedNames}: its content ${
-          detection.found ? `looks like ${detection.found}` : 'is of no type we recognise'
-        }. Send ${kind.label} as ${kind.acceptedNames}.`,
-      );
-    }
-    return {
-      buffer: file.buffer,
-      mimeType: detection.mimeType,
-      extension: detection.extension,
-      sha256: createHash('sha256').update(file.buffer).digest('hex'),
-    };
   }
 }

@@ -1,12 +1,4 @@
-import {
-  BadRequestException,
-  ConflictException,
-  ForbiddenException,
-  Inject,
-  Injectable,
-  NotFoundException,
-  PayloadTooLargeException,
-} from '@nestjs/common';
+import { ConflictException, ForbiddenException, Inject, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import {
   ChecklistError,
@@ -20,15 +12,14 @@ import {
   type TrainingAttemptResponse,
   type TrainingProgress,
 } from '@yardcall/shared';
-import { createHash } from 'node:crypto';
 import { DataSource, In, Repository, type EntityManager } from 'typeorm';
 import type { AuthUser } from '../auth/auth-user';
 import { ApiValidationException } from '../common/api-validation.exception';
 import { isUniqueViolation } from '../common/database-errors';
 import type { InspectionVehicleSnapshot } from '../inspections/entities/inspection.entity';
-import { detectMedia, VOICE_NOTE_MEDIA, type MediaKind, type NoteAudioType } from '../notes/media-types';
+import { checkUpload } from '../notes/check-upload';
+import { VOICE_NOTE_MEDIA, type MediaKind, type NoteAudioType } from '../notes/media-types';
 import type { ServedObject } from '../notes/serve-object';
-import { formatBytes, UPLOAD_FIELD } from '../notes/upload.interceptor';
 import { OBJECT_STORAGE, type ObjectStorage } from '../storage/object-storage';
 import { User } from '../users/entities/user.entity';
 import { Vehicle } from '../vehicles/entities/vehicle.entity';
@@ -177,7 +168,7 @@ export class TrainingService {
     file: Express.Multer.File | undefined,
   ): Promise<{ created: boolean; attempt: TrainingAttemptResponse }> {
     const attempt = await this.ownAttempt(this.dataSource.manager, user, id, false);
-    const checked = await checkAudio(file);
+    const checked = await checkUpload(file, PRACTICE_AUDIO_MEDIA);
     if (attempt.audioSha256) {
       if (attempt.audioSha256 !== checked.sha256) {
         throw new ConflictException(
@@ -402,43 +393,4 @@ export class TrainingService {
       review?.trainer?.name ?? '',
     );
   }
-}
-
-interface CheckedAudio {
-  buffer: Buffer;
-  mimeType: string;
-  extension: string;
-  sha256: string;
-}
-
-// Judged by its bytes, never by the name or type the client sent (as voice notes are).
-async function checkAudio(file: Express.Multer.File | undefined): Promise<CheckedAudio> {
-  const kind = PRACTICE_AUDIO_MEDIA;
-  if (!file) {
-    throw new BadRequestException(
-      `Attach ${kind.label} as the form field "${UPLOAD_FIELD}" of a multipart/form-data request.`,
-    );
-  }
-  if (file.buffer.length === 0) {
-    throw new BadRequestException(`The file is empty (0 bytes): send ${kind.label} with something in it.`);
-  }
-  if (file.buffer.length > kind.maxBytes) {
-    throw new PayloadTooLargeException(
-      `The file is larger than the ${formatBytes(kind.maxBytes)} (${kind.maxBytes} bytes) allowed for ${kind.label}.`,
-    );
-  }
-  const detection = await detectMedia(file.buffer, kind);
-  if (!detection.ok) {
-    throw new BadRequestException(
-      `This file is not ${kind.acceptedNames}: its content ${
-        detection.found ? `looks like ${detection.found}` : 'is of no type we recognise'
-      }. Send ${kind.label} as ${kind.acceptedNames}.`,
-    );
-  }
-  return {
-    buffer: file.buffer,
-    mimeType: detection.mimeType,
-    extension: detection.extension,
-    sha256: createHash('sha256').update(file.buffer).digest('hex'),
-  };
 }
