@@ -48,6 +48,7 @@ import { InspectionAttachmentsRegistry } from './inspection-attachments';
 import { toListItem, toResultResponse, toSharedResult, toSignatureResponse } from './inspection-view';
 import { recurringDefectsOf } from './review';
 import { driverStatement } from './statements';
+import { BoundedCache } from '../common/bounded-cache';
 
 export const SUBMITTED_MESSAGE =
   "This report is submitted and signed, so it can no longer be changed: changes now go through the mechanic's repair certification and the next driver's acknowledgement.";
@@ -168,7 +169,7 @@ function dayOrTime(text: string, bound: 'from' | 'to'): Date {
 
 @Injectable()
 export class InspectionsService {
-  private readonly checklists = new Map<string, BuiltChecklist>();
+  private readonly checklists = new BoundedCache<string, BuiltChecklist>(CHECKLIST_CACHE_MAX);
 
   constructor(
     @InjectRepository(Inspection) private readonly inspections: Repository<Inspection>,
@@ -558,13 +559,7 @@ export class InspectionsService {
   }
 
   private remember(id: string, checklist: Checklist): BuiltChecklist {
-    const built = { checklist, byKey: new Map(checklist.items.map((item) => [item.key, item])) };
-    if (this.checklists.size >= CHECKLIST_CACHE_MAX) {
-      const oldest = this.checklists.keys().next();
-      if (!oldest.done) this.checklists.delete(oldest.value);
-    }
-    this.checklists.set(id, built);
-    return built;
+    return this.checklists.set(id, { checklist, byKey: new Map(checklist.items.map((item) => [item.key, item])) });
   }
 
   private async assemble(inspection: Inspection): Promise<InspectionResponse> {

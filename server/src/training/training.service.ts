@@ -35,6 +35,7 @@ import type {
 import { TrainingAttempt } from './entities/training-attempt.entity';
 import { TrainingReview } from './entities/training-review.entity';
 import { orderedSegments, toAttemptListItem, toAttemptResponse, toProgressPoint } from './training-view';
+import { BoundedCache } from '../common/bounded-cache';
 
 // The same containers as voice notes, judged by content the same way; a whole walk-around is longer.
 export const PRACTICE_AUDIO_MEDIA: MediaKind<NoteAudioType> = {
@@ -55,7 +56,7 @@ const LIST_LIMIT = 200;
 
 @Injectable()
 export class TrainingService {
-  private readonly checklists = new Map<string, Checklist>();
+  private readonly checklists = new BoundedCache<string, Checklist>(CHECKLIST_CACHE_MAX);
 
   constructor(
     @InjectRepository(TrainingAttempt) private readonly attempts: Repository<TrainingAttempt>,
@@ -125,7 +126,7 @@ export class TrainingService {
       const winner = await this.attempts.findOneByOrFail({ studentId: user.id, clientId: dto.clientId });
       return { created: false, attempt: await this.assemble(winner) };
     }
-    this.remember(attempt.id, checklist);
+    this.checklists.set(attempt.id, checklist);
     return { created: true, attempt: await this.assemble(attempt) };
   }
 
@@ -367,17 +368,8 @@ export class TrainingService {
   private checklistOf(attempt: TrainingAttempt): Checklist {
     return (
       this.checklists.get(attempt.id) ??
-      this.remember(attempt.id, buildChecklist(attempt.vehicles, 'practice', attempt.locale))
+      this.checklists.set(attempt.id, buildChecklist(attempt.vehicles, 'practice', attempt.locale))
     );
-  }
-
-  private remember(id: string, checklist: Checklist): Checklist {
-    if (this.checklists.size >= CHECKLIST_CACHE_MAX) {
-      const oldest = this.checklists.keys().next();
-      if (!oldest.done) this.checklists.delete(oldest.value);
-    }
-    this.checklists.set(id, checklist);
-    return checklist;
   }
 
   private async assemble(attempt: TrainingAttempt): Promise<TrainingAttemptResponse> {

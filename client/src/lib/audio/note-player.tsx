@@ -94,6 +94,36 @@ function usePlayableAudio(blob: Blob | undefined, mimeType: string) {
   return { playable, unplayable: plan.convert && !plan.format, conversion: conversion.state };
 }
 
+// One edge of the clip, in seconds with tenths.
+function SecondsField(props: {
+  label: string;
+  max: number;
+  value: number;
+  onChange: (value: number) => void;
+  testId: string;
+}) {
+  const id = useId();
+  return (
+    <div className="flex flex-col gap-1">
+      <label htmlFor={id} className="font-bold">
+        {props.label}
+      </label>
+      <input
+        id={id}
+        type="number"
+        inputMode="decimal"
+        min={0}
+        max={props.max}
+        step={0.1}
+        value={props.value}
+        onChange={(event) => props.onChange(event.target.valueAsNumber)}
+        className="min-h-tap w-32 rounded-lg border-2 border-line bg-surface px-3 text-base text-ink"
+        data-testid={props.testId}
+      />
+    </div>
+  );
+}
+
 function ClipTrimmer({
   noteId,
   blob,
@@ -110,8 +140,6 @@ function ClipTrimmer({
   onClipChange: (clip: ClipRange) => void;
 }) {
   const { t } = useTranslation();
-  const startId = useId();
-  const endId = useId();
   const formatId = useId();
   const [formatIdValue, setFormatIdValue] = useState<AudioFormat['id']>('webm');
   const clipJob = useFfmpegJob();
@@ -136,46 +164,25 @@ function ClipTrimmer({
     if (made) saveBlob(made, clipFileName(noteId, clip.startSeconds, clip.endSeconds, format));
   };
 
-  const inputClass = 'min-h-tap w-32 rounded-lg border-2 border-line bg-surface px-3 text-base text-ink';
   return (
     <fieldset className="flex flex-col gap-2 rounded-lg border-2 border-line p-3" data-testid="clip-trimmer">
       <legend className="px-1 font-bold">{t('audio.clip.title')}</legend>
       <p className="text-muted">{t('audio.clip.lead')}</p>
       <div className="flex flex-wrap items-end gap-tap-gap">
-        <div className="flex flex-col gap-1">
-          <label htmlFor={startId} className="font-bold">
-            {t('audio.clip.start')}
-          </label>
-          <input
-            id={startId}
-            type="number"
-            inputMode="decimal"
-            min={0}
-            max={duration}
-            step={0.1}
-            value={clip.startSeconds}
-            onChange={(event) => setEdge('start', event.target.valueAsNumber)}
-            className={inputClass}
-            data-testid="clip-start"
-          />
-        </div>
-        <div className="flex flex-col gap-1">
-          <label htmlFor={endId} className="font-bold">
-            {t('audio.clip.end')}
-          </label>
-          <input
-            id={endId}
-            type="number"
-            inputMode="decimal"
-            min={0}
-            max={duration}
-            step={0.1}
-            value={clip.endSeconds}
-            onChange={(event) => setEdge('end', event.target.valueAsNumber)}
-            className={inputClass}
-            data-testid="clip-end"
-          />
-        </div>
+        <SecondsField
+          label={t('audio.clip.start')}
+          max={duration}
+          value={clip.startSeconds}
+          onChange={(value) => setEdge('start', value)}
+          testId="clip-start"
+        />
+        <SecondsField
+          label={t('audio.clip.end')}
+          max={duration}
+          value={clip.endSeconds}
+          onChange={(value) => setEdge('end', value)}
+          testId="clip-end"
+        />
         <div className="flex flex-col gap-1">
           <label htmlFor={formatId} className="font-bold">
             {t('audio.clip.format')}
