@@ -1,9 +1,10 @@
 // A stand-in for the inspection routes behind a stubbed fetch, for the offline tests only.
-import type { CreateInspectionRequest, PutResultsRequest } from '@yardcall/shared';
+import type { CreateInspectionRequest, PutResultsRequest, SubmitInspectionRequest } from '@yardcall/shared';
 
-export type RouteName = 'create' | 'results' | 'note' | 'photo';
+export type RouteName = 'create' | 'results' | 'note' | 'photo' | 'submit' | 'get';
 
-export type Failure = { network: true } | { status: number; message: string };
+export type Failure =
+  { network: true } | { status: number; message: string; fields?: { field: string; message: string }[] };
 
 export interface ReceivedUpload {
   inspectionId: string;
@@ -26,6 +27,8 @@ export function createFakeSyncServer() {
   const storedResults = new Map<string, unknown>();
   const receivedResultIds: string[] = [];
   const createRequests: CreateInspectionRequest[] = [];
+  // Server id -> the submit it took; a second submit of the same inspection is a 409, as on the server.
+  const submitted = new Map<string, SubmitInspectionRequest>();
   const uploads: { note: ReceivedUpload[]; photo: ReceivedUpload[] } = { note: [], photo: [] };
   const order: RouteName[] = [];
   const failures: { route: RouteName; failure: Failure; afterHandling: boolean; skip: number }[] = [];
@@ -44,9 +47,12 @@ export function createFakeSyncServer() {
 
   function routeOf(method: string, path: string): { route: RouteName; inspectionId?: string } | null {
     if (method === 'POST' && path === '/api/inspections') return { route: 'create' };
-    const match = /^\/api\/inspections\/([^/]+)\/(results|notes|photos)$/.exec(path);
+    const one = /^\/api\/inspections\/([^/]+)$/.exec(path);
+    if (method === 'GET' && one?.[1]) return { route: 'get', inspectionId: decodeURIComponent(one[1]) };
+    const match = /^\/api\/inspections\/([^/]+)\/(results|notes|photos|submit)$/.exec(path);
     if (!match?.[1]) return null;
     const inspectionId = decodeURIComponent(match[1]);
+    if (method === 'POST' && match[2] === 'submit') return { route: 'submit', inspectionId };
     if (method === 'PUT' && match[2] === 'results') return { route: 'results', inspectionId };
     if (method === 'POST' && match[2] === 'notes') return { route: 'note', inspectionId };
     if (method === 'POST' && match[2] === 'photos') return { route: 'photo', inspectionId };
@@ -96,6 +102,18 @@ export function createFakeSyncServer() {
         uploads[route].push(upload);
         return reply(201, { id: `${route}-${upload.clientId}`, clientId: upload.clientId });
       }
+      case 'submit': {
+        const id = inspectionId ?? '';
+        if (submitted.has(id)) return reply(409, { statusCode: 409, message: 'This report is already submitted.' });
+        submitted.set(id, JSON.parse(jsonBody(init)) as SubmitInspectionRequest);
+        return reply(201, { id, status: 'submitted', submittedAt: '2026-12-01T09:00:00.000Z' });
+      }
+      case 'get': {
+        const id = inspectionId ?? '';
+        return submitted.has(id)
+          ? reply(200, { id, status: 'submitted', submittedAt: '2026-12-01T09:00:00.000Z' })
+          : reply(200, { id, status: 'in_progress', submittedAt: null });
+      }
     }
   }
 
@@ -115,7 +133,8 @@ export function createFakeSyncServer() {
       const failure = failureIndex >= 0 ? failures.splice(failureIndex, 1)[0] : undefined;
       if (failure && !failure.afterHandling) {
         if ('network' in failure.failure) throw new TypeError('Failed to fetch');
-        return reply(failure.failure.status, { statusCode: failure.failure.status, message: failure.failure.message });
+        const { status, message, fields } = failure.failure;
+        return reply(status, { statusCode: status, message, ...(fields ? { fields } : {}) });
       }
       const response = await handle(found.route, found.inspectionId, init);
       // The server did the work but the answer was lost on the way back.
@@ -132,6 +151,7 @@ export function createFakeSyncServer() {
     storedResults,
     receivedResultIds,
     createRequests,
+    submitted,
     uploads,
     order,
     get maxInFlight() {

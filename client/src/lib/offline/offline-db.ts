@@ -1,5 +1,12 @@
 import { openDB, type DBSchema, type IDBPDatabase } from 'idb';
-import type { Checklist, CreateInspectionRequest, InspectionVehicle, ResultUpsert } from '@yardcall/shared';
+import type {
+  Checklist,
+  CreateInspectionRequest,
+  InspectionVehicle,
+  ReadingRule,
+  ResultUpsert,
+  SubmitInspectionRequest,
+} from '@yardcall/shared';
 
 export const OFFLINE_DB_NAME = 'yardcall-walkarounds';
 
@@ -18,7 +25,13 @@ export interface LocalInspection {
   request: CreateInspectionRequest;
   checklist: Checklist;
   voiceState?: JsonValue;
+  // The organisation's required readings when the walk-around began (the voice loop reads them).
+  requiredReadings: ReadingRule[];
   synced: SyncedFlag;
+  // Signed on this device: from here the walk-around is read-only and the submit waits in the outbox.
+  signed?: { request: SubmitInspectionRequest; signedAt: string };
+  // When the server acknowledged the signed report.
+  submittedAt?: string;
   createdAt: string;
   updatedAt: string;
 }
@@ -46,6 +59,8 @@ export interface LocalNote {
   heard?: string;
   synced: SyncedFlag;
   serverId?: string;
+  // 1 once the bytes were dropped: the server has them and the run is closed.
+  freed?: SyncedFlag;
   createdAt: string;
 }
 
@@ -57,11 +72,19 @@ export interface LocalPhoto {
   mimeType: string;
   synced: SyncedFlag;
   serverId?: string;
+  freed?: SyncedFlag;
   createdAt: string;
 }
 
-export const OUTBOX_KINDS = ['inspection', 'result', 'note', 'photo'] as const;
+export const OUTBOX_KINDS = ['inspection', 'result', 'note', 'photo', 'submit'] as const;
 export type OutboxKind = (typeof OUTBOX_KINDS)[number];
+
+// The server's answer to something that sending again cannot fix; the entry waits for the driver.
+export interface Refusal {
+  status: number;
+  message: string;
+  at: string;
+}
 
 // What is waiting to be sent, in the order it was written.
 export interface OutboxEntry {
@@ -69,6 +92,14 @@ export interface OutboxEntry {
   kind: OutboxKind;
   clientId: string;
   inspectionClientId: string;
+  refusal?: Refusal;
+}
+
+// Server data kept for a start with no signal (units, acknowledgements, required readings).
+export interface CachedEntry {
+  key: string;
+  value: unknown;
+  savedAt: string;
 }
 
 export interface OfflineSchema extends DBSchema {
@@ -85,9 +116,10 @@ export interface OfflineSchema extends DBSchema {
     value: OutboxEntry;
     indexes: { kindClientId: [OutboxKind, string]; kind: OutboxKind; inspectionClientId: string };
   };
+  cache: { key: string; value: CachedEntry };
 }
 
-export type OfflineStoreName = 'inspections' | 'results' | 'notes' | 'photos' | 'outbox';
+export type OfflineStoreName = 'inspections' | 'results' | 'notes' | 'photos' | 'outbox' | 'cache';
 export type OfflineConnection = IDBPDatabase<OfflineSchema>;
 
 export interface OfflineDb {
@@ -97,8 +129,8 @@ export interface OfflineDb {
   close(): void;
 }
 
-// A fresh name and version 1 of our own schema: nothing of an earlier store format is read.
-const SCHEMA_VERSION = 1;
+// Version 1: the walk-around and its outbox; 2 adds the cache of server data for offline starts.
+const SCHEMA_VERSION = 2;
 
 function createSchema(db: OfflineConnection): void {
   const inspections = db.createObjectStore('inspections', { keyPath: 'clientId' });
@@ -128,6 +160,7 @@ export function openOfflineDb(name: string = OFFLINE_DB_NAME): OfflineDb {
       (opening ??= openDB<OfflineSchema>(name, SCHEMA_VERSION, {
         upgrade(db, oldVersion) {
           if (oldVersion < 1) createSchema(db);
+          if (oldVersion < 2) db.createObjectStore('cache', { keyPath: 'key' });
         },
       })),
     close() {

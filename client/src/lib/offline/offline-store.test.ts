@@ -2,9 +2,9 @@ import 'fake-indexeddb/auto';
 import { afterEach, describe, expect, it } from 'vitest';
 import type { Checklist, CreateInspectionRequest } from '@yardcall/shared';
 import { openOfflineDb, type OfflineDb } from './offline-db';
-import { createOfflineStore } from './offline-store';
+import { createOfflineStore, SignedInspectionError } from './offline-store';
 
-const checklist: Checklist = { kind: 'post_trip', locale: 'es', zones: [], items: [] };
+const checklist: Checklist = { kind: 'post_trip', locale: 'es', zones: [], stops: [], items: [] };
 const request = (clientId: string): CreateInspectionRequest => ({
   clientId,
   vehicleIds: ['veh-bus-27'],
@@ -99,5 +99,48 @@ describe('offline store', () => {
       ]),
     ).rejects.toThrow('No inspection insp-missing is stored on this device.');
     expect(await store.countWaiting()).toBe(0);
+  });
+
+  it('keeps a signed walk-around read-only: no answer, note or voice state is added after the signature', async () => {
+    const store = open(freshName());
+    await store.saveInspection({
+      request: request('insp-1'),
+      vehicles: [],
+      checklist,
+      requiredReadings: ['tire_pressure'],
+    });
+    await store.signInspection('insp-1', { signature: { name: 'Ana Ruiz' }, signedAt: '2026-12-01T18:30:00.000Z' });
+
+    const answer = {
+      clientId: 'r-1',
+      itemKey: 'horn',
+      answer: 'pass' as const,
+      answeredAt: '2026-12-01T18:31:00.000Z',
+    };
+    await expect(store.saveResults('insp-1', [answer])).rejects.toThrow(SignedInspectionError);
+    await expect(store.saveVoiceState('insp-1', { at: 3 })).rejects.toThrow(SignedInspectionError);
+    await expect(
+      store.saveNote({
+        clientId: 'n-1',
+        inspectionClientId: 'insp-1',
+        itemKey: 'horn',
+        audio: new Blob(['x'], { type: 'audio/ogg' }),
+        durationMs: 500,
+      }),
+    ).rejects.toThrow(SignedInspectionError);
+    const kept = await store.getInspection('insp-1');
+    expect(kept).toMatchObject({
+      requiredReadings: ['tire_pressure'],
+      signed: { signedAt: '2026-12-01T18:30:00.000Z' },
+    });
+    expect((await store.waitingOf('insp-1')).map((entry) => entry.kind)).toEqual(['inspection', 'submit']);
+  });
+
+  it('keeps server data for a start with no signal, with the time it was saved', async () => {
+    const store = open(freshName());
+    expect(await store.readCached('start')).toBeUndefined();
+    await store.saveCached('start', { units: ['KV-101'] });
+    expect(await open(freshName()).readCached('start')).toBeUndefined();
+    expect(await store.readCached('start')).toMatchObject({ key: 'start', value: { units: ['KV-101'] } });
   });
 });

@@ -1,6 +1,14 @@
 import type { IDBPTransaction } from 'idb';
-import type { Checklist, CreateInspectionRequest, InspectionVehicle, ResultUpsert } from '@yardcall/shared';
 import type {
+  Checklist,
+  CreateInspectionRequest,
+  InspectionVehicle,
+  ReadingRule,
+  ResultUpsert,
+  SubmitInspectionRequest,
+} from '@yardcall/shared';
+import type {
+  CachedEntry,
   JsonValue,
   LocalInspection,
   LocalNote,
@@ -11,6 +19,7 @@ import type {
   OfflineStoreName,
   OutboxEntry,
   OutboxKind,
+  Refusal,
 } from './offline-db';
 
 export interface NewInspection {
@@ -18,8 +27,25 @@ export interface NewInspection {
   vehicles: InspectionVehicle[];
   checklist: Checklist;
   voiceState?: JsonValue;
+  requiredReadings?: ReadingRule[];
   // Known when the inspection was created online; then nothing waits to be sent.
   serverId?: string;
+}
+
+// Thrown for a write to a walk-around that is signed: the phone keeps it as it was signed.
+export class SignedInspectionError extends Error {
+  constructor(readonly inspectionClientId: string) {
+    super('This walk-around is signed: it can no longer be changed on this phone.');
+    this.name = 'SignedInspectionError';
+  }
+}
+
+// An outbox entry the server refused, with what it was about, for the driver to see.
+export interface RefusedEntry {
+  kind: OutboxKind;
+  clientId: string;
+  inspectionClientId: string;
+  refusal: Refusal;
 }
 
 export interface NewNote {
@@ -68,6 +94,13 @@ function present<T>(row: T | undefined): row is T {
   return row !== undefined;
 }
 
+// Records written before version 2 of the store have no required readings.
+function withDefaults(inspection: LocalInspection): LocalInspection {
+  return { ...inspection, requiredReadings: inspection.requiredReadings ?? [] };
+}
+
+const NO_BYTES = new ArrayBuffer(0);
+
 // Every answer, note and photo lands here first; the sync engine sends what the outbox lists.
 export function createOfflineStore(db: OfflineDb, now: () => Date = () => new Date()) {
   const listeners = new Set<WriteListener>();
@@ -107,14 +140,35 @@ export function createOfflineStore(db: OfflineDb, now: () => Date = () => new Da
     return inspection;
   }
 
-  // Outbox entries of a kind in the order they were written (the index keeps the key order).
+  // A signed walk-around is read-only: nothing more is added to what the driver signed.
+  async function requireOpen(tx: WriteTransaction, clientId: string): Promise<LocalInspection> {
+    const inspection = await requireInspection(tx, clientId);
+    if (inspection.signed) throw new SignedInspectionError(clientId);
+    return inspection;
+  }
+
+  // Outbox entries of a kind in the order they were written (the index keeps the key order); a
+  // refused entry is left for the driver and never sent again on its own.
   async function pendingOf<Name extends 'inspections' | 'results' | 'notes' | 'photos'>(kind: OutboxKind, name: Name) {
     const connection = await db.connection();
     const tx = connection.transaction(['outbox', name], 'readonly');
     const entries: OutboxEntry[] = await tx.objectStore('outbox').index('kind').getAll(kind);
-    const rows = await Promise.all(entries.map((entry) => tx.objectStore(name).get(entry.clientId)));
+    const rows = await Promise.all(
+      entries.filter((entry) => !entry.refusal).map((entry) => tx.objectStore(name).get(entry.clientId)),
+    );
     await tx.done;
     return rows.filter(present);
+  }
+
+  // Audio and photo bytes the server has, once the run is closed (signed): kept for replay before.
+  async function freeSentMedia(tx: WriteTransaction, inspectionClientId: string): Promise<void> {
+    for (const name of ['notes', 'photos'] as const) {
+      const store = tx.objectStore(name);
+      const rows = await store.index('inspectionClientId').getAll(inspectionClientId);
+      for (const row of rows) {
+        if (row.synced === 1 && row.freed !== 1) await store.put({ ...row, bytes: NO_BYTES, freed: 1 });
+      }
+    }
   }
 
   async function markSynced(
@@ -123,11 +177,15 @@ export function createOfflineStore(db: OfflineDb, now: () => Date = () => new Da
     clientId: string,
     serverId: string,
   ): Promise<void> {
-    await write([name, 'outbox'], async (tx) => {
+    await write(name === 'inspections' ? ['inspections', 'outbox'] : ['inspections', name, 'outbox'], async (tx) => {
       const store = tx.objectStore(name);
       const row = await store.get(clientId);
       if (row) await store.put({ ...row, serverId, synced: 1 });
       await dequeue(tx, kind, clientId);
+      if (row && name !== 'inspections' && 'inspectionClientId' in row) {
+        const inspection = await tx.objectStore('inspections').get(row.inspectionClientId);
+        if (inspection?.signed) await freeSentMedia(tx, row.inspectionClientId);
+      }
     });
   }
 
@@ -149,6 +207,7 @@ export function createOfflineStore(db: OfflineDb, now: () => Date = () => new Da
         request: input.request,
         checklist: input.checklist,
         voiceState: input.voiceState,
+        requiredReadings: input.requiredReadings ?? [],
         synced: input.serverId ? 1 : 0,
         createdAt: stamp,
         updatedAt: stamp,
@@ -160,6 +219,7 @@ export function createOfflineStore(db: OfflineDb, now: () => Date = () => new Da
           inspection.serverId = existing.serverId;
           inspection.synced = 1;
         }
+        if (existing?.signed) throw new SignedInspectionError(inspection.clientId);
         if (existing) inspection.createdAt = existing.createdAt;
         await tx.objectStore('inspections').put(inspection);
         if (!inspection.serverId) await enqueue(tx, 'inspection', inspection.clientId, inspection.clientId);
@@ -171,23 +231,24 @@ export function createOfflineStore(db: OfflineDb, now: () => Date = () => new Da
     // Local only: the voice loop's resume point is never sent.
     async saveVoiceState(inspectionClientId: string, voiceState: JsonValue): Promise<void> {
       await write(['inspections'], async (tx) => {
-        const inspection = await requireInspection(tx, inspectionClientId);
+        const inspection = await requireOpen(tx, inspectionClientId);
         await tx.objectStore('inspections').put({ ...inspection, voiceState, updatedAt: now().toISOString() });
       });
     },
 
     async getInspection(clientId: string): Promise<LocalInspection | undefined> {
-      return (await db.connection()).get('inspections', clientId);
+      const row = await (await db.connection()).get('inspections', clientId);
+      return row && withDefaults(row);
     },
 
     async listInspections(): Promise<LocalInspection[]> {
-      return (await db.connection()).getAll('inspections');
+      return (await (await db.connection()).getAll('inspections')).map(withDefaults);
     },
 
     async saveResults(inspectionClientId: string, upserts: ResultUpsert[]): Promise<void> {
       const stamp = now().toISOString();
       await write(['inspections', 'results', 'outbox'], async (tx) => {
-        await requireInspection(tx, inspectionClientId);
+        await requireOpen(tx, inspectionClientId);
         for (const upsert of upserts) {
           const existing = await tx.objectStore('results').get(upsert.clientId);
           if (existing && existing.inspectionClientId !== inspectionClientId) {
@@ -216,7 +277,10 @@ export function createOfflineStore(db: OfflineDb, now: () => Date = () => new Da
       const connection = await db.connection();
       const inspection = await connection.get('inspections', clientId);
       if (!inspection) return null;
-      return { inspection, results: await connection.getAllFromIndex('results', 'inspectionClientId', clientId) };
+      return {
+        inspection: withDefaults(inspection),
+        results: await connection.getAllFromIndex('results', 'inspectionClientId', clientId),
+      };
     },
 
     async saveNote(input: NewNote): Promise<void> {
@@ -233,7 +297,7 @@ export function createOfflineStore(db: OfflineDb, now: () => Date = () => new Da
         createdAt: now().toISOString(),
       };
       await write(['inspections', 'notes', 'outbox'], async (tx) => {
-        await requireInspection(tx, input.inspectionClientId);
+        await requireOpen(tx, input.inspectionClientId);
         if ((await tx.objectStore('notes').get(note.clientId))?.synced === 1) return;
         await tx.objectStore('notes').put(note);
         await enqueue(tx, 'note', note.clientId, note.inspectionClientId);
@@ -257,7 +321,7 @@ export function createOfflineStore(db: OfflineDb, now: () => Date = () => new Da
         createdAt: now().toISOString(),
       };
       await write(['inspections', 'photos', 'outbox'], async (tx) => {
-        await requireInspection(tx, input.inspectionClientId);
+        await requireOpen(tx, input.inspectionClientId);
         if ((await tx.objectStore('photos').get(photo.clientId))?.synced === 1) return;
         await tx.objectStore('photos').put(photo);
         await enqueue(tx, 'photo', photo.clientId, photo.inspectionClientId);
@@ -314,6 +378,94 @@ export function createOfflineStore(db: OfflineDb, now: () => Date = () => new Da
 
     markPhotoSynced: (clientId: string, serverId: string): Promise<void> =>
       markSynced('photos', 'photo', clientId, serverId),
+
+    // The driver signs: the report is kept as signed and waits in the outbox behind its answers.
+    async signInspection(clientId: string, request: SubmitInspectionRequest): Promise<LocalInspection> {
+      const stamp = now().toISOString();
+      const signed = await write(['inspections', 'outbox'], async (tx) => {
+        const inspection = await requireOpen(tx, clientId);
+        const next: LocalInspection = {
+          ...inspection,
+          signed: { request: { ...request, signedAt: request.signedAt ?? stamp }, signedAt: request.signedAt ?? stamp },
+          updatedAt: stamp,
+        };
+        await tx.objectStore('inspections').put(next);
+        await enqueue(tx, 'submit', clientId, clientId);
+        return next;
+      });
+      notifyWrite();
+      return withDefaults(signed);
+    },
+
+    // Signed reports the server has not acknowledged yet, oldest first.
+    pendingSubmits: (): Promise<LocalInspection[]> => pendingOf('submit', 'inspections'),
+
+    // The server has the signed report: the outbox entry goes and the sent audio and photos are freed.
+    async markSubmitted(clientId: string, submittedAt: string): Promise<void> {
+      await write(['inspections', 'notes', 'photos', 'outbox'], async (tx) => {
+        const inspection = await requireInspection(tx, clientId);
+        await tx.objectStore('inspections').put({ ...inspection, submittedAt });
+        await dequeue(tx, 'submit', clientId);
+        await freeSentMedia(tx, clientId);
+      });
+    },
+
+    // Entries of this inspection still waiting (refused ones included).
+    async waitingOf(inspectionClientId: string): Promise<OutboxEntry[]> {
+      return (await db.connection()).getAllFromIndex('outbox', 'inspectionClientId', inspectionClientId);
+    },
+
+    // The server refused this entry for a reason that sending again cannot fix.
+    async refuse(kind: OutboxKind, clientId: string, refusal: Refusal): Promise<void> {
+      await write(['outbox'], async (tx) => {
+        const outbox = tx.objectStore('outbox');
+        const seq = await outbox.index('kindClientId').getKey([kind, clientId]);
+        const entry = seq === undefined ? undefined : await outbox.get(seq);
+        if (entry) await outbox.put({ ...entry, refusal });
+      });
+      notifyWrite();
+    },
+
+    async listRefused(): Promise<RefusedEntry[]> {
+      const entries = await (await db.connection()).getAll('outbox');
+      return entries.flatMap(({ kind, clientId, inspectionClientId, refusal }) =>
+        refusal ? [{ kind, clientId, inspectionClientId, refusal }] : [],
+      );
+    },
+
+    // The driver asks to send an inspection's refused entries again (after reviewing a report, say).
+    async clearRefusals(inspectionClientId: string): Promise<void> {
+      await write(['outbox'], async (tx) => {
+        const outbox = tx.objectStore('outbox');
+        let cursor = await outbox.index('inspectionClientId').openCursor(inspectionClientId);
+        while (cursor) {
+          if (cursor.value.refusal) await cursor.update({ ...cursor.value, refusal: undefined });
+          cursor = await cursor.continue();
+        }
+      });
+      notifyWrite();
+    },
+
+    // The driver leaves a refused record out; the rest of the inspection goes on without it.
+    async discardRefused(kind: OutboxKind, clientId: string): Promise<void> {
+      await write(['outbox'], async (tx) => {
+        const outbox = tx.objectStore('outbox');
+        const seq = await outbox.index('kindClientId').getKey([kind, clientId]);
+        const entry = seq === undefined ? undefined : await outbox.get(seq);
+        if (seq !== undefined && entry?.refusal) await outbox.delete(seq);
+      });
+      notifyWrite();
+    },
+
+    async saveCached(key: string, value: unknown): Promise<CachedEntry> {
+      const entry: CachedEntry = { key, value, savedAt: now().toISOString() };
+      await (await db.connection()).put('cache', entry);
+      return entry;
+    },
+
+    async readCached(key: string): Promise<CachedEntry | undefined> {
+      return (await db.connection()).get('cache', key);
+    },
 
     serverIdOf: async (inspectionClientId: string): Promise<string | undefined> =>
       (await db.connection()).get('inspections', inspectionClientId).then((row) => row?.serverId),

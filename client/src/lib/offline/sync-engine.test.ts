@@ -7,7 +7,7 @@ import { openOfflineDb, type OfflineDb } from './offline-db';
 import { createOfflineStore, type OfflineStore } from './offline-store';
 import { createSyncEngine, isRetryable, type SyncEngine, type SyncEngineOptions } from './sync-engine';
 
-const checklist: Checklist = { kind: 'pre_trip', locale: 'en', zones: [], items: [] };
+const checklist: Checklist = { kind: 'pre_trip', locale: 'en', zones: [], stops: [], items: [] };
 
 function createRequest(clientId: string): CreateInspectionRequest {
   return {
@@ -154,13 +154,12 @@ describe('sync engine', { timeout: 30_000 }, () => {
     expect(server.storedResults.size).toBe(40);
   });
 
-  it('retries after a server fault, a timeout, throttling and a conflict', async () => {
+  it('retries after a server fault, a timeout and throttling', async () => {
     const store = openStore(dbName);
     await saveInspectionWithResults(store, 'insp-a', resultIds(3));
     server.failNext('create', { status: 503, message: 'Down for maintenance.' });
     server.failNext('results', { status: 408, message: 'Timed out.' });
     server.failNext('results', { status: 429, message: 'Slow down.' });
-    server.failNext('results', { status: 409, message: 'Busy with the same result.' });
     // No delay: the retry comes due while the failed run is still settling.
     const engine = engineFor(store, { retryDelayMs: () => 0 });
 
@@ -171,18 +170,32 @@ describe('sync engine', { timeout: 30_000 }, () => {
     expect(engine.getStatus().lastError).toBeUndefined();
   });
 
-  it('shows the sentence of a conflict while it keeps retrying, and clears it once through', async () => {
+  it('keeps a refused create against its inspection while another inspection goes on, and sends it when asked again', async () => {
     const store = openStore(dbName);
-    await saveInspectionWithResults(store, 'insp-a', resultIds(2));
+    await saveInspectionWithResults(store, 'insp-a', resultIds(2, 'a'));
+    await saveInspectionWithResults(store, 'insp-b', resultIds(2, 'b'));
     const message = 'Review and sign the last report of unit 418 first.';
     server.failNext('create', { status: 409, message });
     const engine = engineFor(store, { retryDelayMs: () => 60_000 });
 
-    expect(await engine.syncNow()).toBe('retry');
-    expect(engine.getStatus()).toMatchObject({ lastError: message, waiting: 3 });
-
     expect(await engine.syncNow()).toBe('done');
-    expect(engine.getStatus()).toMatchObject({ lastError: undefined, waiting: 0 });
+    // No retry loop: the conflict waits for the driver; the other inspection is through.
+    await new Promise((resolve) => setTimeout(resolve, 40));
+    expect(server.createRequests.map((request) => request.clientId)).toEqual(['insp-b']);
+    expect(server.receivedResultIds).toEqual(resultIds(2, 'b'));
+    const refused = (await store.listRefused()).map(({ kind, clientId, refusal }) => [
+      kind,
+      clientId,
+      refusal.status,
+      refusal.message,
+    ]);
+    expect(refused).toEqual([['inspection', 'insp-a', 409, message]]);
+    expect(engine.getStatus().waiting).toBe(3);
+
+    await store.clearRefusals('insp-a');
+    expect(await engine.syncNow()).toBe('done');
+    expect(engine.getStatus().waiting).toBe(0);
+    expect(server.receivedResultIds).toEqual([...resultIds(2, 'b'), ...resultIds(2, 'a')]);
   });
 
   it('uploads notes and photos after the results, one multipart request each', async () => {
@@ -228,9 +241,10 @@ describe('sync engine', { timeout: 30_000 }, () => {
     expect(engine.getStatus().waiting).toBe(0);
   });
 
-  it('stops on a refused batch with the server sentence and keeps the rest queued', async () => {
+  it('keeps a refused result aside and sends the rest of its batch, the note and the other inspections', async () => {
     const store = openStore(dbName);
     await saveInspectionWithResults(store, 'insp-a', resultIds(5));
+    await saveInspectionWithResults(store, 'insp-b', resultIds(1, 'b'));
     await store.saveNote({
       clientId: 'note-1',
       inspectionClientId: 'insp-a',
@@ -238,25 +252,124 @@ describe('sync engine', { timeout: 30_000 }, () => {
       audio: new Blob(['x'], { type: 'audio/ogg' }),
       durationMs: 900,
     });
-    server.failNext('results', { status: 400, message: 'Item key item.r-3 is not on this checklist.' });
+    const message = 'Item key item.r-3 is not on this checklist.';
+    server.failNext('results', { status: 400, message, fields: [{ field: 'results.2.itemKey', message }] });
     const engine = engineFor(store);
 
-    expect(await engine.syncNow()).toBe('stopped');
+    expect(await engine.syncNow()).toBe('done');
     await new Promise((resolve) => setTimeout(resolve, 40));
 
-    expect(engine.getStatus()).toMatchObject({
-      lastError: 'Item key item.r-3 is not on this checklist.',
-      waiting: 6,
-      syncing: false,
-    });
-    // No retry loop and no note sent past the refusal.
-    expect(server.order).toEqual(['create']);
-    expect(server.receivedResultIds).toEqual([]);
+    expect(server.receivedResultIds).toEqual(['r-1', 'r-2', 'r-4', 'r-5', 'b-1']);
+    expect(server.uploads.note.map((note) => note.clientId)).toEqual(['note-1']);
+    expect(await store.listRefused()).toEqual([
+      expect.objectContaining({ kind: 'result', clientId: 'r-3', inspectionClientId: 'insp-a' }),
+    ]);
+    expect(engine.getStatus()).toMatchObject({ waiting: 1, syncing: false, lastError: undefined });
 
-    // The next trigger tries again; a clean run clears the sentence.
+    // Not sent again on its own; the driver may leave it out.
     await engine.syncNow();
-    expect(engine.getStatus()).toMatchObject({ waiting: 0, lastError: undefined });
-    expect(server.order).toEqual(['create', 'results', 'note']);
+    expect(server.receivedResultIds).toHaveLength(5);
+    await store.discardRefused('result', 'r-3');
+    expect(await store.countWaiting()).toBe(0);
+  });
+
+  it('refuses a note the server will not take and still uploads the next one', async () => {
+    const store = openStore(dbName);
+    await store.saveInspection({ request: createRequest('insp-a'), vehicles: [], checklist });
+    for (const id of ['note-1', 'note-2']) {
+      await store.saveNote({
+        clientId: id,
+        inspectionClientId: 'insp-a',
+        itemKey: 'item.r-1',
+        audio: new Blob([id], { type: 'audio/ogg' }),
+        durationMs: 900,
+      });
+    }
+    server.failNext('note', { status: 413, message: 'This voice note is too large.' });
+    const engine = engineFor(store);
+
+    expect(await engine.syncNow()).toBe('done');
+    expect(server.uploads.note.map((note) => note.clientId)).toEqual(['note-2']);
+    expect((await store.listRefused()).map((entry) => [entry.kind, entry.clientId, entry.refusal.status])).toEqual([
+      ['note', 'note-1', 413],
+    ]);
+  });
+
+  it('sends a report signed offline after its answers, once, and frees the sent audio and photos', async () => {
+    const store = openStore(dbName);
+    await saveInspectionWithResults(store, 'insp-a', resultIds(2));
+    await store.saveNote({
+      clientId: 'note-1',
+      inspectionClientId: 'insp-a',
+      itemKey: 'item.r-1',
+      audio: new Blob(['opus-bytes'], { type: 'audio/webm' }),
+      durationMs: 1200,
+    });
+    await store.savePhoto({
+      clientId: 'photo-1',
+      inspectionClientId: 'insp-a',
+      itemKey: 'item.r-1',
+      image: new Blob(['jpeg-bytes'], { type: 'image/jpeg' }),
+    });
+    // Sent while the run is open: the bytes stay for replay.
+    const engine = engineFor(store);
+    await engine.syncNow();
+    expect((await store.getNotes('insp-a'))[0]?.bytes.byteLength).toBe(10);
+
+    online = false;
+    await store.signInspection('insp-a', {
+      signature: { name: 'Tomas Reyes' },
+      signedAt: '2026-12-01T06:10:00.000Z',
+    });
+    expect(await engine.syncNow()).toBe('offline');
+    expect(engine.getStatus().waiting).toBe(1);
+
+    online = true;
+    expect(await engine.syncNow()).toBe('done');
+    expect(server.submitted.get('srv-1')).toMatchObject({
+      signature: { name: 'Tomas Reyes' },
+      signedAt: '2026-12-01T06:10:00.000Z',
+    });
+    const inspection = await store.getInspection('insp-a');
+    expect(inspection?.submittedAt).toBe('2026-12-01T09:00:00.000Z');
+    expect((await store.getNotes('insp-a'))[0]).toMatchObject({ synced: 1, freed: 1 });
+    expect((await store.getNotes('insp-a'))[0]?.bytes.byteLength).toBe(0);
+    expect((await store.getPhotos('insp-a'))[0]?.bytes.byteLength).toBe(0);
+    expect(engine.getStatus().waiting).toBe(0);
+  });
+
+  it('takes a 409 on a submit whose answer was lost as done once the server shows the report submitted', async () => {
+    const store = openStore(dbName);
+    await saveInspectionWithResults(store, 'insp-a', resultIds(1));
+    await store.signInspection('insp-a', { signature: { name: 'Tomas Reyes' } });
+    // The server submits the report, then the answer is lost: the resend meets a 409.
+    server.failNext('submit', { network: true }, { afterHandling: true });
+    const engine = engineFor(store, { retryDelayMs: () => 0 });
+
+    expect(await engine.syncNow()).toBe('retry');
+    await vi.waitFor(() => expect(engine.getStatus().waiting).toBe(0), WAIT);
+
+    expect(server.order.filter((route) => route === 'submit')).toHaveLength(2);
+    expect(server.order.at(-1)).toBe('get');
+    expect(server.submitted.size).toBe(1);
+    expect(await store.listRefused()).toEqual([]);
+    expect((await store.getInspection('insp-a'))?.submittedAt).toBe('2026-12-01T09:00:00.000Z');
+  });
+
+  it('does not retry results forever on a 409 for an inspection submitted elsewhere', async () => {
+    const store = openStore(dbName);
+    await saveInspectionWithResults(store, 'insp-a', resultIds(1));
+    await saveInspectionWithResults(store, 'insp-b', resultIds(1, 'b'));
+    server.failNext('results', { status: 409, message: 'This report is submitted and signed.' });
+    const engine = engineFor(store, { retryDelayMs: () => 0 });
+
+    expect(await engine.syncNow()).toBe('done');
+    await new Promise((resolve) => setTimeout(resolve, 40));
+
+    const resultCalls = vi.mocked(fetch).mock.calls.filter(([url]) => urlOf(url).endsWith('/results'));
+    expect(resultCalls).toHaveLength(2);
+    expect(server.receivedResultIds).toEqual(['b-1']);
+    expect((await store.listRefused()).map((entry) => entry.clientId)).toEqual(['r-1']);
   });
 
   it('stops on a lost session without clearing the token or leaving the walk-around', async () => {
@@ -373,7 +486,7 @@ describe('isRetryable', () => {
     [500, true],
     [503, true],
     [408, true],
-    [409, true],
+    [409, false],
     [429, true],
     [400, false],
     [401, false],

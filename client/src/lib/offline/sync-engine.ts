@@ -1,7 +1,7 @@
-import type { ResultUpsert } from '@yardcall/shared';
+import type { InspectionResponse, ResultUpsert, SubmitInspectionRequest } from '@yardcall/shared';
 import { ApiError, NETWORK_ERROR_STATUS } from '../api-client';
 import { describeError } from '../errors';
-import type { LocalNote, LocalPhoto } from './offline-db';
+import type { LocalNote, LocalPhoto, OutboxKind } from './offline-db';
 import type { OfflineStore, PendingResult } from './offline-store';
 import { requestPersistentStorage, type PersistOutcome } from './persistent-storage';
 import { apiSyncTransport, type SyncTransport } from './sync-transport';
@@ -48,12 +48,28 @@ export type SyncEngine = ReturnType<typeof createSyncEngine>;
 
 type RunOutcome = 'done' | 'offline' | 'retry' | 'stopped';
 
-// Retried with backoff: no answer, a server fault, a timeout, throttling, or a conflict with a
-// concurrent request for the same client id.
+// Retried with backoff: no answer, a server fault, a timeout or throttling. A conflict is not: the
+// server's state (a submitted report, a review to sign first) does not change by asking again.
 export function isRetryable(error: unknown): boolean {
   if (!(error instanceof ApiError)) return false;
   const { status } = error;
-  return status === NETWORK_ERROR_STATUS || status >= 500 || status === 408 || status === 409 || status === 429;
+  return status === NETWORK_ERROR_STATUS || status >= 500 || status === 408 || status === 429;
+}
+
+// A lost session stops the whole run (every request would fail the same way) until the driver signs in.
+function stopsEveryRecord(error: unknown): boolean {
+  return error instanceof ApiError && (error.status === 401 || error.status === 403);
+}
+
+// Refusals the server names per result of a batch ("results.3.itemKey"): those results alone.
+function refusedIndexes(error: ApiError, batchLength: number): Set<number> {
+  const indexes = new Set<number>();
+  for (const field of error.fields) {
+    const match = /^results\.(\d+)\./.exec(field.field);
+    const index = match ? Number(match[1]) : -1;
+    if (index >= 0 && index < batchLength) indexes.add(index);
+  }
+  return indexes;
 }
 
 function fileExtension(mimeType: string): string {
@@ -137,11 +153,51 @@ export function createSyncEngine(options: SyncEngineOptions) {
     setStatus({ lastSyncedAt: now().toISOString(), waiting: await store.countWaiting() });
   }
 
+  // A refusal that sending again cannot fix is kept against its record and the run goes on with
+  // the others; anything retryable or a lost session ends the run.
+  async function settle(kind: OutboxKind, clientId: string, work: () => Promise<void>): Promise<boolean> {
+    try {
+      await work();
+      return true;
+    } catch (error) {
+      if (isRetryable(error) || stopsEveryRecord(error) || !(error instanceof ApiError)) throw error;
+      await store.refuse(kind, clientId, {
+        status: error.status,
+        message: describeError(error),
+        at: now().toISOString(),
+      });
+      return false;
+    }
+  }
+
   async function pushCreates(): Promise<void> {
     for (const inspection of await store.pendingCreates()) {
-      const created = await transport.createInspection(inspection.request);
-      await store.markInspectionCreated(inspection.clientId, created.id);
-      await acknowledged();
+      await settle('inspection', inspection.clientId, async () => {
+        const created = await transport.createInspection(inspection.request);
+        await store.markInspectionCreated(inspection.clientId, created.id);
+        await acknowledged();
+      });
+    }
+  }
+
+  async function sendBatch(serverId: string, batch: PendingResult[]): Promise<void> {
+    let rest = batch;
+    while (rest.length > 0) {
+      try {
+        const upserts: ResultUpsert[] = rest.map((result) => result.upsert);
+        await transport.putResults(serverId, { results: upserts });
+        await store.markResultsSynced(rest.map(({ upsert, revision }) => ({ clientId: upsert.clientId, revision })));
+        await acknowledged();
+        return;
+      } catch (error) {
+        if (isRetryable(error) || stopsEveryRecord(error) || !(error instanceof ApiError)) throw error;
+        // The results the server named are kept aside and the others go again; unnamed, all of them.
+        const named = refusedIndexes(error, rest.length);
+        const refused = named.size > 0 ? rest.filter((_, index) => named.has(index)) : rest;
+        const refusal = { status: error.status, message: describeError(error), at: now().toISOString() };
+        for (const result of refused) await store.refuse('result', result.upsert.clientId, refusal);
+        rest = named.size > 0 ? rest.filter((_, index) => !named.has(index)) : [];
+      }
     }
   }
 
@@ -154,15 +210,11 @@ export function createSyncEngine(options: SyncEngineOptions) {
       byInspection.set(result.inspectionClientId, list);
     }
     for (const [inspectionClientId, results] of byInspection) {
+      // Its create is refused or not through yet: the other inspections go on.
       const serverId = await store.serverIdOf(inspectionClientId);
-      // Its create has not been acknowledged yet; creates run first, so this is a data fault.
-      if (!serverId) throw new Error(`Inspection ${inspectionClientId} has no server id yet.`);
+      if (!serverId) continue;
       for (let start = 0; start < results.length; start += batchSize) {
-        const batch = results.slice(start, start + batchSize);
-        const upserts: ResultUpsert[] = batch.map((result) => result.upsert);
-        await transport.putResults(serverId, { results: upserts });
-        await store.markResultsSynced(batch.map(({ upsert, revision }) => ({ clientId: upsert.clientId, revision })));
-        await acknowledged();
+        await sendBatch(serverId, results.slice(start, start + batchSize));
       }
     }
   }
@@ -170,20 +222,56 @@ export function createSyncEngine(options: SyncEngineOptions) {
   async function pushNotes(): Promise<void> {
     for (const note of await store.pendingNotes()) {
       const serverId = await store.serverIdOf(note.inspectionClientId);
-      if (!serverId) throw new Error(`Inspection ${note.inspectionClientId} has no server id yet.`);
-      const saved = await transport.uploadNote(serverId, noteForm(note));
-      await store.markNoteSynced(note.clientId, saved.id);
-      await acknowledged();
+      if (!serverId) continue;
+      await settle('note', note.clientId, async () => {
+        const saved = await transport.uploadNote(serverId, noteForm(note));
+        await store.markNoteSynced(note.clientId, saved.id);
+        await acknowledged();
+      });
     }
   }
 
   async function pushPhotos(): Promise<void> {
     for (const photo of await store.pendingPhotos()) {
       const serverId = await store.serverIdOf(photo.inspectionClientId);
-      if (!serverId) throw new Error(`Inspection ${photo.inspectionClientId} has no server id yet.`);
-      const saved = await transport.uploadPhoto(serverId, photoForm(photo));
-      await store.markPhotoSynced(photo.clientId, saved.id);
-      await acknowledged();
+      if (!serverId) continue;
+      await settle('photo', photo.clientId, async () => {
+        const saved = await transport.uploadPhoto(serverId, photoForm(photo));
+        await store.markPhotoSynced(photo.clientId, saved.id);
+        await acknowledged();
+      });
+    }
+  }
+
+  // A 409 on a submit whose answer was lost: the server already holds this report. Confirmed by
+  // reading it back, so a report submitted from elsewhere is not taken for ours silently.
+  async function submitOnce(
+    serverId: string,
+    request: SubmitInspectionRequest,
+  ): Promise<Pick<InspectionResponse, 'submittedAt'>> {
+    try {
+      return await transport.submitInspection(serverId, request);
+    } catch (error) {
+      if (!(error instanceof ApiError) || error.status !== 409) throw error;
+      const stored = await transport.getInspection(serverId);
+      if (stored.status !== 'submitted') throw error;
+      return stored;
+    }
+  }
+
+  async function pushSubmits(): Promise<void> {
+    for (const inspection of await store.pendingSubmits()) {
+      const serverId = inspection.serverId ?? (await store.serverIdOf(inspection.clientId));
+      if (!serverId || !inspection.signed) continue;
+      // The report is signed over every answer, note and photo: it goes once they all have.
+      const waiting = await store.waitingOf(inspection.clientId);
+      if (waiting.some((entry) => entry.kind !== 'submit')) continue;
+      const { request } = inspection.signed;
+      await settle('submit', inspection.clientId, async () => {
+        const submitted = await submitOnce(serverId, request);
+        await store.markSubmitted(inspection.clientId, submitted.submittedAt ?? now().toISOString());
+        await acknowledged();
+      });
     }
   }
 
@@ -206,17 +294,13 @@ export function createSyncEngine(options: SyncEngineOptions) {
       await pushResults();
       await pushNotes();
       await pushPhotos();
+      await pushSubmits();
       attempt = 0;
       clearTimeout(retryTimer);
       setStatus({ lastError: undefined });
       return 'done';
     } catch (error) {
-      if (isRetryable(error)) {
-        // A conflict is the server's word for the driver ("review the last report first"): show it
-        // while retrying, so the create goes through once the driver has dealt with it.
-        if (error instanceof ApiError && error.status === 409) setStatus({ lastError: describeError(error) });
-        return 'retry';
-      }
+      if (isRetryable(error)) return 'retry';
       setStatus({ lastError: describeError(error) });
       return 'stopped';
     } finally {

@@ -7,7 +7,7 @@ import { createOfflineStore } from './offline-store';
 import { createSyncEngine } from './sync-engine';
 import { useSyncStatus } from './use-sync-status';
 
-const checklist: Checklist = { kind: 'pre_trip', locale: 'en', zones: [], items: [] };
+const checklist: Checklist = { kind: 'pre_trip', locale: 'en', zones: [], stops: [], items: [] };
 const db = openOfflineDb('hook-test');
 
 afterEach(() => db.close());
