@@ -202,6 +202,9 @@ export interface InspectionResponse extends InspectionListItem {
 export interface SubmitInspectionRequest {
   signature: SignatureInput;
   odometer?: number;
+  // When the driver signed on the phone (ISO 8601); a report signed with no signal arrives later.
+  // The server keeps it on the driver's signature and its own clock's arrival time as submittedAt.
+  signedAt?: string;
 }
 
 export interface AcknowledgeRequest {
