@@ -48,6 +48,20 @@ function toOutput(result: Interpretation): Output {
       return result.command === 'language'
         ? { kind: 'command', command: 'language', locale: result.locale }
         : { kind: 'command', command: result.command };
+    case 'fixed':
+      return result.measurement === undefined
+        ? { kind: 'fixed', action: result.action }
+        : {
+            kind: 'fixed',
+            action: result.action,
+            measurement: {
+              quantity: result.measurement.quantity,
+              value: result.measurement.value,
+              unit: result.measurement.unit,
+            },
+          };
+    case 'no_gauge':
+      return { kind: 'no_gauge' };
     case 'unclear':
       return { kind: 'unclear', reason: result.reason };
   }

@@ -9,7 +9,8 @@ export type WordItem = PhraseMatch<WordCategory | undefined>;
 
 export type WordsVerdict =
   | { kind: 'pass' }
-  | { kind: 'defect'; detail?: string }
+  // `span`: where the words about the defect stand in the text, [start, end) in tokens.
+  | { kind: 'defect'; detail?: string; span?: { start: number; end: number } }
   | { kind: 'not_applicable' }
   | { kind: 'unclear'; reason: UnclearReason };
 
@@ -40,7 +41,7 @@ function detailOf(
   items: readonly WordItem[],
   firstProblem: WordItem,
   lx: CompiledLexicon,
-): string | undefined {
+): { detail: string; start: number; end: number } | undefined {
   const contrastBefore = items.filter((item) => item.category?.kind === 'contrast' && item.end <= firstProblem.start);
   let start = contrastBefore.length > 0 ? (contrastBefore[contrastBefore.length - 1]?.end ?? 0) : 0;
   let end = text.tokens.length;
@@ -72,7 +73,7 @@ function detailOf(
   // A bare marker ("defect", "not good") carries no description.
   const onlyMarker = lx.defectMarkers.matchAt(text, start);
   if (onlyMarker && onlyMarker.end === end) return undefined;
-  return detail;
+  return { detail, start, end };
 }
 
 export function classifyWords(text: NormalisedText, allItems: readonly WordItem[], lx: CompiledLexicon): WordsVerdict {
@@ -90,6 +91,8 @@ export function classifyWords(text: NormalisedText, allItems: readonly WordItem[
   let pending: PendingNegator | undefined;
   let lastProblemIndex = -1;
   let trailingNegator = false;
+  // After "I wouldn't say", "no diría": praise is not a pass.
+  let praiseNegated = false;
   let contrastIndex = -1;
   // Something named after "except": "good except the right marker".
   let partAfterContrast = false;
@@ -123,12 +126,17 @@ export function classifyWords(text: NormalisedText, allItems: readonly WordItem[
         }
         return;
       }
+      case 'praise_negator':
+        praiseNegated = true;
+        pending = undefined;
+        return;
       case 'pass': {
         const negates =
-          pending !== undefined &&
-          !pending.afterProblem &&
-          pending.passReachable &&
-          (pending.reach === 'verbal' ? pending.gap <= MAX_PASS_GAP : pending.gap === 0);
+          praiseNegated ||
+          (pending !== undefined &&
+            !pending.afterProblem &&
+            pending.passReachable &&
+            (pending.reach === 'verbal' ? pending.gap <= MAX_PASS_GAP : pending.gap === 0));
         if (negates) {
           problems.push(item);
           lastProblemIndex = index;
@@ -207,17 +215,17 @@ export function classifyWords(text: NormalisedText, allItems: readonly WordItem[
   if (hedged) return { kind: 'unclear', reason: 'hedged' };
   const firstProblem = problems[0];
   if (firstProblem) {
-    const detail = detailOf(text, allItems, firstProblem, lx);
-    return detail === undefined ? { kind: 'defect' } : { kind: 'defect', detail };
+    const found = detailOf(text, allItems, firstProblem, lx);
+    return found === undefined
+      ? { kind: 'defect' }
+      : { kind: 'defect', detail: found.detail, span: { start: found.start, end: found.end } };
   }
   if (notApplicable) return { kind: 'not_applicable' };
   // "Good except the right marker": the part named after the exception is the defect.
   if (contrast && partAfterContrast && !answerAfterContrast && negatedProblems === 0) {
-    const detail = text.surface
-      .slice(items[contrastIndex]?.end ?? 0)
-      .join(' ')
-      .trim();
-    return detail === '' ? { kind: 'defect' } : { kind: 'defect', detail };
+    const start = items[contrastIndex]?.end ?? 0;
+    const detail = text.surface.slice(start).join(' ').trim();
+    return detail === '' ? { kind: 'defect' } : { kind: 'defect', detail, span: { start, end: text.tokens.length } };
   }
   if (contrast) return { kind: 'unclear', reason: 'incomplete' };
   // "Yeah, no": a no left hanging after a good word is not a pass.

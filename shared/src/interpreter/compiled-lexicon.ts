@@ -18,6 +18,7 @@ export type WordCategory =
   | { kind: 'pass' }
   | { kind: 'contrast' }
   | { kind: 'negator'; reach: 'determiner' | 'verbal' }
+  | { kind: 'praise_negator' }
   | { kind: 'post_negator' }
   | { kind: 'conjunction' }
   | { kind: 'part' }
@@ -40,6 +41,13 @@ export interface CompiledLexicon {
   verbalNegatorTokens: ReadonlySet<string>;
   // Tokens after which a misheard number word is taken as a number ("for thirty seconds").
   homophoneTriggers: ReadonlySet<string>;
+  corrections: PhraseMatcher<true>;
+  fixes: PhraseMatcher<'announce' | 'action'>;
+  fixLeadIns: PhraseMatcher<true>;
+  readingLeadInTokens: ReadonlySet<string>;
+  noGauge: PhraseMatcher<true>;
+  articleTokens: ReadonlySet<string>;
+  signOffs: PhraseMatcher<true>;
 }
 
 const LEXICONS: Record<Locale, AnswerLexicon> = { en: EN_LEXICON, es: ES_LEXICON };
@@ -77,6 +85,7 @@ function compile(locale: Locale): CompiledLexicon {
     { category: { kind: 'defect' }, phrases: lx.defect },
     { category: { kind: 'pass' }, phrases: lx.pass },
     { category: { kind: 'contrast' }, phrases: lx.contrast },
+    { category: { kind: 'praise_negator' }, phrases: lx.praiseNegators },
     { category: { kind: 'negator', reach: 'determiner' }, phrases: lx.determinerNegators },
     { category: { kind: 'negator', reach: 'verbal' }, phrases: lx.verbalNegators },
     { category: { kind: 'post_negator' }, phrases: lx.postNegators },
@@ -123,6 +132,16 @@ function compile(locale: Locale): CompiledLexicon {
     passGap: stemSet(lx.passGap, locale),
     verbalNegatorTokens: tokenSet([...lx.verbalNegators, ...lx.determinerNegators], locale),
     homophoneTriggers,
+    corrections: new PhraseMatcher<true>(locale, [{ category: true, phrases: lx.corrections }]),
+    fixes: new PhraseMatcher<'announce' | 'action'>(locale, [
+      { category: 'announce', phrases: lx.fixAnnouncers },
+      { category: 'action', phrases: lx.fixActions },
+    ]),
+    fixLeadIns: new PhraseMatcher<true>(locale, [{ category: true, phrases: lx.fixLeadIns }]),
+    readingLeadInTokens: tokenSet(lx.readingLeadIns, locale),
+    noGauge: new PhraseMatcher<true>(locale, [{ category: true, phrases: lx.noGauge }]),
+    articleTokens: tokenSet(lx.articles, locale),
+    signOffs: new PhraseMatcher<true>(locale, [{ category: true, phrases: lx.signOffs }]),
   };
 }
 

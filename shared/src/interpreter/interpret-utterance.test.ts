@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import type { Expectation, Locale } from '../checklist/index.js';
 import { QUANTITIES, type Quantity } from '../units/index.js';
-import { interpretUtterance } from './interpret-utterance.js';
+import { interpretFix, interpretUtterance } from './interpret-utterance.js';
 import { interpretConfirmation } from './interpret-confirmation.js';
 import { confirmOutOfLimitPrompt, measurementToWords, readBackMeasurement, unclearPrompt } from './read-back.js';
 import { UNCLEAR_REASONS, type Interpretation, type SpokenMeasurement } from './types.js';
@@ -89,8 +89,9 @@ describe('interpretUtterance', () => {
     expect(say('ten degrees', measure('steering_lash'))).toMatchObject({ kind: 'unclear', reason: 'unit_mismatch' });
   });
 
-  it('needs a value on a measure item and good or defect on a check item', () => {
-    expect(say('good', measure('tread_depth'))).toMatchObject({ kind: 'unclear', reason: 'value_needed' });
+  it('takes good on a measured item as a pass checked without a reading, and wants good or defect on a check item', () => {
+    expect(say('good', measure('tread_depth'))).toEqual({ kind: 'answer', answer: 'pass', heard: 'good' });
+    expect(say('todo bien', measure('tire_pressure'), 'es')).toMatchObject({ kind: 'answer', answer: 'pass' });
     expect(say('one ten')).toMatchObject({ kind: 'unclear', reason: 'number_for_check' });
     expect(say('no aplica', measure('tread_depth'), 'es')).toMatchObject({ answer: 'not_applicable' });
   });
@@ -130,6 +131,169 @@ describe('interpretUtterance', () => {
         expect(got.kind === 'answer' && got.answer === 'pass').toBe(false);
       }),
     );
+  });
+});
+
+describe('interpretUtterance: what a driver says at a measured check', () => {
+  it('hears that there is no gauge only where a reading is asked for', () => {
+    for (const text of ['no gauge', "don't have a gauge", 'good, no gauge', 'I do not have a gauge'])
+      expect(say(text, measure('tire_pressure'))).toMatchObject({ kind: 'no_gauge' });
+    for (const text of ['no tengo manómetro', 'no tengo medidor', 'sin manómetro'])
+      expect(say(text, measure('tread_depth'), 'es')).toMatchObject({ kind: 'no_gauge' });
+    // On a check item the gauge itself may be what is missing.
+    expect(say('no gauge')).toMatchObject({ kind: 'answer', answer: 'defect' });
+    expect(say('no gauge but the sidewall is cut', measure('tread_depth'))).toMatchObject({ answer: 'defect' });
+  });
+
+  it('takes the last value after a word that takes one back', () => {
+    expect(say('a little over a quarter, say five sixteenths', measure('tread_depth'))).toMatchObject({
+      kind: 'measurement',
+      measurement: { value: 10, unit: 'in/32', said: { value: 0.3125, unit: 'in' } },
+    });
+    expect(say('one ten, no, one twelve', measure('tire_pressure'))).toMatchObject({ measurement: { value: 112 } });
+    expect(say('five, I mean six', measure('tread_depth'))).toMatchObject({ measurement: { value: 6 } });
+    expect(say('seis, digo siete treintaidosavos', measure('tread_depth'), 'es')).toMatchObject({
+      measurement: { value: 7 },
+    });
+    expect(say('ciento diez, perdón, ciento cinco', measure('tire_pressure'), 'es')).toMatchObject({
+      measurement: { value: 105 },
+    });
+  });
+
+  it('keeps two values without a correcting word unclear', () => {
+    expect(say('five, six', measure('tread_depth'))).toMatchObject({ kind: 'unclear', reason: 'several_values' });
+    expect(say('seis o siete', measure('tread_depth'), 'es')).toMatchObject({ reason: 'several_values' });
+    // "No" with no value after it takes nothing back.
+    expect(say('one ten no leaks', measure('tire_pressure'))).toMatchObject({ measurement: { value: 110 } });
+  });
+});
+
+describe('interpretUtterance: hedged or negated praise', () => {
+  const hedged = {
+    en: [
+      "I wouldn't say it's good",
+      'not too good',
+      'not so good',
+      "it's not great",
+      'could be better',
+      "I don't think it's good",
+      'not exactly fine',
+      'far from good',
+    ],
+    es: [
+      'no está muy bien',
+      'no diría que está bien',
+      'no tan bien',
+      'no creo que esté bien',
+      'no del todo bien',
+      'yo no diría que está bien',
+    ],
+  } as const;
+  for (const locale of ['en', 'es'] as const) {
+    it(`is never a pass in ${locale}`, () => {
+      for (const text of hedged[locale]) {
+        for (const expectation of [check, measure('tread_depth')]) {
+          const got = say(text, expectation, locale);
+          expect(got.kind === 'unclear' || (got.kind === 'answer' && got.answer === 'defect'), text).toBe(true);
+        }
+      }
+    });
+  }
+});
+
+describe('interpretUtterance: commands', () => {
+  it('hears back, resume, repeat and one by one in the ways drivers say them', () => {
+    const heard: [string, Locale, string][] = [
+      ['back up one', 'en', 'back'],
+      ['go back one', 'en', 'back'],
+      ['previous', 'en', 'back'],
+      ['atrás uno', 'es', 'back'],
+      ['regresa uno', 'es', 'back'],
+      ['go on', 'en', 'resume'],
+      ['continue', 'en', 'resume'],
+      ['carry on', 'en', 'resume'],
+      ['sigue', 'es', 'resume'],
+      ['continúa', 'es', 'resume'],
+      ['say again', 'en', 'repeat'],
+      ['come again', 'en', 'repeat'],
+      ['otra vez', 'es', 'repeat'],
+      ['repite', 'es', 'repeat'],
+      ['one by one', 'en', 'one_by_one'],
+      ['item by item', 'en', 'one_by_one'],
+      ['uno por uno', 'es', 'one_by_one'],
+      ['de uno en uno', 'es', 'one_by_one'],
+    ];
+    for (const [text, locale, command] of heard) {
+      expect(say(text, check, locale), text).toMatchObject({ kind: 'command', command });
+      expect(say(text, measure('tread_depth'), locale), text).toMatchObject({ kind: 'command', command });
+    }
+  });
+
+  it('keeps a hesitation alone unclear and a tread separation a defect', () => {
+    for (const [text, locale] of [
+      ['um', 'en'],
+      ['uh', 'en'],
+      ['este', 'es'],
+      ['eh', 'es'],
+    ] as const)
+      expect(say(text, check, locale)).toMatchObject({ kind: 'unclear', reason: 'filler' });
+    expect(say('tread separation')).toMatchObject({ answer: 'defect' });
+  });
+});
+
+describe('fixed on the spot', () => {
+  it('hears a fix with what was done, without the word that announced it', () => {
+    expect(say('fixed')).toEqual({ kind: 'fixed', action: '', heard: 'fixed' });
+    expect(say('fixed it')).toMatchObject({ kind: 'fixed', action: '' });
+    expect(say('corrected, added air', measure('tire_pressure'))).toMatchObject({ kind: 'fixed', action: 'added air' });
+    expect(say('replaced the bulb')).toMatchObject({ kind: 'fixed', action: 'replaced the bulb' });
+    expect(say('okay, I tightened the lug nuts')).toMatchObject({ kind: 'fixed', action: 'tightened the lug nuts' });
+    expect(say('arreglado', check, 'es')).toMatchObject({ kind: 'fixed', action: '' });
+    expect(say('corregido, le puse aire', measure('tire_pressure'), 'es')).toMatchObject({
+      kind: 'fixed',
+      action: 'le puse aire',
+    });
+    expect(say('cambié el foco', check, 'es')).toMatchObject({ kind: 'fixed', action: 'cambié el foco' });
+  });
+
+  it("reads the new reading in the item's quantity", () => {
+    expect(say('corrected, added air, now one ten', measure('tire_pressure'))).toMatchObject({
+      kind: 'fixed',
+      action: 'added air',
+      measurement: { quantity: 'tire_pressure', value: 110 },
+    });
+    expect(say('le puse aire, ahora ciento diez', measure('tire_pressure'), 'es')).toMatchObject({
+      action: 'le puse aire',
+      measurement: { value: 110 },
+    });
+    expect(say('added air, one ten, no, one fifteen', measure('tire_pressure'))).toMatchObject({
+      measurement: { value: 115 },
+    });
+    // A check item has no reading: the number is part of what was done.
+    expect(say('tightened two lug nuts')).toEqual({
+      kind: 'fixed',
+      action: 'tightened two lug nuts',
+      heard: 'tightened two lug nuts',
+    });
+  });
+
+  it('takes a fix that did not happen as a defect and a hedged one as unclear', () => {
+    for (const text of ['not fixed', "couldn't fix it", "I didn't fix it"])
+      expect(say(text)).toMatchObject({ kind: 'answer', answer: 'defect' });
+    expect(say('no lo pude arreglar', check, 'es')).toMatchObject({ answer: 'defect' });
+    expect(say('fixed, probably')).toMatchObject({ kind: 'unclear', reason: 'hedged' });
+  });
+
+  it('is offered to the voice loop after a defect as interpretFix', () => {
+    expect(interpretFix([{ transcript: 'added air, now one twelve' }], 'tire_pressure', 'en')).toMatchObject({
+      kind: 'fixed',
+      action: 'added air',
+      measurement: { value: 112 },
+    });
+    expect(interpretFix([{ transcript: 'fixed' }], undefined, 'en')).toMatchObject({ kind: 'fixed' });
+    expect(interpretFix([{ transcript: 'still leaking' }], undefined, 'en')).toBeUndefined();
+    expect(interpretFix([{ transcript: 'good' }], 'tire_pressure', 'en')).toBeUndefined();
+    expect(interpretFix([], undefined, 'en')).toBeUndefined();
   });
 });
 

@@ -1,9 +1,11 @@
 // Decides what the driver meant from the recogniser's hypotheses. Nothing unclear or negative is a pass.
 import type { Expectation, Locale } from '../checklist/index.js';
 import { normaliseText, type NormalisedText } from '../text/index.js';
+import type { Quantity } from '../units/index.js';
 import { classifyWords, withoutFillers, type WordItem } from './classify-words.js';
 import { compiledLexicon, type CompiledLexicon } from './compiled-lexicon.js';
-import { readMeasurement } from './read-measurement.js';
+import { readFix } from './read-fix.js';
+import { correctedFrom, readMeasurement } from './read-measurement.js';
 import type { Alternative, Interpretation } from './types.js';
 
 // Recognisers return a handful of hypotheses; more than this adds time, not sense.
@@ -11,18 +13,18 @@ const MAX_ALTERNATIVES = 5;
 // A measurement hypothesis this far below the best one does not cast doubt on its value.
 const VALUE_DOUBT_MARGIN = 0.15;
 
-function heardOf(transcript: string, confidence: number | undefined): { heard: string; confidence?: number } {
+export function heardOf(transcript: string, confidence: number | undefined): { heard: string; confidence?: number } {
   return confidence === undefined ? { heard: transcript } : { heard: transcript, confidence };
 }
 
 // A command is the whole utterance, give or take "okay", "please" and "can you".
-function commandOf(
+export function commandOf(
   text: NormalisedText,
   items: readonly WordItem[],
   lx: CompiledLexicon,
   heard: { heard: string; confidence?: number },
-): Interpretation | undefined {
-  let found: Interpretation | undefined;
+): Extract<Interpretation, { kind: 'command' }> | undefined {
+  let found: Extract<Interpretation, { kind: 'command' }> | undefined;
   for (const item of items) {
     const category = item.category;
     if (category?.kind === 'command') found = { kind: 'command', command: category.command, ...heard };
@@ -56,6 +58,47 @@ function leakHeldInWords(text: NormalisedText, lx: CompiledLexicon): boolean {
   return false;
 }
 
+// "No gauge", "no tengo manómetro", alone or beside a pass ("good, no gauge"): the reading was not taken.
+export function saysNoGauge(text: NormalisedText, lx: CompiledLexicon): boolean {
+  const kept: number[] = [];
+  let found = false;
+  for (let i = 0; i < text.tokens.length;) {
+    const match = lx.noGauge.matchAt(text, i);
+    if (match) {
+      found = true;
+      i = match.end;
+    } else {
+      kept.push(i);
+      i += 1;
+    }
+  }
+  if (!found) return false;
+  const rest: NormalisedText = {
+    tokens: kept.map((i) => text.tokens[i] ?? ''),
+    surface: kept.map((i) => text.surface[i] ?? ''),
+    stems: kept.map((i) => text.stems[i] ?? ''),
+    pauseAfter: kept.map((i) => text.pauseAfter[i] ?? false),
+  };
+  const restItems = lx.words.scan(rest);
+  const quiet = restItems.every((item) => {
+    const kind = item.category?.kind;
+    if (kind === 'filler' || kind === 'neutral' || kind === 'part') return true;
+    return rest.tokens.slice(item.start, item.end).every((t) => lx.courtesyTokens.has(t));
+  });
+  return quiet || classifyWords(rest, restItems, lx).kind === 'pass';
+}
+
+// What is said after the last word that takes a value back ("one ten, no, one twelve").
+function spokenFrom(
+  text: NormalisedText,
+  items: readonly WordItem[],
+  quantity: Quantity,
+  lx: CompiledLexicon,
+): string[] {
+  const from = correctedFrom(text, quantity, lx);
+  return items.filter((item) => item.start >= from).flatMap((item) => text.tokens.slice(item.start, item.end));
+}
+
 export function interpretTranscript(
   transcript: string,
   expectation: Expectation,
@@ -73,14 +116,25 @@ export function interpretTranscript(
   const command = commandOf(text, items, lx, heard);
   if (command) return command;
 
+  const quantity = expectation.type === 'measure' ? expectation.quantity : undefined;
+  const fix = readFix(transcript, text, allItems, quantity, lx);
+  if (fix?.kind === 'unclear') return { kind: 'unclear', reason: fix.reason, ...heard };
+  if (fix) return { ...fix, ...heard };
+  // Only where a reading is asked for: on a check item "no gauge" may be the dash gauge missing.
+  if (quantity !== undefined && saysNoGauge(text, lx)) return { kind: 'no_gauge', ...heard };
+
   const verdict = classifyWords(text, allItems, lx);
   if (verdict.kind === 'not_applicable') return { kind: 'answer', answer: 'not_applicable', ...heard };
 
   if (expectation.type === 'measure') {
     if (verdict.kind === 'unclear' && verdict.reason === 'hedged')
       return { kind: 'unclear', reason: 'hedged', ...heard };
-    const spoken = items.flatMap((item) => text.tokens.slice(item.start, item.end));
-    const reading = readMeasurement(spoken, expectation.quantity, locale, lx);
+    const reading = readMeasurement(
+      spokenFrom(text, items, expectation.quantity, lx),
+      expectation.quantity,
+      locale,
+      lx,
+    );
     if (reading.kind === 'measurement') return { kind: 'measurement', measurement: reading.measurement, ...heard };
     if (reading.kind === 'unclear') return { kind: 'unclear', reason: reading.reason, ...heard };
     if (verdict.kind === 'defect')
@@ -92,8 +146,8 @@ export function interpretTranscript(
         ...heard,
       };
     }
-    // "Good" is not a value.
-    if (verdict.kind === 'pass') return { kind: 'unclear', reason: 'value_needed', ...heard };
+    // "Good" on a measured check: checked without a reading; the voice loop decides if one was required.
+    if (verdict.kind === 'pass') return { kind: 'answer', answer: 'pass', ...heard };
     return { kind: 'unclear', reason: verdict.reason, ...heard };
   }
 
@@ -119,7 +173,7 @@ function stanceOf(interpretation: Interpretation): Stance {
 }
 
 // Best first: by confidence where the recogniser gave one, else in the order given.
-function ranked(alternatives: readonly Alternative[]): Alternative[] {
+export function ranked(alternatives: readonly Alternative[]): Alternative[] {
   return alternatives
     .map((alternative, index) => ({ alternative, index }))
     .filter(({ alternative }) => typeof alternative.transcript === 'string')
@@ -174,4 +228,21 @@ export function interpretUtterance(
     }
   }
   return top;
+}
+
+// After a defect: was it fixed on the spot ("fixed", "corrected, added air, now one ten")? The new
+// reading is read in `quantity` when the item measures one. Undefined when the answer is not a fix.
+export function interpretFix(
+  alternatives: readonly Alternative[],
+  quantity: Quantity | undefined,
+  locale: Locale,
+): Extract<Interpretation, { kind: 'fixed' | 'unclear' }> | undefined {
+  const best = ranked(alternatives)[0];
+  if (!best) return undefined;
+  const heard = heardOf(best.transcript, best.confidence);
+  const lx = compiledLexicon(locale);
+  const text = normaliseText(best.transcript, locale);
+  const fix = readFix(best.transcript, text, lx.words.scan(text), quantity, lx);
+  if (!fix) return undefined;
+  return { ...fix, ...heard };
 }

@@ -1,6 +1,6 @@
 // Reads a spoken measurement: the number, the unit said or implied by the item, and whether it is plausible.
 import type { Locale } from '../checklist/index.js';
-import { findNumbers, type NumberSpan } from '../numbers/index.js';
+import { findNumbers, type NumberForm, type NumberOptions, type NumberSpan } from '../numbers/index.js';
 import { stemWord, type NormalisedText } from '../text/index.js';
 import { canonicalUnitOf, toCanonical, UNITS, unitFits, type Quantity, type Unit } from '../units/index.js';
 import type { CompiledLexicon } from './compiled-lexicon.js';
@@ -21,10 +21,37 @@ export const PLAUSIBLE_RANGES: Readonly<Record<Quantity, { min: number; max: num
 
 const LENGTHS: ReadonlySet<Quantity> = new Set(['tread_depth', 'lining_thickness', 'pushrod_stroke', 'steering_lash']);
 const PRESSURES: ReadonlySet<Quantity> = new Set(['tire_pressure', 'air_pressure']);
+
+export function numberOptionsFor(quantity: Quantity): NumberOptions {
+  return { gauge: PRESSURES.has(quantity), bareDenominators: LENGTHS.has(quantity) };
+}
+
+function saysNumber(tokens: readonly string[], quantity: Quantity, lx: CompiledLexicon): boolean {
+  return findNumbers(applyHomophones(tokens, lx), lx.locale, numberOptionsFor(quantity)).some((span) => !span.article);
+}
+
+// Where the value to read starts: after the last word that takes back a value said before it
+// ("one ten, no, one twelve", "seis, digo siete"); 0 when nothing was taken back.
+export function correctedFrom(text: NormalisedText, quantity: Quantity, lx: CompiledLexicon): number {
+  let from = 0;
+  for (let i = 0; i < text.tokens.length; i += 1) {
+    const match = lx.corrections.matchAt(text, i);
+    if (!match) continue;
+    if (
+      saysNumber(text.tokens.slice(from, match.start), quantity, lx) &&
+      saysNumber(text.tokens.slice(match.end), quantity, lx)
+    ) {
+      from = match.end;
+    }
+    i = match.end - 1;
+  }
+  return from;
+}
 const PER_MINUTE: Partial<Record<Unit, Unit>> = { psi: 'psi/min', bar: 'bar/min', kPa: 'kPa/min' };
 
 export type MeasurementReading =
-  | { kind: 'measurement'; measurement: SpokenMeasurement }
+  // `unitSaid`: the driver named the unit, so the value cannot belong to another quantity.
+  | { kind: 'measurement'; measurement: SpokenMeasurement; unitSaid: boolean; form: NumberForm }
   | { kind: 'unclear'; reason: UnclearReason }
   | { kind: 'none' };
 
@@ -125,10 +152,7 @@ export function readMeasurement(
   lx: CompiledLexicon,
 ): MeasurementReading {
   const text = rebuild(applyHomophones(tokens, lx), locale);
-  const spans = findNumbers(text.tokens, locale, {
-    gauge: PRESSURES.has(quantity),
-    bareDenominators: LENGTHS.has(quantity),
-  });
+  const spans = findNumbers(text.tokens, locale, numberOptionsFor(quantity));
   const readings: Reading[] = [];
   let consumedUntil = 0;
   for (let s = 0; s < spans.length; s += 1) {
@@ -201,8 +225,9 @@ export function readMeasurement(
     });
   }
   const first = measurements[0];
-  if (!first) return { kind: 'none' };
+  const firstReading = readings[0];
+  if (!first || !firstReading) return { kind: 'none' };
   if (measurements.some((m) => Math.abs(m.value - first.value) > 1e-6))
     return { kind: 'unclear', reason: 'several_values' };
-  return { kind: 'measurement', measurement: first };
+  return { kind: 'measurement', measurement: first, unitSaid: explicitUnits.size > 0, form: firstReading.form };
 }

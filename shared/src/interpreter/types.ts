@@ -1,5 +1,5 @@
 // What the interpreter hears and what it decides the driver meant.
-import type { Locale } from '../checklist/index.js';
+import type { Expectation, Locale } from '../checklist/index.js';
 import type { CanonicalUnit, Quantity, Unit } from '../units/index.js';
 
 // One hypothesis of the recogniser, best first unless confidences say otherwise.
@@ -19,6 +19,8 @@ export const COMMANDS = [
   'help',
   'where',
   'finish',
+  // Walk the current stop item by item.
+  'one_by_one',
   'language',
 ] as const;
 export type Command = (typeof COMMANDS)[number];
@@ -69,10 +71,44 @@ interface Heard {
   confidence?: number;
 }
 
+// "Fixed", "corrected, added air, now one ten": the last defect was corrected on the spot.
+export interface SpokenFix {
+  // What was done, in the driver's words, without the word that announced the fix ("added air").
+  action: string;
+  measurement?: SpokenMeasurement;
+}
+
 export type Interpretation =
+  // A pass on a measured check without a value is a pass checked without a reading.
   | ({ kind: 'answer'; answer: 'pass' | 'not_applicable' } & Heard)
   | ({ kind: 'answer'; answer: 'defect'; detail?: string } & Heard)
   | ({ kind: 'measurement'; measurement: SpokenMeasurement } & Heard)
+  | ({ kind: 'command'; command: Exclude<Command, 'language'> } & Heard)
+  | ({ kind: 'command'; command: 'language'; locale: Locale } & Heard)
+  | ({ kind: 'fixed' } & SpokenFix & Heard)
+  // "No gauge": a required reading the driver could not take.
+  | ({ kind: 'no_gauge' } & Heard)
+  | ({ kind: 'unclear'; reason: UnclearReason } & Partial<Heard>);
+
+// An item of a stop as the interpreter needs it: its key, the words that point at it, what it expects.
+export interface StopItemRef {
+  key: string;
+  names: readonly string[];
+  expects: Expectation;
+}
+
+// What one answer at a stop says of each of its items. Items not marked pass ("good", "good except
+// the hub is leaking", "defect, chafed air line" all pass the items they do not name).
+export type StopMark =
+  | { itemKey: string; answer: 'defect'; detail: string }
+  | { itemKey: string; answer: 'not_applicable' }
+  | { itemKey: string; answer: 'measurement'; measurement: SpokenMeasurement };
+
+export type StopInterpretation =
+  | ({ kind: 'stop'; marks: StopMark[] } & Heard)
+  // A problem the answer does not tie to one item: candidates are the items it might be (none, or several).
+  | ({ kind: 'which'; detail: string; candidates: string[] } & Heard)
+  | ({ kind: 'fixed' } & SpokenFix & Heard)
   | ({ kind: 'command'; command: Exclude<Command, 'language'> } & Heard)
   | ({ kind: 'command'; command: 'language'; locale: Locale } & Heard)
   | ({ kind: 'unclear'; reason: UnclearReason } & Partial<Heard>);

@@ -74,3 +74,13 @@ export function normaliseText(text: string, locale: Locale): NormalisedText {
   }
   return { tokens, surface, stems: tokens.map((token) => stemWord(token, locale)), pauseAfter };
 }
+
+// The tokens [start, end) of a normalised text, as a text of their own.
+export function sliceText(text: NormalisedText, start: number, end: number): NormalisedText {
+  return {
+    tokens: text.tokens.slice(start, end),
+    surface: text.surface.slice(start, end),
+    stems: text.stems.slice(start, end),
+    pauseAfter: text.pauseAfter.slice(start, end),
+  };
+}

@@ -32,6 +32,15 @@ describe('interpreter corpus', () => {
     const kinds = new Set(
       [...CORPUS.en, ...CORPUS.es].map((e) => (e.want.kind === 'answer' ? e.want.answer : e.want.kind)),
     );
-    expect([...kinds].sort()).toEqual(['command', 'defect', 'measurement', 'not_applicable', 'pass', 'unclear']);
+    expect([...kinds].sort()).toEqual([
+      'command',
+      'defect',
+      'fixed',
+      'measurement',
+      'no_gauge',
+      'not_applicable',
+      'pass',
+      'unclear',
+    ]);
   });
 });

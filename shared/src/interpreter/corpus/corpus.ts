@@ -8,6 +8,9 @@ export type CorpusWant =
   | { kind: 'answer'; answer: 'pass' | 'defect' | 'not_applicable' }
   | { kind: 'command'; command: Command; locale?: Locale }
   | { kind: 'measurement'; value: number }
+  // A fix on the spot, with its new reading where one was said.
+  | { kind: 'fixed'; value?: number }
+  | { kind: 'no_gauge' }
   | { kind: 'unclear' };
 
 export interface CorpusEntry {
@@ -21,6 +24,10 @@ export const CORPUS: Readonly<Record<Locale, readonly CorpusEntry[]>> = {
   es: es as CorpusEntry[],
 };
 
+function sameValue(got: number, want: number): boolean {
+  return Math.abs(got - want) <= 0.01 + Math.abs(want) * 1e-4;
+}
+
 export function meetsWant(got: Interpretation, want: CorpusWant): boolean {
   switch (want.kind) {
     case 'answer':
@@ -30,9 +37,14 @@ export function meetsWant(got: Interpretation, want: CorpusWant): boolean {
       return want.locale === undefined || (got.command === 'language' && got.locale === want.locale);
     case 'measurement':
       // Conversions from millimetres and bar are compared to 0.01 of the canonical unit.
-      return (
-        got.kind === 'measurement' && Math.abs(got.measurement.value - want.value) <= 0.01 + Math.abs(want.value) * 1e-4
-      );
+      return got.kind === 'measurement' && sameValue(got.measurement.value, want.value);
+    case 'fixed':
+      if (got.kind !== 'fixed') return false;
+      return want.value === undefined
+        ? got.measurement === undefined
+        : got.measurement !== undefined && sameValue(got.measurement.value, want.value);
+    case 'no_gauge':
+      return got.kind === 'no_gauge';
     case 'unclear':
       return got.kind === 'unclear';
   }

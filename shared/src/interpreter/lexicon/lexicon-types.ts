@@ -53,4 +53,22 @@ export interface AnswerLexicon {
   noLeak: readonly string[];
   // Misheard number words, replaced only before a fraction word or a unit ("for thirty seconds").
   homophones: Readonly<Record<string, string>>;
+  // "I wouldn't say", "no diría": whatever praise follows them is not a pass.
+  praiseNegators: readonly string[];
+  // Words that take back a value just said: "one ten, no, one twelve", "seis, digo siete".
+  corrections: readonly string[];
+  // Words that announce a fix and are left out of what was done ("fixed", "corregido").
+  fixAnnouncers: readonly string[];
+  // Words that say what was done and so start the fix's action ("added air", "cambié el foco").
+  fixActions: readonly string[];
+  // May lead a fix's announcer or action ("I fixed it", "ya lo arreglé").
+  fixLeadIns: readonly string[];
+  // Words between a fix's action and its new reading ("now", "ahora quedó en"), left out of both.
+  readingLeadIns: readonly string[];
+  // A required reading the driver could not take ("no gauge", "no tengo manómetro").
+  noGauge: readonly string[];
+  // Articles left off the front of a defect's words ("the hub is leaking" is "hub is leaking").
+  articles: readonly string[];
+  // Words that may follow "end note" without making it mid-sentence ("please", "gracias").
+  signOffs: readonly string[];
 }
