@@ -118,6 +118,20 @@ describe('buildChecklist on random valid vehicles', () => {
     );
   });
 
+  it('groups every item into one contiguous stop, the same stops in every locale', () => {
+    fc.assert(
+      fc.property(combinationArb, fc.constantFrom(...INSPECTION_KINDS), (vehicles, kind) => {
+        const en = buildChecklist(vehicles, kind, 'en');
+        expect(en.stops.flatMap((stop) => stop.itemKeys)).toEqual(en.items.map((item) => item.key));
+        expect(new Set(en.stops.map((stop) => stop.key)).size).toBe(en.stops.length);
+        const es = buildChecklist(vehicles, kind, 'es');
+        expect(es.stops.map((stop) => stop.key)).toEqual(en.stops.map((stop) => stop.key));
+        for (const stop of [...en.stops, ...es.stops]) expect(stop.prompt).not.toMatch(/[{}]|\s{2}|undefined/);
+      }),
+      { numRuns: 100 },
+    );
+  });
+
   it('judges every measurement item with the context it carries', () => {
     fc.assert(
       fc.property(combinationArb, (vehicles) => {

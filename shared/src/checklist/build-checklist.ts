@@ -26,6 +26,7 @@ import {
   type ZoneKey,
 } from './types.js';
 import { fillTemplate, formatMeasure, verdictWords } from './measure-words.js';
+import { capitalise, itemNames, renderStops, stopKey, stopKindOf, type StopPlace } from './stops.js';
 import { checklistWords, type AreaWordId, type ChecklistWords, type ItemWordId, type PartWordId } from './words.js';
 
 // A checklist cannot be built from this input; problems name the vehicle fields at fault.
@@ -61,6 +62,8 @@ interface Draft {
   category: ItemCategory;
   scope: Scope;
   area?: AreaWordId;
+  // Left, right or rear of the unit, for items placed by area.
+  placement?: 'left' | 'right' | 'rear';
   wheel?: { axleIndex: number; side: Side; dual?: Dual; part: PartWordId };
   measure?: { quantity: Quantity; context: MeasurementContext };
 }
@@ -112,14 +115,12 @@ const FIFTH_WHEEL_ITEMS: readonly ItemWordId[] = [
 
 const MAX_UNITS = 4;
 
-function capitalise(text: string): string {
-  return text.charAt(0).toLocaleUpperCase() + text.slice(1);
-}
-
 class ChecklistBuilder {
   readonly items: ChecklistItem[] = [];
+  // Each item's word id and stop, for grouping the stops once the items are in walk order.
+  readonly placed = new Map<string, { id: ItemWordId; place: StopPlace }>();
   private readonly words: ChecklistWords;
-  private readonly unitLabels: string[];
+  readonly unitLabels: string[];
   private readonly combination: 'single' | 'combination';
   // Many wheel ends share a limit: say each one once per build.
   private readonly limitTexts = new Map<string, string | undefined>();
@@ -175,7 +176,7 @@ class ChecklistBuilder {
     measure?: Draft['measure'],
   ): void {
     const key = `${this.unitKey(unitIndex)}.${placement ? `${placement}.` : ''}${id}`;
-    this.add({ key, zone, unitIndex, id, category, scope, area, measure });
+    this.add({ key, zone, unitIndex, id, category, scope, area, placement, measure });
   }
 
   private powerUnit(unitIndex: number): void {
@@ -386,6 +387,19 @@ class ChecklistBuilder {
     return text;
   }
 
+  private stopPlace(draft: Draft): StopPlace {
+    const kind = stopKindOf(draft.id, {
+      trailerZone: draft.zone === 'trailer',
+      placement: draft.placement,
+      dual: draft.wheel?.dual !== undefined,
+    });
+    const place: StopPlace = { kind, unitKey: this.unitKey(draft.unitIndex) };
+    const side = draft.wheel?.side ?? (draft.placement === 'rear' ? undefined : draft.placement);
+    if (side && 'sides' in this.words.stops.kinds[kind]) place.side = side;
+    if (draft.wheel) place.axleIndex = draft.wheel.axleIndex;
+    return place;
+  }
+
   private render(draft: Draft): ChecklistItem {
     const words = this.words;
     const itemWords = words.items[draft.id];
@@ -419,9 +433,13 @@ class ChecklistBuilder {
     if (draft.measure) limit = this.limitText(draft.measure);
     const values = { position: positionLabel, where, limit };
     const vehicle = this.vehicles[draft.unitIndex] as ChecklistVehicle;
+    const place = this.stopPlace(draft);
+    this.placed.set(draft.key, { id: draft.id, place });
     const item: ChecklistItem = {
       key: draft.key,
       zone: draft.zone,
+      stopKey: stopKey(place),
+      ...itemNames(itemWords, draft.wheel?.dual, words.stops),
       unitIndex: draft.unitIndex,
       unitKind: vehicle.kind,
       category: draft.category,
@@ -487,5 +505,10 @@ export function buildChecklist(vehicles: readonly ChecklistVehicle[], kind: Insp
     .map((item, index) => ({ item, index }))
     .sort((a, b) => (order.get(a.item.zone) ?? 0) - (order.get(b.item.zone) ?? 0) || a.index - b.index)
     .map(({ item }) => item);
-  return { kind, locale, zones, items };
+  const placed = items.map((item) => ({
+    item,
+    ...(builder.placed.get(item.key) as { id: ItemWordId; place: StopPlace }),
+  }));
+  const stops = renderStops(placed, words, builder.unitLabels);
+  return { kind, locale, zones, stops, items };
 }

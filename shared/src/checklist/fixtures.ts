@@ -1,5 +1,6 @@
 // An invented demo combination for tests: Juniper Ridge Freight's tractor 4127 and dry van 5310.
 import type { VehicleInput } from '../vehicle/index.js';
+import type { ChecklistItem, ChecklistStop } from './types.js';
 
 // A 3-axle tractor: power steering, steer brakes type 20 long stroke, drives type 30 long stroke.
 export function sampleTractor(): VehicleInput {
@@ -68,4 +69,17 @@ export function sampleTrailer(): VehicleInput {
 // The tractor and its trailer, in walk-around order (power unit first).
 export function sampleCombination(): VehicleInput[] {
   return [sampleTractor(), sampleTrailer()];
+}
+
+// One stop for each item, for a hand-built checklist in a test that walks items one by one.
+export function stopPerItem(items: readonly ChecklistItem[]): ChecklistStop[] {
+  return items.map((item) => ({
+    key: item.stopKey,
+    zone: item.zone,
+    unitIndex: item.unitIndex,
+    label: item.positionLabel,
+    prompt: item.prompt,
+    shortPrompt: item.shortPrompt,
+    itemKeys: [item.key],
+  }));
 }

@@ -8,8 +8,22 @@ export type Locale = (typeof LOCALES)[number];
 export const INSPECTION_KINDS = ['pre_trip', 'post_trip', 'en_route', 'practice'] as const;
 export type InspectionKind = (typeof INSPECTION_KINDS)[number];
 
-// What an item expects the driver to say.
+// What an item expects the driver to say. A measured check may still be answered "good": a pass
+// checked without a reading, unless the organisation requires the reading (see READING_RULES).
 export type Expectation = { type: 'check' } | { type: 'measure'; quantity: Quantity };
+
+// Readings an organisation may require on every walk-around; by default none. Elsewhere a measured
+// check answered "good" is a pass checked by eye, by hand or by a thumper, recorded as such.
+export const READING_RULES = [
+  'steer_tread_depth',
+  'tread_depth',
+  'tire_pressure',
+  'pushrod_stroke',
+  'lining_thickness',
+  'steering_lash',
+  'air_brake_test',
+] as const;
+export type ReadingRule = (typeof READING_RULES)[number];
 
 export const CHAMBER_CODES = [
   'type-6',
@@ -117,6 +131,13 @@ export interface ChecklistItem {
   // Stable, unique, locale-independent, e.g. "u1.axle2.right.outer.tire.tread".
   key: string;
   zone: string;
+  // The stop the item is checked at, with the others the trade checks together there.
+  stopKey: string;
+  // What the stop's prompt calls it ("hub", "outer tire inflation").
+  name: string;
+  // Words a driver may use to point at it inside its stop ("hub", "hub seal", "hubcap"): the
+  // interpreter finds which item "good except the hub is leaking" is about.
+  names: string[];
   // Which vehicle of the combination, 0 for the first.
   unitIndex: number;
   unitKind: VehicleKind;
@@ -140,11 +161,30 @@ export interface ChecklistZone {
   title: string;
 }
 
+// One place the driver stops at and checks several items together (a wheel end, a brake, the
+// lamps at the rear). One answer covers the stop; every item still gets its own result.
+export interface ChecklistStop {
+  // Stable and locale-independent, e.g. "u1.axle1.left.wheel".
+  key: string;
+  zone: string;
+  unitIndex: number;
+  // Shown on the screen: "Tractor, axle 1, left wheel".
+  label: string;
+  // Said at the stop, position once: "Axle 1, left wheel: tire inflation, condition and tread, rim, lug nuts, hub."
+  prompt: string;
+  // Said again after a silence or once the driver knows the drill: "Axle 1, left wheel?"
+  shortPrompt: string;
+  // The stop's items in the order the stop names them; contiguous in Checklist.items.
+  itemKeys: string[];
+}
+
 export interface Checklist {
   kind: InspectionKind;
   locale: Locale;
   // Zones in walk-around route order; items are in the same order.
   zones: ChecklistZone[];
+  // Stops in walk-around order; every item belongs to exactly one.
+  stops: ChecklistStop[];
   items: ChecklistItem[];
 }
 
@@ -161,12 +201,33 @@ export interface MeasurementValue {
   unit: string;
 }
 
+// A measured check answered without a value: 'visual' when the reading was not required (checked by
+// eye, by hand or by a thumper); 'no_gauge' when the organisation requires it and there was no gauge.
+export const NO_READING_REASONS = ['visual', 'no_gauge'] as const;
+export type NoReadingReason = (typeof NO_READING_REASONS)[number];
+
+// A defect the driver corrected during the inspection (air added, bulb replaced). It stays on the
+// report, opens no shop defect and does not put the unit out of service.
+export interface SpotFix {
+  // What was done, in the driver's words ("added air").
+  action: string;
+  // The new reading where one applies; it must be within its limit for the fix to count.
+  measurement?: MeasurementValue;
+  verdict?: Verdict;
+  heard?: string;
+  at: string;
+}
+
 // One answered item, as the client records it and the server stores it.
 export interface ItemResult {
   itemKey: string;
   answer: Answer;
   measurement?: MeasurementValue;
   verdict?: Verdict;
+  // Only on a measured check passed without a value.
+  noReading?: NoReadingReason;
+  // Only on a defect corrected on the spot.
+  fixed?: SpotFix;
   // What the driver said about a defect.
   detail?: string;
   heard?: string;

@@ -2,11 +2,17 @@ import { describe, expect, it } from 'vitest';
 import { fillTemplate, formatMeasure, verdictWords } from './measure-words.js';
 import { checklistWords } from './words.js';
 
+// Lists of words a driver may say (an item's names, the words for an outer or inner tire): each
+// language has as many as it uses, so they are compared as whole lists, not entry by entry.
+const SPOKEN_LISTS = /^(items\.[\w.]+\.names|stops\.duals\.\w+)$/;
+
 // Every string of a words file with its path, to compare the two languages leaf by leaf.
 function leaves(value: unknown, path = ''): Map<string, string> {
   const out = new Map<string, string>();
   if (typeof value === 'string') {
     out.set(path, value);
+  } else if (Array.isArray(value) && SPOKEN_LISTS.test(path)) {
+    out.set(path, value.join(' | '));
   } else if (Array.isArray(value)) {
     value.forEach((entry, index) => leaves(entry, `${path}[${index}]`).forEach((v, k) => out.set(k, v)));
   } else if (value && typeof value === 'object') {
@@ -16,7 +22,7 @@ function leaves(value: unknown, path = ''): Map<string, string> {
   return out;
 }
 
-const placeholders = (text: string) => [...text.matchAll(/\{(\w+)\}/g)].map((m) => m[1]).sort();
+const placeholders = (text: string) => [...new Set([...text.matchAll(/\{(\w+)\}/g)].map((m) => m[1]))].sort();
 
 describe('checklist words', () => {
   const en = leaves({ ...checklistWords('en'), ...verdictWords('en') });
@@ -32,6 +38,16 @@ describe('checklist words', () => {
   it('uses the same placeholders in both languages', () => {
     for (const [path, text] of en) {
       expect(placeholders(es.get(path) ?? ''), path).toEqual(placeholders(text));
+    }
+  });
+
+  it('gives every item a name and words to point at it, in each language its own', () => {
+    for (const locale of ['en', 'es'] as const) {
+      for (const [id, item] of Object.entries(checklistWords(locale).items)) {
+        expect(item.name.trim(), `${locale} ${id}`).not.toBe('');
+        expect(item.names.length, `${locale} ${id}`).toBeGreaterThan(0);
+        for (const name of item.names) expect(name, `${locale} ${id}`).toMatch(/^[^A-Z]*\S$/);
+      }
     }
   });
 

@@ -1,5 +1,11 @@
 // A small hand-built tractor walk-around (invented fleet), independent of the checklist generator's words.
-import type { Checklist, ChecklistItem, Locale, WheelPosition } from '../checklist/index.js';
+import {
+  stopPerItem,
+  type Checklist,
+  type ChecklistItem,
+  type Locale,
+  type WheelPosition,
+} from '../checklist/index.js';
 
 interface Draft {
   key: string;
@@ -144,29 +150,35 @@ const ZONES = [
 ];
 
 export function handBuiltChecklist(locale: Locale): Checklist {
+  const items = DRAFTS.map((draft) => {
+    const item: ChecklistItem = {
+      key: `u1.${draft.key}`,
+      zone: draft.zone,
+      // One stop per item: narration scoring walks items, not stops.
+      stopKey: `u1.${draft.key}`,
+      name: draft.title[locale],
+      names: [draft.title[locale].toLocaleLowerCase()],
+      unitIndex: 0,
+      unitKind: 'tractor',
+      category: draft.category,
+      safety: ['brakes', 'tires', 'wheels', 'steering'].includes(draft.category),
+      title: draft.title[locale],
+      positionLabel: draft.label[locale],
+      prompt: draft.title[locale],
+      shortPrompt: draft.title[locale],
+      expects: { type: 'check' },
+      points: draft.points?.[locale] ?? [],
+    };
+    if (draft.position) item.position = draft.position;
+    if (draft.axle) item.limitContext = { axle: draft.axle };
+    return item;
+  });
   return {
     kind: 'practice',
     locale,
     zones: ZONES.map((zone) => ({ key: zone.key, title: zone[locale] })),
-    items: DRAFTS.map((draft) => {
-      const item: ChecklistItem = {
-        key: `u1.${draft.key}`,
-        zone: draft.zone,
-        unitIndex: 0,
-        unitKind: 'tractor',
-        category: draft.category,
-        safety: ['brakes', 'tires', 'wheels', 'steering'].includes(draft.category),
-        title: draft.title[locale],
-        positionLabel: draft.label[locale],
-        prompt: draft.title[locale],
-        shortPrompt: draft.title[locale],
-        expects: { type: 'check' },
-        points: draft.points?.[locale] ?? [],
-      };
-      if (draft.position) item.position = draft.position;
-      if (draft.axle) item.limitContext = { axle: draft.axle };
-      return item;
-    }),
+    stops: stopPerItem(items),
+    items,
   };
 }
 

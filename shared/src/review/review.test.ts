@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { Checklist, ChecklistItem, ItemResult } from '../checklist/index.js';
+import { stopPerItem, type Checklist, type ChecklistItem, type ItemResult } from '../checklist/index.js';
 import { RUSHED_RULE, summarizeInspection } from '../summary/index.js';
 import {
   RECURRING_RULE,
@@ -14,6 +14,9 @@ function item(key: string, zone: string): ChecklistItem {
   return {
     key,
     zone,
+    stopKey: key,
+    name: key,
+    names: [key],
     unitIndex: 0,
     unitKind: 'tractor',
     category: 'lights',
@@ -28,6 +31,13 @@ function item(key: string, zone: string): ChecklistItem {
 }
 
 // An invented three-zone tractor walk-around.
+const checklistItems: ChecklistItem[] = [
+  item('u0.front.a', 'front'),
+  item('u0.front.b', 'front'),
+  item('u0.left.a', 'left'),
+  item('u0.left.b', 'left'),
+  item('u0.cab.a', 'cab'),
+];
 const checklist: Checklist = {
   kind: 'pre_trip',
   locale: 'en',
@@ -36,13 +46,8 @@ const checklist: Checklist = {
     { key: 'left', title: 'Left side' },
     { key: 'cab', title: 'In the cab' },
   ],
-  items: [
-    item('u0.front.a', 'front'),
-    item('u0.front.b', 'front'),
-    item('u0.left.a', 'left'),
-    item('u0.left.b', 'left'),
-    item('u0.cab.a', 'cab'),
-  ],
+  stops: stopPerItem(checklistItems),
+  items: checklistItems,
 };
 
 const START = '2026-11-30T06:00:00.000Z';
@@ -103,10 +108,8 @@ describe('walkedRoute: the route as zones in the order walked', () => {
 });
 
 describe('rushedFlag: why the summary flagged a walk-around (rule in ../summary, our own practice)', () => {
-  const manyItems: Checklist = {
-    ...checklist,
-    items: Array.from({ length: 12 }, (_, i) => item(`u0.front.i${i}`, 'front')),
-  };
+  const twelve = Array.from({ length: 12 }, (_, i) => item(`u0.front.i${i}`, 'front'));
+  const manyItems: Checklist = { ...checklist, stops: stopPerItem(twelve), items: twelve };
 
   it('says nothing when the walk-around was not rushed', () => {
     const results = manyItems.items.map((it, i) => answer(it.key, (i + 1) * 6));

@@ -1,11 +1,14 @@
 import { describe, expect, it } from 'vitest';
-import type { Checklist, ChecklistItem, ItemResult } from '../checklist/index.js';
+import { stopPerItem, type Checklist, type ChecklistItem, type ItemResult } from '../checklist/index.js';
 import { RUSHED_RULE, summarizeInspection } from './summarize-inspection.js';
 
 function item(key: string, zone: string, overrides: Partial<ChecklistItem> = {}): ChecklistItem {
   return {
     key,
     zone,
+    stopKey: key,
+    name: key,
+    names: [key],
     unitIndex: 0,
     unitKind: 'tractor',
     category: 'lights',
@@ -21,6 +24,18 @@ function item(key: string, zone: string, overrides: Partial<ChecklistItem> = {})
 }
 
 // An invented three-zone tractor walk-around.
+const checklistItems: ChecklistItem[] = [
+  item('front.headlights', 'front'),
+  item('front.steer.left.tread', 'front', {
+    category: 'tires',
+    safety: true,
+    expects: { type: 'measure', quantity: 'tread_depth' },
+    position: { unitIndex: 0, axleIndex: 0, side: 'left' },
+  }),
+  item('left.mudflap', 'left', { category: 'body' }),
+  item('left.slack', 'left', { category: 'brakes', safety: true }),
+  item('cab.horn', 'cab', { category: 'horn' }),
+];
 const checklist: Checklist = {
   kind: 'pre_trip',
   locale: 'en',
@@ -29,18 +44,8 @@ const checklist: Checklist = {
     { key: 'left', title: 'Left side' },
     { key: 'cab', title: 'In the cab' },
   ],
-  items: [
-    item('front.headlights', 'front'),
-    item('front.steer.left.tread', 'front', {
-      category: 'tires',
-      safety: true,
-      expects: { type: 'measure', quantity: 'tread_depth' },
-      position: { unitIndex: 0, axleIndex: 0, side: 'left' },
-    }),
-    item('left.mudflap', 'left', { category: 'body' }),
-    item('left.slack', 'left', { category: 'brakes', safety: true }),
-    item('cab.horn', 'cab', { category: 'horn' }),
-  ],
+  stops: stopPerItem(checklistItems),
+  items: checklistItems,
 };
 
 const START = Date.parse('2026-03-02T06:00:00.000Z');
@@ -246,10 +251,22 @@ describe('summarizeInspection: gaps and timing', () => {
 });
 
 describe('summarizeInspection: rushed walk-around (our own practice)', () => {
+  // A checklist of count items in one zone.
+  function oneZone(count: number): Checklist {
+    const items = Array.from({ length: count }, (_, i) => item(`zone.item${i}`, 'zone'));
+    return {
+      kind: 'pre_trip',
+      locale: 'en',
+      zones: [{ key: 'zone', title: 'Zone' }],
+      stops: stopPerItem(items),
+      items,
+    };
+  }
+
   // Twenty items in one zone, answered every gapSeconds after the start.
   function evenlyPaced(gapSeconds: number, count = 20): { list: Checklist; results: ItemResult[] } {
-    const items = Array.from({ length: count }, (_, i) => item(`zone.item${i}`, 'zone'));
-    const list: Checklist = { kind: 'pre_trip', locale: 'en', zones: [{ key: 'zone', title: 'Zone' }], items };
+    const list = oneZone(count);
+    const { items } = list;
     const results = items.map((it, i) => answered(it.key, (i + 1) * gapSeconds));
     return { list, results };
   }
@@ -271,8 +288,8 @@ describe('summarizeInspection: rushed walk-around (our own practice)', () => {
 
   it('flags a walk-around shorter than the minimum for its item count even with a long pause', () => {
     // Nineteen answers 1.5 s apart then a long pause: the median is fine, the whole is too short.
-    const items = Array.from({ length: 20 }, (_, i) => item(`zone.item${i}`, 'zone'));
-    const list: Checklist = { kind: 'pre_trip', locale: 'en', zones: [{ key: 'zone', title: 'Zone' }], items };
+    const list = oneZone(20);
+    const { items } = list;
     const gaps = [...Array.from({ length: 9 }, () => 1.5), ...Array.from({ length: 11 }, () => 3.5)];
     let t = 0;
     const results = items.map((it, i) => answered(it.key, (t += gaps[i]!)));
