@@ -244,8 +244,13 @@ function judge(applied: AppliedLimit, value: number): Judged {
   const strict = kind === 'more_than' || kind === 'less_than';
   const passes = strict ? distance > EPSILON : distance >= -EPSILON;
   let verdict: Verdict = 'ok';
-  if (!passes) verdict = 'out_of_limit';
-  else if (distance <= row.nearMargin + EPSILON) verdict = 'near_limit';
+  if (!passes) {
+    // A target (a tire's spec) missed by no more than its tolerance only wants topping up.
+    verdict = row.tolerance !== undefined && -distance <= row.tolerance + EPSILON ? 'near_limit' : 'out_of_limit';
+  } else if (row.nearMargin > 0 && distance <= row.nearMargin + EPSILON) {
+    // A zero margin has nothing to warn near, not even the limit itself.
+    verdict = 'near_limit';
+  }
   return { applied, verdict, value, distance };
 }
 
@@ -255,7 +260,14 @@ function sayVerdict(judged: Judged, quantity: Quantity, context: MeasurementCont
   const unit = canonicalUnitOf(quantity);
   const minimum = kind === 'at_least' || kind === 'more_than';
   let template: string;
-  if (judged.verdict === 'out_of_limit') {
+  if (row.tolerance !== undefined) {
+    template =
+      judged.verdict === 'ok'
+        ? words.say.ok_target
+        : judged.verdict === 'near_limit'
+          ? words.say.near_target
+          : words.say.out_target;
+  } else if (judged.verdict === 'out_of_limit') {
     template =
       Math.abs(judged.distance) <= EPSILON ? words.say.out_at : minimum ? words.say.out_min : words.say.out_max;
   } else if (judged.verdict === 'near_limit') {

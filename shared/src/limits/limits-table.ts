@@ -47,6 +47,9 @@ export interface LimitRow {
   bounds: readonly LimitBound[];
   // Our own practice: a passing value this close to a bound is "near_limit" (canonical units).
   nearMargin: number;
+  // A target the driver fills to rather than a floor: short of it by no more than this is
+  // "near_limit" (top it up when you can), further short is out of limit; at or past it is ok.
+  tolerance?: number;
   basis: LimitBasis;
   source: string;
 }
@@ -56,8 +59,9 @@ export interface LimitRow {
 export const NEAR_MARGINS = {
   // One 32nd of tread.
   tread_depth: 1,
-  // About the reading error of a hand-held tire gauge or a dash air gauge.
-  tire_pressure: 2,
+  // Tire pressure has none: its spec is a target (see TIRE_PRESSURE_TOLERANCE_PSI), and any
+  // pressure from the spec up to the sidewall maximum is fine.
+  tire_pressure: 0,
   air_pressure: 2,
   // One 32nd of an inch of lining.
   lining_thickness: 1 / 32,
@@ -121,6 +125,10 @@ export const POWER_LASH_16_OTHER_TEXT_IN = 4.5;
 // says 55 psi. We use 60 psi: it is the vehicle standard itself and the stricter figure.
 export const LOW_AIR_WARNING_LIMIT_PSI = 60;
 export const LOW_AIR_WARNING_OTHER_TEXT_PSI = 55;
+
+// How far under its cold-inflation spec a tire may read and still only want topping up: about the
+// reading error of a hand-held gauge plus the drop of a cool morning. Common practice, not a published figure.
+export const TIRE_PRESSURE_TOLERANCE_PSI = 3;
 
 export const LIMITS: readonly LimitRow[] = [
   // Tread depth, 32nds of an inch, in a major groove.
@@ -270,7 +278,8 @@ export const LIMITS: readonly LimitRow[] = [
     source: '49 CFR 393.209(b)(2): 30 degrees of rotation, power steering',
   },
 
-  // Tire pressure, psi, cold.
+  // Tire pressure, psi, cold. The spec is the target the driver fills to: a few psi under it is
+  // topped up when convenient, further under is a defect the driver may fix at the air line.
   {
     id: 'tire_pressure.spec',
     quantity: 'tire_pressure',
@@ -278,6 +287,7 @@ export const LIMITS: readonly LimitRow[] = [
     when: {},
     bounds: [{ kind: 'at_least', value: { fromContext: 'specPsi' } }],
     nearMargin: NEAR_MARGINS.tire_pressure,
+    tolerance: TIRE_PRESSURE_TOLERANCE_PSI,
     basis: 'published',
     source: "49 CFR 393.75(i): not below the vehicle's cold-inflation spec",
   },
