@@ -20,3 +20,11 @@ export {
   type ListenRecord,
 } from './scripted-engine';
 export { chooseSpeechEngine, type ChooseSpeechEngineOptions } from './choose-speech-engine';
+export {
+  createOfflineNoticeOnce,
+  isOnline,
+  listeningUnavailable,
+  OFFLINE_SPEECH_NOTICE,
+  recognitionNeedsNetwork,
+  useOnline,
+} from './offline-speech';

@@ -231,6 +231,13 @@ export class WebSpeechEngine implements SpeechEngine {
     finish();
   }
 
+  // Whether this browser can recognise the language on the phone itself (installed, no download):
+  // with no signal, only then does listening work.
+  async recognisesOffline(locale: Locale): Promise<boolean> {
+    const Recognition = this.Recognition;
+    return Recognition ? this.onDeviceAvailable(Recognition, this.tags[locale]) : false;
+  }
+
   listen(options: ListenOptions): Promise<ListenResult> {
     this.abort();
     const { locale } = options;
