@@ -317,3 +317,174 @@ describe('summarizeInspection: rushed walk-around (our own practice)', () => {
     expect(summary.rushed.reasons).toEqual(['median_gap']);
   });
 });
+
+describe('summarizeInspection: fixed on the spot', () => {
+  // A steer tire's pressure and a tail lamp, as a driver fixes them at the air line and with a spare bulb.
+  const pressureItem = item('front.steer.left.pressure', 'front', {
+    category: 'tires',
+    safety: true,
+    expects: { type: 'measure', quantity: 'tire_pressure' },
+    limitContext: { axle: 'steer', specPsi: 110, sidewallMaxPsi: 120 },
+  });
+  const items = [pressureItem, item('left.tail', 'left'), item('cab.horn', 'cab', { category: 'horn' })];
+  const list: Checklist = { ...checklist, stops: stopPerItem(items), items };
+  const low = { quantity: 'tire_pressure', value: 95, unit: 'psi' } as const;
+  const lowDefect = (fixed?: ItemResult['fixed']): ItemResult =>
+    answered(pressureItem.key, 10, {
+      answer: 'defect',
+      measurement: low,
+      verdict: 'out_of_limit',
+      detail: 'low',
+      ...(fixed ? { fixed } : {}),
+    });
+  const rest = [answered('left.tail', 40), answered('cab.horn', 60)];
+
+  it('lists a defect fixed with a reading back within its limit as fixed on the spot, not as an open defect', () => {
+    const fixed = {
+      action: 'added air',
+      measurement: { quantity: 'tire_pressure', value: 110, unit: 'psi' },
+      verdict: 'ok',
+      heard: 'fixed, added air, now one ten',
+      at: at(30),
+    } as const;
+    const summary = summarizeInspection(list, [lowDefect(fixed), ...rest]);
+    expect(summary.defects).toEqual([]);
+    expect(summary.safetyDefectCount).toBe(0);
+    expect(summary.mayBeDriven).toBe(true);
+    expect(summary.fixedOnTheSpot).toEqual([
+      {
+        itemKey: pressureItem.key,
+        zone: 'front',
+        title: pressureItem.title,
+        positionLabel: pressureItem.positionLabel,
+        category: 'tires',
+        safety: true,
+        reasons: ['reported', 'out_of_limit'],
+        detail: 'low',
+        measurement: low,
+        verdict: 'out_of_limit',
+        answeredAt: at(10),
+        action: 'added air',
+        newMeasurement: fixed.measurement,
+        newVerdict: 'ok',
+        fixedAt: at(30),
+        heard: 'fixed, added air, now one ten',
+      },
+    ]);
+  });
+
+  it('takes a fix with no reading to take, such as a replaced bulb', () => {
+    const results = [
+      answered(pressureItem.key, 10, { measurement: { ...low, value: 112 }, verdict: 'ok' }),
+      answered('left.tail', 40, {
+        answer: 'defect',
+        detail: 'bulb out',
+        fixed: { action: 'replaced the bulb', at: at(50) },
+      }),
+      answered('cab.horn', 60),
+    ];
+    const summary = summarizeInspection(list, results);
+    expect(summary.defects).toEqual([]);
+    expect(summary.fixedOnTheSpot.map((fix) => [fix.itemKey, fix.action, fix.newMeasurement])).toEqual([
+      ['left.tail', 'replaced the bulb', undefined],
+    ]);
+  });
+
+  it('leaves the defect open and blocking when the new reading is still out of limit', () => {
+    const fixed = {
+      action: 'added air',
+      measurement: { quantity: 'tire_pressure', value: 100, unit: 'psi' },
+      verdict: 'out_of_limit',
+      at: at(30),
+    } as const;
+    const summary = summarizeInspection(list, [lowDefect(fixed), ...rest]);
+    expect(summary.fixedOnTheSpot).toEqual([]);
+    expect(summary.defects).toHaveLength(1);
+    expect(summary.defects[0]).toMatchObject({ itemKey: pressureItem.key, blocksDriving: true, failedFix: fixed });
+    expect(summary.mayBeDriven).toBe(false);
+  });
+
+  it('does not trust a new reading that was never judged to clear a defect', () => {
+    const fixed = {
+      action: 'added air',
+      measurement: { quantity: 'tire_pressure', value: 110, unit: 'psi' },
+      at: at(30),
+    } as const;
+    const summary = summarizeInspection(list, [lowDefect(fixed), ...rest]);
+    expect(summary.fixedOnTheSpot).toEqual([]);
+    expect(summary.drivingBlockedBy).toEqual([pressureItem.key]);
+  });
+
+  it('ignores a fix on an item that was passed', () => {
+    const summary = summarizeInspection(list, [
+      answered(pressureItem.key, 10, { fixed: { action: 'added air', at: at(20) } }),
+      ...rest,
+    ]);
+    expect(summary.fixedOnTheSpot).toEqual([]);
+    expect(summary.defects).toEqual([]);
+  });
+});
+
+describe('summarizeInspection: measured checks passed without a reading', () => {
+  const measured = (key: string, quantity: 'tread_depth' | 'tire_pressure') =>
+    item(key, 'front', { category: 'tires', safety: true, expects: { type: 'measure', quantity } });
+  const items = [
+    measured('steer.tread', 'tread_depth'),
+    measured('steer.pressure', 'tire_pressure'),
+    measured('drive.pressure', 'tire_pressure'),
+    measured('drive.tread', 'tread_depth'),
+    item('front.headlights', 'front'),
+  ];
+  const list: Checklist = { ...checklist, stops: stopPerItem(items), items };
+
+  it('counts passes by eye apart from required readings with no gauge, and neither for a number or a plain check', () => {
+    const summary = summarizeInspection(list, [
+      answered('steer.tread', 10, { noReading: 'visual' }),
+      answered('steer.pressure', 10, { noReading: 'no_gauge' }),
+      answered('drive.pressure', 20, {
+        measurement: { quantity: 'tire_pressure', value: 100, unit: 'psi' },
+        verdict: 'ok',
+      }),
+      answered('drive.tread', 20, { noReading: 'visual' }),
+      answered('front.headlights', 30),
+    ]);
+    expect(summary.checkedWithoutReading.map((entry) => entry.itemKey)).toEqual(['steer.tread', 'drive.tread']);
+    expect(summary.checkedWithoutReading[0]).toMatchObject({ title: 'steer.tread', safety: true, reason: 'visual' });
+    expect(summary.noGauge.map((entry) => [entry.itemKey, entry.reason])).toEqual([['steer.pressure', 'no_gauge']]);
+    expect(summary.defects).toEqual([]);
+  });
+
+  it('counts a measured check passed with no number and no reason as checked without a reading', () => {
+    const summary = summarizeInspection(list, [answered('steer.tread', 10)]);
+    expect(summary.checkedWithoutReading.map((entry) => entry.itemKey)).toEqual(['steer.tread']);
+    expect(summary.noGauge).toEqual([]);
+  });
+
+  it('does not count a defect or an unanswered item as checked without a reading', () => {
+    const summary = summarizeInspection(list, [answered('steer.tread', 10, { answer: 'defect', detail: 'cut' })]);
+    expect(summary.checkedWithoutReading).toEqual([]);
+  });
+});
+
+describe('summarizeInspection: one answer for a whole stop', () => {
+  it('times the gaps between answers, not between the items one answer covered', () => {
+    // Twelve stops of five items, each stop answered at once every 10 s: not rushed, though most items share a time.
+    const items = Array.from({ length: 60 }, (_, i) => item(`zone.stop${Math.floor(i / 5)}.item${i % 5}`, 'zone'));
+    for (const entry of items) entry.stopKey = entry.key.replace(/\.item\d$/, '');
+    const stops = Array.from({ length: 12 }, (_, n) => ({
+      key: `zone.stop${n}`,
+      zone: 'zone',
+      unitIndex: 0,
+      label: `Stop ${n}`,
+      prompt: `Stop ${n}.`,
+      shortPrompt: `Stop ${n}?`,
+      itemKeys: items.slice(n * 5, n * 5 + 5).map((entry) => entry.key),
+    }));
+    const list: Checklist = { ...checklist, zones: [{ key: 'zone', title: 'Zone' }], stops, items };
+    const results = items.map((entry, i) => answered(entry.key, (Math.floor(i / 5) + 1) * 10));
+    const summary = summarizeInspection(list, results, { startedAt: at(0) });
+    expect(summary.rushed.medianGapMs).toBe(10_000);
+    expect(summary.rushed.reasons).not.toContain('median_gap');
+    expect(summary.zones[0]?.durationMs).toBe(120_000);
+  });
+});

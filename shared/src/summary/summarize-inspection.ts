@@ -5,6 +5,8 @@ import type {
   ItemCategory,
   ItemResult,
   MeasurementValue,
+  NoReadingReason,
+  SpotFix,
   Verdict,
 } from '../checklist/index.js';
 
@@ -20,33 +22,54 @@ export interface RepairCertification {
 
 export type DefectReason = 'reported' | 'out_of_limit';
 
-export interface SummaryDefect {
+// The item a line of the summary is about.
+export interface SummaryItemRef {
   itemKey: string;
   zone: string;
   title: string;
   positionLabel: string;
-  category: ItemCategory;
   safety: boolean;
+}
+
+// A defect as the driver found it: reported, or a reading out of limit.
+export interface FoundDefect extends SummaryItemRef {
+  category: ItemCategory;
   // Both when the driver called it a defect and the measurement was out of limit.
   reasons: DefectReason[];
   detail?: string;
   measurement?: MeasurementValue;
   verdict?: Verdict;
   answeredAt: string;
+}
+
+export interface SummaryDefect extends FoundDefect {
   // Until certified, a safety defect or an out-of-limit measurement keeps the vehicle parked.
   blocksDriving: boolean;
   certification?: CertificationAction;
   // True when a certification clears it (for a non-blocking defect, a deferral is enough).
   cleared: boolean;
+  // A fix the driver tried that did not count: its new reading is still out of limit, or not judged.
+  failedFix?: SpotFix;
 }
 
-export interface UnansweredItem {
-  itemKey: string;
-  zone: string;
-  title: string;
-  positionLabel: string;
-  safety: boolean;
+// A defect the driver corrected during the inspection: it stays on the report, opens no shop
+// defect and does not keep the vehicle parked.
+export interface SpotFixedDefect extends FoundDefect {
+  // What the driver did ("added air"), the reading after it where one applies, and when.
+  action: string;
+  newMeasurement?: MeasurementValue;
+  newVerdict?: Verdict;
+  fixedAt: string;
+  heard?: string;
 }
+
+// A measured check passed without a number: checked by eye, by hand or by a thumper ('visual'), or
+// a reading the organisation requires that the driver had no gauge for ('no_gauge').
+export interface PassedWithoutReading extends SummaryItemRef {
+  reason: NoReadingReason;
+}
+
+export type UnansweredItem = SummaryItemRef;
 
 export interface ZoneTiming {
   zone: string;
@@ -89,7 +112,12 @@ export interface RushedCheck {
 export interface InspectionSummary {
   itemCount: number;
   answeredCount: number;
+  // Open defects: reported or out of limit, and not fixed on the spot.
   defects: SummaryDefect[];
+  fixedOnTheSpot: SpotFixedDefect[];
+  // Measured checks passed without a reading, by eye or by hand, and those with no gauge.
+  checkedWithoutReading: PassedWithoutReading[];
+  noGauge: PassedWithoutReading[];
   safetyDefectCount: number;
   // Any out-of-limit measurement or safety defect says no until each has a repair or a
   // no-repair-needed certification. The app supports and does not replace the driver's and
@@ -169,21 +197,25 @@ function median(values: readonly number[]): number | null {
 }
 
 // Each answer is credited with the time since the answer before it (or since the start for the
-// first one), so zone times add up to the whole walk-around even when the driver goes back.
+// first one), so zone times add up to the whole walk-around even when the driver goes back. Items
+// of one stop answered together share their time: the gaps are counted between answers, not items.
 function attributeGaps(
   timed: readonly TimedResult[],
   startMs: number | null,
 ): { gapsMs: number[]; byZone: Map<string, number> } {
   const gapsMs: number[] = [];
   const byZone = new Map<string, number>();
-  let previousMs = startMs;
+  let previous: TimedResult | null = null;
   for (const entry of timed) {
-    if (previousMs !== null) {
-      const gap = Math.max(0, entry.atMs - previousMs);
+    const sameAnswer =
+      previous !== null && previous.atMs === entry.atMs && previous.item.stopKey === entry.item.stopKey;
+    const fromMs = previous?.atMs ?? startMs;
+    if (fromMs !== null && !sameAnswer) {
+      const gap = Math.max(0, entry.atMs - fromMs);
       gapsMs.push(gap);
       byZone.set(entry.item.zone, (byZone.get(entry.item.zone) ?? 0) + gap);
     }
-    previousMs = entry.atMs;
+    previous = entry;
   }
   return { gapsMs, byZone };
 }
@@ -204,33 +236,67 @@ function checkRushed(
   return { rushed: reasons.length > 0, reasons, medianGapMs, totalDurationMs, minimumDurationMs, rule };
 }
 
-function toDefect(
-  item: ChecklistItem,
-  result: ItemResult,
-  certification: CertificationAction | undefined,
-): SummaryDefect | null {
+// A fix counts when its new reading, if it has one, was judged and is not out of limit; a new
+// reading without a verdict is not trusted to clear a defect.
+function fixCounts(fix: SpotFix): boolean {
+  if (fix.measurement === undefined) return true;
+  return fix.verdict !== undefined && fix.verdict !== 'out_of_limit';
+}
+
+function defectReasons(result: ItemResult): DefectReason[] {
   const reasons: DefectReason[] = [];
   if (result.answer === 'defect') reasons.push('reported');
   if (result.verdict === 'out_of_limit') reasons.push('out_of_limit');
-  if (reasons.length === 0) return null;
-  const blocksDriving = item.safety || reasons.includes('out_of_limit');
-  const defect: SummaryDefect = {
+  return reasons;
+}
+
+function itemRef(item: ChecklistItem): SummaryItemRef {
+  return {
     itemKey: item.key,
     zone: item.zone,
     title: item.title,
     positionLabel: item.positionLabel,
-    category: item.category,
     safety: item.safety,
-    reasons,
-    answeredAt: result.answeredAt,
+  };
+}
+
+function foundDefect(item: ChecklistItem, result: ItemResult, reasons: DefectReason[]): FoundDefect {
+  const found: FoundDefect = { ...itemRef(item), category: item.category, reasons, answeredAt: result.answeredAt };
+  if (result.detail !== undefined) found.detail = result.detail;
+  if (result.measurement !== undefined) found.measurement = result.measurement;
+  if (result.verdict !== undefined) found.verdict = result.verdict;
+  return found;
+}
+
+function toDefect(
+  item: ChecklistItem,
+  result: ItemResult,
+  reasons: DefectReason[],
+  certification: CertificationAction | undefined,
+): SummaryDefect {
+  const blocksDriving = item.safety || reasons.includes('out_of_limit');
+  const defect: SummaryDefect = {
+    ...foundDefect(item, result, reasons),
     blocksDriving,
     cleared: clears(blocksDriving, certification),
   };
-  if (result.detail !== undefined) defect.detail = result.detail;
-  if (result.measurement !== undefined) defect.measurement = result.measurement;
-  if (result.verdict !== undefined) defect.verdict = result.verdict;
   if (certification !== undefined) defect.certification = certification;
+  if (result.fixed !== undefined) defect.failedFix = result.fixed;
   return defect;
+}
+
+function toSpotFixed(item: ChecklistItem, result: ItemResult, reasons: DefectReason[], fix: SpotFix): SpotFixedDefect {
+  const fixed: SpotFixedDefect = { ...foundDefect(item, result, reasons), action: fix.action, fixedAt: fix.at };
+  if (fix.measurement !== undefined) fixed.newMeasurement = fix.measurement;
+  if (fix.verdict !== undefined) fixed.newVerdict = fix.verdict;
+  if (fix.heard !== undefined) fixed.heard = fix.heard;
+  return fixed;
+}
+
+// A measured check passed with no number; an older result without a reason was checked by eye.
+function withoutReading(item: ChecklistItem, result: ItemResult): PassedWithoutReading | null {
+  if (item.expects.type !== 'measure' || result.answer !== 'pass' || result.measurement !== undefined) return null;
+  return { ...itemRef(item), reason: result.noReading ?? 'visual' };
 }
 
 // Verdicts are taken as given: the server re-evaluates every measurement before it stores one.
@@ -246,22 +312,26 @@ export function summarizeInspection(
 
   const unknownItemKeys = [...latest.keys()].filter((key) => !itemsByKey.has(key)).sort();
   const defects: SummaryDefect[] = [];
+  const fixedOnTheSpot: SpotFixedDefect[] = [];
+  const passedWithoutReading: PassedWithoutReading[] = [];
   const unanswered: UnansweredItem[] = [];
   const timed: TimedResult[] = [];
   for (const item of checklist.items) {
     const result = latest.get(item.key);
     if (!result) {
-      unanswered.push({
-        itemKey: item.key,
-        zone: item.zone,
-        title: item.title,
-        positionLabel: item.positionLabel,
-        safety: item.safety,
-      });
+      unanswered.push(itemRef(item));
       continue;
     }
-    const defect = toDefect(item, result, certifications.get(item.key));
-    if (defect) defects.push(defect);
+    const reasons = defectReasons(result);
+    if (reasons.length > 0) {
+      if (result.fixed !== undefined && fixCounts(result.fixed)) {
+        fixedOnTheSpot.push(toSpotFixed(item, result, reasons, result.fixed));
+      } else {
+        defects.push(toDefect(item, result, reasons, certifications.get(item.key)));
+      }
+    }
+    const passed = withoutReading(item, result);
+    if (passed) passedWithoutReading.push(passed);
     const atMs = parseTime(result.answeredAt);
     if (atMs !== null) timed.push({ result, item, atMs });
   }
@@ -299,6 +369,9 @@ export function summarizeInspection(
     itemCount: checklist.items.length,
     answeredCount,
     defects,
+    fixedOnTheSpot,
+    checkedWithoutReading: passedWithoutReading.filter((entry) => entry.reason === 'visual'),
+    noGauge: passedWithoutReading.filter((entry) => entry.reason === 'no_gauge'),
     safetyDefectCount: defects.filter((defect) => defect.safety).length,
     mayBeDriven: drivingBlockedBy.length === 0,
     drivingBlockedBy,
