@@ -7,3 +7,4 @@ export { ES_LEXICON } from './lexicon/es.js';
 export * from './read-back.js';
 export * from './interpret-confirmation.js';
 export { splitEndNote } from './split-end-note.js';
+export { interpretStopAnswer } from './interpret-stop-answer.js';

@@ -53,6 +53,8 @@ export const UNCLEAR_REASONS = [
   'unit_mismatch',
   // A value far outside any sensible range for the quantity.
   'implausible',
+  // At a stop: a value or "n/a" that could belong to more than one item, or to none named.
+  'item_needed',
 ] as const;
 export type UnclearReason = (typeof UNCLEAR_REASONS)[number];
 
