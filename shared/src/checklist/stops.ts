@@ -136,7 +136,8 @@ export function stopKey(place: StopPlace): string {
 
 // Upper-cases the first letter, past an opening "¿" or "¡".
 export function capitalise(text: string): string {
-  return text.replace(/\p{L}/u, (letter) => letter.toLocaleUpperCase());
+  const at = text.startsWith('¿') || text.startsWith('¡') ? 1 : 0;
+  return text.slice(0, at) + text.charAt(at).toLocaleUpperCase() + text.slice(at + 1);
 }
 
 // "a, b and c", with the locale's word for "and" (Spanish says "e" before an i sound).
@@ -150,11 +151,11 @@ function joinList(parts: readonly string[], words: ChecklistWords['stops']): str
 // What the stop prompt calls an item and the words a driver may point at it with. A name with
 // "{dual}" gets each word for its tire ("outer", "outside") and also the bare word, which the other
 // tire of the pair shares, so "the tire" asks which and "the inner rim" does not.
-export function itemNames(
+function namesOf(
   itemWords: { name: string; names: readonly string[] },
   dual: Dual | undefined,
   words: ChecklistWords['stops'],
-): { name: string; names: string[] } {
+): { name: string; names: readonly string[] } {
   const qualifiers = dual ? words.duals[dual] : [];
   const name = fillTemplate(itemWords.name, { dual: qualifiers[0] ?? '' });
   const names = new Set<string>();
@@ -165,6 +166,28 @@ export function itemNames(
     names.add(fillTemplate(template, { dual: '' }));
   }
   return { name, names: [...names] };
+}
+
+// The names depend only on the words and the tire, not on where the wheel is: work them out once.
+const namesCache = new WeakMap<object, Map<Dual | 'single', { name: string; names: readonly string[] }>>();
+
+export function itemNames(
+  itemWords: { name: string; names: readonly string[] },
+  dual: Dual | undefined,
+  words: ChecklistWords['stops'],
+): { name: string; names: string[] } {
+  let byDual = namesCache.get(itemWords);
+  if (!byDual) {
+    byDual = new Map();
+    namesCache.set(itemWords, byDual);
+  }
+  let named = byDual.get(dual ?? 'single');
+  if (!named) {
+    named = namesOf(itemWords, dual, words);
+    byDual.set(dual ?? 'single', named);
+  }
+  // A copy per item: a caller that edits one item's names must not change another's.
+  return { name: named.name, names: [...named.names] };
 }
 
 interface PlacedItem {
