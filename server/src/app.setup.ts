@@ -1,14 +1,28 @@
-import type { INestApplication } from '@nestjs/common';
+import type { NestExpressApplication } from '@nestjs/platform-express';
 import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
+import type { NextFunction, Request, Response } from 'express';
 import helmet from 'helmet';
+import { configureBodyParsers } from './common/request-limits';
 
 export const API_PREFIX = 'api';
 
 // Everything main.ts and the tests both need on top of AppModule: prefix, security headers, OpenAPI.
-export function configureApp(app: INestApplication): INestApplication {
+export function configureApp(app: NestExpressApplication): NestExpressApplication {
   app.setGlobalPrefix(API_PREFIX);
+  // A TLS-terminating proxy on the same machine may say the request came over https (and from whom).
+  app.set('trust proxy', 'loopback');
+  app.use((request: Request, response: Response, next: NextFunction) => {
+    if (request.secure) response.setHeader('Strict-Transport-Security', 'max-age=31536000; includeSubDomains');
+    // API answers hold a signed-in user's data: never kept by a browser or a proxy. Routes that serve
+    // files set their own.
+    if (request.path.startsWith(`/${API_PREFIX}/`)) response.setHeader('Cache-Control', 'no-store');
+    next();
+  });
+  configureBodyParsers(app);
   app.use(
     helmet({
+      // Sent below, and only over TLS: over plain http (the demo on a LAN) it would be ignored or wrong.
+      strictTransportSecurity: false,
       contentSecurityPolicy: {
         useDefaults: true,
         directives: {

@@ -1,13 +1,14 @@
 import { Logger } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { NestFactory } from '@nestjs/core';
+import type { NestExpressApplication } from '@nestjs/platform-express';
 import { AppModule } from './app.module';
 import { configureApp } from './app.setup';
 import type { AppEnv } from './config/env.validation';
 
 async function bootstrap(): Promise<void> {
   // abortOnError false: a boot error (e.g. a bad environment variable) rejects instead of aborting the process.
-  const app = await NestFactory.create(AppModule, { abortOnError: false });
+  const app = await NestFactory.create<NestExpressApplication>(AppModule, { abortOnError: false });
   configureApp(app);
   // SIGINT/SIGTERM run the destroy hooks: the database pool and the SMTP catcher close.
   app.enableShutdownHooks();

@@ -1,16 +1,17 @@
 import type { INestApplication } from '@nestjs/common';
 import { NestFactory } from '@nestjs/core';
+import type { NestExpressApplication } from '@nestjs/platform-express';
 import {
   sampleTractor,
   sampleTrailer,
   type InspectionResponse,
   type LoginResponse,
+  type ResultUpsert,
   type Role,
   type VehicleRequest,
   type VehicleResponse,
 } from '@yardcall/shared';
 import { randomUUID } from 'node:crypto';
-import type { Server } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import request from 'supertest';
 import { DataSource } from 'typeorm';
@@ -41,10 +42,13 @@ export interface TestApp {
 
 // The real app over real HTTP on a free loopback port.
 export async function startApp(): Promise<TestApp> {
-  const app = await NestFactory.create(AppModule, { logger: ['error', 'warn'], abortOnError: false });
+  const app = await NestFactory.create<NestExpressApplication>(AppModule, {
+    logger: ['error', 'warn'],
+    abortOnError: false,
+  });
   configureApp(app);
   await app.listen(0, '127.0.0.1');
-  const { port } = (app.getHttpServer() as Server).address() as AddressInfo;
+  const { port } = app.getHttpServer().address() as AddressInfo;
   return {
     app,
     url: `http://127.0.0.1:${port}`,
@@ -121,4 +125,21 @@ export async function startInspection(url: string, token: string, start: Inspect
   const response = await postInspection(url, token, start);
   expect(response.status).toBe(201);
   return bodyOf<InspectionResponse>(response);
+}
+
+// Sends a walk-around's answers, then signs and submits it: the report as the server keeps it.
+export async function answerAndSubmit(
+  url: string,
+  token: string,
+  inspectionId: string,
+  results: ResultUpsert[],
+): Promise<InspectionResponse> {
+  const put = await request(url).put(`/api/inspections/${inspectionId}/results`).set(bearer(token)).send({ results });
+  expect(put.status).toBe(200);
+  const submitted = await request(url)
+    .post(`/api/inspections/${inspectionId}/submit`)
+    .set(bearer(token))
+    .send({ signature: { name: 'Dana Okafor' } });
+  expect(submitted.status).toBe(200);
+  return bodyOf<InspectionResponse>(submitted);
 }

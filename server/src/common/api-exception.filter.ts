@@ -3,6 +3,7 @@ import type { ApiErrorBody } from '@yardcall/shared';
 import type { Response } from 'express';
 import { ApiValidationException } from './api-validation.exception';
 import { isForeignKeyViolation, isInvalidTextRepresentation, isUniqueViolation } from './database-errors';
+import { toParserHttpError } from './request-limits';
 
 const REASONS: Record<number, string> = {
   400: 'Bad Request',
@@ -43,7 +44,10 @@ function messageOf(exception: HttpException): string {
   return asSentence(exception.message);
 }
 
-export function toApiErrorBody(exception: unknown, logger: Logger): ApiErrorBody {
+export function toApiErrorBody(thrown: unknown, logger: Logger): ApiErrorBody {
+  // Nest wraps body-parser's errors (too large, bad JSON) with their status; say them in our words.
+  const exception =
+    (thrown instanceof HttpException && thrown.cause instanceof Error && toParserHttpError(thrown.cause)) || thrown;
   if (exception instanceof ApiValidationException) {
     return { statusCode: 400, error: reason(400), message: asSentence(exception.message), fields: exception.fields };
   }

@@ -1,6 +1,8 @@
-import { ValidationPipe, type ValidationError } from '@nestjs/common';
+import { ValidationPipe, type ArgumentMetadata, type ValidationError } from '@nestjs/common';
 import type { FieldProblem } from '@yardcall/shared';
+import type { ValidatorOptions } from 'class-validator';
 import { ApiValidationException } from './api-validation.exception';
+import { findForbiddenNulls, findUnsafeText } from './input-checks';
 
 // Flattens class-validator's tree into dotted paths, e.g. "config.axles.0.brake".
 export function flattenValidationErrors(errors: ValidationError[], parent = ''): FieldProblem[] {
@@ -22,8 +24,26 @@ export function flattenValidationErrors(errors: ValidationError[], parent = ''):
   return problems;
 }
 
+// The class-validator pipe with two checks of its own: text PostgreSQL cannot store (NUL, unpaired
+// surrogates) in any body, query or path value, and null where the contract has none.
+export class ApiValidationPipe extends ValidationPipe {
+  override async transform(value: unknown, metadata: ArgumentMetadata): Promise<unknown> {
+    if (metadata.type !== 'custom') {
+      const problems = findUnsafeText(value, metadata.data ?? '');
+      if (problems.length > 0) throw new ApiValidationException(problems);
+    }
+    return super.transform(value, metadata);
+  }
+
+  protected override async validate(object: object, validatorOptions?: ValidatorOptions): Promise<ValidationError[]> {
+    const nulls = findForbiddenNulls(object);
+    if (nulls.length > 0) throw new ApiValidationException(nulls);
+    return super.validate(object, validatorOptions);
+  }
+}
+
 export function createValidationPipe(): ValidationPipe {
-  return new ValidationPipe({
+  return new ApiValidationPipe({
     whitelist: true,
     forbidNonWhitelisted: true,
     transform: true,

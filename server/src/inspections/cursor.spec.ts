@@ -28,6 +28,11 @@ describe('list cursor', () => {
     ],
     ['a time that is not a time', Buffer.from(`["startedAt","desc","yesterday","${ID}"]`).toString('base64url')],
     [
+      'an impossible date (February 31st)',
+      Buffer.from(`["startedAt","desc","2026-02-31T05:40:00.000Z","${ID}"]`).toString('base64url'),
+    ],
+    ['an hour past 23', Buffer.from(`["startedAt","desc","2026-11-30T24:00:00Z","${ID}"]`).toString('base64url')],
+    [
       'a time with an injected clause',
       Buffer.from(`["startedAt","desc","2026-11-30T05:40:00Z') OR (1=1","${ID}"]`).toString('base64url'),
     ],

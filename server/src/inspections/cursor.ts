@@ -17,6 +17,13 @@ const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 const SORTS: readonly string[] = ['startedAt', 'submittedAt'];
 const ORDERS: readonly string[] = ['asc', 'desc'];
 
+// A time whose every field is in range: Date.parse lets 2026-02-31 roll over into March, which
+// PostgreSQL would refuse.
+function isRealTime(at: string): boolean {
+  const time = Date.parse(at);
+  return !Number.isNaN(time) && new Date(time).toISOString().slice(0, 19) === at.slice(0, 19);
+}
+
 export function encodeCursor(cursor: ListCursor): string {
   return Buffer.from(JSON.stringify([cursor.sort, cursor.order, cursor.at, cursor.id])).toString('base64url');
 }
@@ -42,7 +49,7 @@ export function decodeCursor(text: string, sort: InspectionSortField, order: Sor
     !ORDERS.includes(cursorOrder) ||
     typeof at !== 'string' ||
     !EXACT_TIME.test(at) ||
-    Number.isNaN(Date.parse(at)) ||
+    !isRealTime(at) ||
     typeof id !== 'string' ||
     !UUID.test(id)
   ) {

@@ -20,7 +20,14 @@ export function formatBytes(bytes: number): string {
 }
 
 function toHttpError(error: unknown, kind: MediaKind<string>): Error {
-  if (!(error instanceof MulterError)) return error instanceof Error ? error : new Error(String(error));
+  // With memory storage every other error is the body's: busboy's "Unexpected end of form",
+  // "Boundary not found" and the like.
+  if (!(error instanceof MulterError)) {
+    const detail = error instanceof Error ? error.message : String(error);
+    return new BadRequestException(
+      `The upload could not be read (${detail}): send it whole, as multipart/form-data with its boundary.`,
+    );
+  }
   switch (error.code) {
     case 'LIMIT_FILE_SIZE':
       return new PayloadTooLargeException(

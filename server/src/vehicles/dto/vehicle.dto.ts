@@ -12,10 +12,14 @@ import { IsIn, IsObject, IsOptional, IsString, MaxLength, ValidateNested } from 
 import { VehicleConfigDto } from './vehicle-config.dto';
 
 const TEXT = { message: 'Enter this as text.' };
+// Only a bound on the request's size; the real lengths (a 17-character VIN...) are the shared vehicle
+// rules' to check, with their own words.
+const SHORT_TEXT = { message: 'This text is far too long for this field: check what was pasted here.' };
 
 export class CreateVehicleDto implements VehicleRequest {
   @ApiProperty({ example: 'KV-104' })
   @IsString(TEXT)
+  @MaxLength(100, SHORT_TEXT)
   unitNumber: string;
 
   @ApiProperty({ enum: VEHICLE_KINDS })
@@ -24,10 +28,12 @@ export class CreateVehicleDto implements VehicleRequest {
 
   @ApiProperty({ example: '7YCTA3K24SN100217' })
   @IsString(TEXT)
+  @MaxLength(100, SHORT_TEXT)
   vin: string;
 
   @ApiProperty({ example: 'KVF 4417' })
   @IsString(TEXT)
+  @MaxLength(100, SHORT_TEXT)
   plate: string;
 
   @ApiProperty({ type: VehicleConfigDto })
