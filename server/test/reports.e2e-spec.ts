@@ -1,5 +1,6 @@
 import {
   safetyCaution,
+  type ChecklistItem,
   type DefectResponse,
   type ItemResultResponse,
   type Role,
@@ -60,6 +61,8 @@ function handMadeReport(defects: DefectResponse[]): InspectionReport {
     measurement: { quantity: 'tread_depth', value: 3, unit: 'in/32' },
     verdict: 'out_of_limit',
     limit: { value: 4, unit: 'in/32', source: '49 CFR 393.75(b)' },
+    noReading: null,
+    fixed: null,
     detail: null,
     heard: 'three thirty seconds',
     confidence: 0.92,
@@ -97,6 +100,8 @@ function handMadeReport(defects: DefectResponse[]): InspectionReport {
       defects,
       results: [heard],
       notes: [note],
+      requiredReadings: [],
+      summary: { fixedOnTheSpot: [], checkedWithoutReading: [], noGauge: [] },
     },
     signatures: [
       {
@@ -211,6 +216,95 @@ describe('inspection report PDF (built from a hand-made inspection)', () => {
   });
 });
 
+// A report with a tire fixed at the air line, a tread checked by eye and a pressure required but not gauged.
+function readingsReport(): InspectionReport {
+  const report = handMadeReport([]);
+  const tire = { zone: 'left_side', safety: true };
+  report.inspection.requiredReadings = ['tire_pressure'];
+  report.inspection.summary = {
+    fixedOnTheSpot: [
+      {
+        ...tire,
+        itemKey: 'u1.axle0.left.outer.tire.pressure',
+        title: 'Tire pressure',
+        positionLabel: 'Trailer, axle 1, left outer tire',
+        category: 'tires',
+        reasons: ['reported', 'out_of_limit'],
+        detail: 'low on the outer dual',
+        measurement: { quantity: 'tire_pressure', value: 88, unit: 'psi' },
+        verdict: 'out_of_limit',
+        answeredAt: '2026-11-03T06:10:00.000Z',
+        action: 'added air at the yard line',
+        newMeasurement: { quantity: 'tire_pressure', value: 101, unit: 'psi' },
+        newVerdict: 'ok',
+        fixedAt: '2026-11-03T06:14:00.000Z',
+        heard: 'fixed, added air, one oh one',
+      },
+    ],
+    checkedWithoutReading: [
+      {
+        ...tire,
+        itemKey: 'u0.axle1.right.outer.tire.tread',
+        title: 'Tread depth',
+        positionLabel: 'Tractor, axle 2, right outer tire',
+        reason: 'visual',
+      },
+    ],
+    noGauge: [
+      {
+        ...tire,
+        itemKey: 'u0.axle1.right.outer.tire.pressure',
+        title: 'Tire pressure',
+        positionLabel: 'Tractor, axle 2, right outer tire',
+        reason: 'no_gauge',
+      },
+    ],
+  };
+  return report;
+}
+
+describe('inspection report PDF: readings and fixes on the spot', () => {
+  let text: string;
+  beforeAll(async () => {
+    text = squash((await pdfText(await renderInspectionReport(readingsReport()))).text);
+  });
+
+  it('lists each fix on the spot apart from the defects: item, what was done and the new reading', () => {
+    for (const expected of [
+      'Defects (0)',
+      'Fixed on the spot (1)',
+      'no shop defect was opened',
+      '1. Tire pressure: Trailer, axle 1, left outer tire, safety item',
+      'Found: "low on the outer dual"',
+      'Reading found: 88 psi, out of limit',
+      'What was done: added air at the yard line, 2026-11-03 06:14 UTC',
+      'New reading: 101 psi, within limit',
+      'Heard: "fixed, added air, one oh one"',
+    ]) {
+      expect({ expected, found: text.includes(squash(expected)) }).toEqual({ expected, found: true });
+    }
+    expect(text.indexOf(squash('Fixed on the spot'))).toBeGreaterThan(text.indexOf(squash('Defects (0)')));
+  });
+
+  it('says for each measured check without a value whether it was checked without a reading or had no gauge', () => {
+    for (const expected of [
+      'Required readings: every tire pressure, with a gauge',
+      'Measured checks passed without a reading (2): no gauge 1, checked without a reading 1.',
+      'Tread depth: Tractor, axle 2, right outer tire: checked without a reading',
+      'Tire pressure: Tractor, axle 2, right outer tire: no gauge (reading required)',
+    ]) {
+      expect({ expected, found: text.includes(squash(expected)) }).toEqual({ expected, found: true });
+    }
+  });
+
+  it('says no reading is required by default and shows no fixes section when nothing was fixed', async () => {
+    const plain = squash((await pdfText(await renderInspectionReport(handMadeReport([treadDefect()])))).text);
+    expect(plain).toContain(squash('Required readings: none (a measured check may be passed without a reading)'));
+    expect(plain).toContain(squash('Every measured check that was passed has its reading.'));
+    expect(plain).not.toContain(squash('Fixed on the spot'));
+  });
+});
+
 describe('signature path bounds', () => {
   it('follows absolute and relative commands', () => {
     expect(pathBounds('M10 20 L30 5 l5 5 h-50 v40 z')).toEqual({ minX: -15, minY: 5, width: 50, height: 45 });
@@ -244,6 +338,11 @@ describe('GET /api/inspections/:id/report.pdf', () => {
       location: 'North gate',
     });
     const item = inspection.checklist.items.find((i) => i.expects.type === 'check')!;
+    // A post-trip measures tire pressures only: one fixed on the spot, one passed without a reading.
+    const [pressure, measured] = inspection.checklist.items.filter(
+      (i) => i.expects.type === 'measure' && i.expects.quantity === 'tire_pressure',
+    ) as [ChecklistItem, ChecklistItem];
+    const specPsi = pressure.limitContext!.specPsi!;
     const results = await request(t.url)
       .put(`/api/inspections/${inspection.id}/results`)
       .set(bearer(tokens.driver))
@@ -253,6 +352,20 @@ describe('GET /api/inspections/:id/report.pdf', () => {
             itemKey: item.key,
             answer: 'defect',
             detail: 'cracked lens, water inside',
+            answeredAt: new Date().toISOString(),
+            clientId: randomUUID(),
+          },
+          // "Good" at a measured check: a pass checked without a reading.
+          { itemKey: measured.key, answer: 'pass', answeredAt: new Date().toISOString(), clientId: randomUUID() },
+          {
+            itemKey: pressure.key,
+            answer: 'defect',
+            measurement: { quantity: 'tire_pressure', value: specPsi - 20, unit: 'psi' },
+            fixed: {
+              action: 'added air',
+              measurement: { quantity: 'tire_pressure', value: specPsi, unit: 'psi' },
+              at: new Date().toISOString(),
+            },
             answeredAt: new Date().toISOString(),
             clientId: randomUUID(),
           },
@@ -282,6 +395,12 @@ describe('GET /api/inspections/:id/report.pdf', () => {
       item.positionLabel,
       'Driver\'s words: "cracked lens, water inside"',
       'Driver: Dana Okafor',
+      `${measured.title}: ${measured.positionLabel}: checked without a reading`,
+      'Defects (1)',
+      'Fixed on the spot (1)',
+      `1. ${pressure.title}: ${pressure.positionLabel}`,
+      'What was done: added air',
+      `New reading: ${specPsi} psi, within limit`,
     ]) {
       expect({ expected, found: squash(text).includes(squash(expected)) }).toEqual({ expected, found: true });
     }

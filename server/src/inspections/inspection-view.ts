@@ -44,6 +44,8 @@ export function toResultResponse(row: ItemResult): ItemResultResponse {
       row.limitValue !== null && row.limitUnit !== null && row.limitSource !== null
         ? { value: row.limitValue, unit: row.limitUnit, source: row.limitSource }
         : null,
+    noReading: row.noReading,
+    fixed: row.fixed,
     detail: row.detail,
     heard: row.heard,
     confidence: row.confidence,
@@ -62,6 +64,8 @@ export function toSharedResult(row: ItemResult): SharedItemResult {
     result.measurement = { quantity: row.measurementQuantity, value: row.measurementValue, unit: row.measurementUnit };
   }
   if (row.verdict !== null) result.verdict = row.verdict;
+  if (row.noReading !== null) result.noReading = row.noReading;
+  if (row.fixed !== null) result.fixed = row.fixed;
   if (row.detail !== null) result.detail = row.detail;
   if (row.heard !== null) result.heard = row.heard;
   if (row.confidence !== null) result.confidence = row.confidence;

@@ -7,6 +7,7 @@ import {
   buildChecklist,
   canonicalUnitOf,
   evaluateMeasurement,
+  isReadingRequired,
   rushedFlag,
   summarizeInspection,
   toCanonical,
@@ -18,6 +19,9 @@ import {
   type InspectionPage,
   type InspectionResponse,
   type ItemResultResponse,
+  type MeasurementValue,
+  type NoReadingReason,
+  type SpotFix,
   type Verdict,
 } from '@yardcall/shared';
 import { DataSource, In, Repository } from 'typeorm';
@@ -27,6 +31,7 @@ import { isUniqueViolation } from '../common/database-errors';
 import { toDefectResponses } from '../defects/defect-view';
 import { Defect } from '../defects/entities/defect.entity';
 import { refreshVehicleStatus } from '../defects/vehicle-status';
+import { Organization } from '../organizations/entities/organization.entity';
 import { User } from '../users/entities/user.entity';
 import { Vehicle } from '../vehicles/entities/vehicle.entity';
 import { JOB_SAFETY_DEFECT_REPORTED, type SafetyDefectReportedJob } from '../jobs/job-names';
@@ -39,7 +44,7 @@ import {
   type ListInspectionsQuery,
   type SubmitInspectionDto,
 } from './dto/inspection.dto';
-import type { PutResultsDto, ResultUpsertDto } from './dto/result.dto';
+import type { MeasurementValueDto, PutResultsDto, ResultUpsertDto, SpotFixDto } from './dto/result.dto';
 import { InspectionVehicle } from './entities/inspection-vehicle.entity';
 import { Inspection, type InspectionVehicleSnapshot } from './entities/inspection.entity';
 import { ItemResult } from './entities/item-result.entity';
@@ -72,6 +77,17 @@ interface PreparedResult {
   limitValue: number | null;
   limitUnit: string | null;
   limitSource: string | null;
+  noReading: NoReadingReason | null;
+  fixed: SpotFix | null;
+}
+
+// A reading in the canonical unit with the server's verdict and the limit that decided it.
+interface JudgedReading {
+  measurement: MeasurementValue;
+  verdict: Verdict;
+  limitValue: number;
+  limitUnit: string;
+  limitSource: string;
 }
 
 interface ItemResultRow {
@@ -87,6 +103,8 @@ interface ItemResultRow {
   limit_value: number | null;
   limit_unit: string | null;
   limit_source: string | null;
+  no_reading: NoReadingReason | null;
+  fixed: SpotFix | null;
   detail: string | null;
   heard: string | null;
   confidence: number | null;
@@ -101,15 +119,15 @@ const UPSERT_SQL = `
 WITH input AS (
   SELECT * FROM unnest($2::text[], $3::text[], $4::item_answer[], $5::text[], $6::float8[], $7::text[],
                        $8::item_verdict[], $9::float8[], $10::text[], $11::text[], $12::text[], $13::text[],
-                       $14::real[], $15::timestamptz[])
+                       $14::real[], $15::timestamptz[], $16::item_no_reading[], $17::jsonb[])
     AS t(item_key, client_id, answer, measurement_quantity, measurement_value, measurement_unit, verdict,
-         limit_value, limit_unit, limit_source, detail, heard, confidence, answered_at)
+         limit_value, limit_unit, limit_source, detail, heard, confidence, answered_at, no_reading, fixed)
 ), upserted AS (
   INSERT INTO item_results AS r (inspection_id, item_key, client_id, answer, measurement_quantity,
     measurement_value, measurement_unit, verdict, limit_value, limit_unit, limit_source, detail, heard,
-    confidence, answered_at)
+    confidence, answered_at, no_reading, fixed)
   SELECT $1::uuid, item_key, client_id, answer, measurement_quantity, measurement_value, measurement_unit,
-         verdict, limit_value, limit_unit, limit_source, detail, heard, confidence, answered_at
+         verdict, limit_value, limit_unit, limit_source, detail, heard, confidence, answered_at, no_reading, fixed
   FROM input
   WHERE EXISTS (SELECT 1 FROM inspections WHERE id = $1::uuid AND status = 'in_progress' FOR SHARE)
   ON CONFLICT (inspection_id, item_key) DO UPDATE SET
@@ -118,7 +136,7 @@ WITH input AS (
     measurement_unit = EXCLUDED.measurement_unit, verdict = EXCLUDED.verdict,
     limit_value = EXCLUDED.limit_value, limit_unit = EXCLUDED.limit_unit, limit_source = EXCLUDED.limit_source,
     detail = EXCLUDED.detail, heard = EXCLUDED.heard, confidence = EXCLUDED.confidence,
-    answered_at = EXCLUDED.answered_at
+    answered_at = EXCLUDED.answered_at, no_reading = EXCLUDED.no_reading, fixed = EXCLUDED.fixed
   WHERE r.answered_at < EXCLUDED.answered_at
      OR (r.answered_at = EXCLUDED.answered_at AND r.client_id <> EXCLUDED.client_id)
   RETURNING r.*
@@ -143,6 +161,8 @@ function rowToEntity(row: ItemResultRow): ItemResult {
     limitValue: row.limit_value,
     limitUnit: row.limit_unit,
     limitSource: row.limit_source,
+    noReading: row.no_reading,
+    fixed: row.fixed,
     detail: row.detail,
     heard: row.heard,
     confidence: row.confidence,
@@ -196,7 +216,13 @@ export class InspectionsService {
       const vehicle = byId.get(id) as Vehicle;
       return { id: vehicle.id, unitNumber: vehicle.unitNumber, kind: vehicle.kind, config: vehicle.config };
     });
-    const driver = await this.users.findOne({ select: { id: true, settings: true }, where: { id: user.id } });
+    const [driver, organization] = await Promise.all([
+      this.users.findOne({ select: { id: true, settings: true }, where: { id: user.id } }),
+      this.dataSource.manager.findOne(Organization, {
+        select: { id: true, requiredReadings: true },
+        where: { id: user.organizationId },
+      }),
+    ]);
     const locale = dto.locale ?? driver?.settings.locale ?? DEFAULT_DISPLAY_SETTINGS.locale;
     let checklist: Checklist;
     try {
@@ -238,6 +264,7 @@ export class InspectionsService {
             odometer: null,
             location: dto.location?.trim() || null,
             vehicles: snapshot,
+            requiredReadings: organization?.requiredReadings ?? [],
             rushed: false,
             defectCount: 0,
           }),
@@ -363,7 +390,14 @@ export class InspectionsService {
     // The hot path: the vehicles snapshot is read only when the checklist is not cached.
     const { inspection } = this.editable(
       await this.inspections.findOne({
-        select: { id: true, kind: true, status: true, locale: true, vehicles: !this.checklists.has(id) },
+        select: {
+          id: true,
+          kind: true,
+          status: true,
+          locale: true,
+          requiredReadings: true,
+          vehicles: !this.checklists.has(id),
+        },
         where: { id, organizationId: user.organizationId, driverId: user.id },
       }),
     );
@@ -387,6 +421,9 @@ export class InspectionsService {
       column((p) => p.input.heard ?? null),
       column((p) => p.input.confidence ?? null),
       column((p) => p.input.answeredAt),
+      column((p) => p.noReading),
+      // jsonb[] elements go as JSON text.
+      column((p) => (p.fixed ? JSON.stringify(p.fixed) : null)),
     ]);
     const stored = new Map(rows.map((row) => [row.item_key, row]));
     if (stored.size < prepared.length) {
@@ -510,46 +547,136 @@ export class InspectionsService {
       }
       clientIds.set(input.clientId, input.itemKey);
       const item = byKey.get(input.itemKey) as ChecklistItem;
-      const empty = { limitValue: null, limitUnit: null, limitSource: null };
-      if (!input.measurement) {
-        prepared.push({ input, quantity: null, value: null, unit: null, verdict: null, ...empty });
-        continue;
-      }
-      const { quantity, value, unit } = input.measurement;
-      if (item.expects.type !== 'measure') {
-        problems.push({
-          field: `results.${index}.measurement`,
-          message: `${input.itemKey} takes no measurement: send the answer only.`,
-        });
-        continue;
-      }
-      if (item.expects.quantity !== quantity) {
-        problems.push({
-          field: `results.${index}.measurement.quantity`,
-          message: `${input.itemKey} measures ${item.expects.quantity}, not ${quantity}.`,
-        });
-        continue;
-      }
-      try {
-        // The server's verdict stands, whatever the client said: never trust a client verdict.
-        const judged = evaluateMeasurement(quantity, value, unit, item.limitContext ?? {}, inspection.locale);
-        prepared.push({
-          input,
-          quantity,
-          value: Math.round(toCanonical(quantity, value, unit) * 1e6) / 1e6,
-          unit: canonicalUnitOf(quantity),
-          verdict: judged.verdict,
-          limitValue: judged.limit,
-          limitUnit: judged.unit,
-          limitSource: judged.source,
-        });
-      } catch (error) {
-        if (!(error instanceof LimitError)) throw error;
-        problems.push({ field: `results.${index}.measurement`, message: error.message });
-      }
+      const field = `results.${index}`;
+      const before = problems.length;
+      const reading = input.measurement
+        ? this.judgeReading(input.measurement, item, inspection, `${field}.measurement`, problems)
+        : null;
+      const noReading = this.noReadingOf(input, item, inspection, field, problems);
+      const fixed = input.fixed ? this.spotFixOf(input, input.fixed, reading, item, inspection, field, problems) : null;
+      if (problems.length > before) continue;
+      prepared.push({
+        input,
+        quantity: reading?.measurement.quantity ?? null,
+        value: reading?.measurement.value ?? null,
+        unit: reading?.measurement.unit ?? null,
+        verdict: reading?.verdict ?? null,
+        limitValue: reading?.limitValue ?? null,
+        limitUnit: reading?.limitUnit ?? null,
+        limitSource: reading?.limitSource ?? null,
+        noReading,
+        fixed,
+      });
     }
     if (problems.length > 0) throw new ApiValidationException(problems);
     return prepared;
+  }
+
+  // A reading of the item, evaluated by the server: the client's verdict is never trusted.
+  private judgeReading(
+    measurement: MeasurementValueDto,
+    item: ChecklistItem,
+    inspection: Inspection,
+    field: string,
+    problems: FieldProblem[],
+  ): JudgedReading | null {
+    const { quantity, value, unit } = measurement;
+    if (item.expects.type !== 'measure') {
+      problems.push({ field, message: `${item.key} takes no measurement: send the answer only.` });
+      return null;
+    }
+    if (item.expects.quantity !== quantity) {
+      problems.push({
+        field: `${field}.quantity`,
+        message: `${item.key} measures ${item.expects.quantity}, not ${quantity}.`,
+      });
+      return null;
+    }
+    try {
+      const judged = evaluateMeasurement(quantity, value, unit, item.limitContext ?? {}, inspection.locale);
+      return {
+        measurement: {
+          quantity,
+          value: Math.round(toCanonical(quantity, value, unit) * 1e6) / 1e6,
+          unit: canonicalUnitOf(quantity),
+        },
+        verdict: judged.verdict,
+        limitValue: judged.limit,
+        limitUnit: judged.unit,
+        limitSource: judged.source,
+      };
+    } catch (error) {
+      if (!(error instanceof LimitError)) throw error;
+      problems.push({ field, message: error.message });
+      return null;
+    }
+  }
+
+  // A measured check passed without a value is recorded as such; whether the reading was required is the
+  // inspection's word (its required readings), not the client's.
+  private noReadingOf(
+    input: ResultUpsertDto,
+    item: ChecklistItem,
+    inspection: Inspection,
+    field: string,
+    problems: FieldProblem[],
+  ): NoReadingReason | null {
+    const measured = item.expects.type === 'measure';
+    if (input.noReading !== undefined) {
+      const problem = !measured
+        ? `${item.key} takes no reading: send noReading only on a measured check.`
+        : input.answer !== 'pass'
+          ? `noReading goes only with a pass; ${item.key} is answered ${input.answer}.`
+          : input.measurement
+            ? `${item.key} has a reading: send the measurement or noReading, not both.`
+            : null;
+      if (problem) {
+        problems.push({ field: `${field}.noReading`, message: problem });
+        return null;
+      }
+    }
+    if (!measured || input.answer !== 'pass' || input.measurement) return null;
+    return isReadingRequired(item, inspection.requiredReadings) ? 'no_gauge' : 'visual';
+  }
+
+  // A defect corrected on the spot. A new reading still out of limit is refused: that is a defect, not a fix.
+  private spotFixOf(
+    input: ResultUpsertDto,
+    fix: SpotFixDto,
+    reading: JudgedReading | null,
+    item: ChecklistItem,
+    inspection: Inspection,
+    field: string,
+    problems: FieldProblem[],
+  ): SpotFix | null {
+    if (input.answer !== 'defect' && reading?.verdict !== 'out_of_limit') {
+      problems.push({
+        field: `${field}.fixed`,
+        message: `A fix on the spot goes only with a defect; ${item.key} is answered ${input.answer}.`,
+      });
+      return null;
+    }
+    const spotFix: SpotFix = { action: fix.action.trim(), at: fix.at };
+    if (fix.heard !== undefined) spotFix.heard = fix.heard;
+    if (!spotFix.action) {
+      problems.push({ field: `${field}.fixed.action`, message: 'Say what was done on the spot, e.g. "added air".' });
+      return null;
+    }
+    // Without a new reading the fix is kept as said; the shared summary decides whether it counts.
+    if (!fix.measurement) return spotFix;
+    const judged = this.judgeReading(fix.measurement, item, inspection, `${field}.fixed.measurement`, problems);
+    if (!judged) return null;
+    if (judged.verdict === 'out_of_limit') {
+      const { value, unit } = judged.measurement;
+      problems.push({
+        field: `${field}.fixed.measurement`,
+        message: `The new reading of ${item.key}, ${value} ${unit}, is still out of limit (${judged.limitValue} ${judged.limitUnit}, ${judged.limitSource}): it is not fixed; send it as a defect.`,
+      });
+      return null;
+    }
+    spotFix.measurement = judged.measurement;
+    spotFix.verdict = judged.verdict;
+    return spotFix;
   }
 
   private checklistOf(inspection: Inspection): BuiltChecklist {
@@ -594,6 +721,7 @@ export class InspectionsService {
       location: inspection.location,
       odometer: inspection.odometer,
       checklist,
+      requiredReadings: inspection.requiredReadings,
       results: results.map(toResultResponse),
       notes: attachments.notes,
       photos: attachments.photos,

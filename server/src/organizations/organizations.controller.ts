@@ -6,6 +6,7 @@ import { CurrentUser } from '../auth/decorators/current-user.decorator';
 import { Roles } from '../auth/decorators/roles.decorator';
 import { ApiErrorBodyDto } from '../common/dto/api-error-body.dto';
 import { OrganizationSummaryDto } from './dto/organization-summary.dto';
+import { UpdateRequiredReadingsDto } from './dto/required-readings.dto';
 import { RetentionPurgeResultDto, RetentionSettingsDto, UpdateRetentionDto } from './dto/retention.dto';
 import { OrganizationsService } from './organizations.service';
 import { RetentionService } from './retention.service';
@@ -24,6 +25,18 @@ export class OrganizationsController {
   @ApiOkResponse({ type: OrganizationSummaryDto })
   current(@CurrentUser() user: AuthUser): Promise<OrganizationSummary> {
     return this.organizations.summary(user.organizationId);
+  }
+
+  @Patch('readings')
+  @Roles('admin')
+  @ApiOperation({
+    summary:
+      'Choose the readings every walk-around must take (by default none). Walk-arounds already begun keep theirs; a driver may still answer "no gauge".',
+  })
+  @ApiOkResponse({ type: OrganizationSummaryDto })
+  @ApiBadRequestResponse({ type: ApiErrorBodyDto, description: 'Not a list, or a reading the app does not know.' })
+  updateReadings(@CurrentUser() user: AuthUser, @Body() body: UpdateRequiredReadingsDto): Promise<OrganizationSummary> {
+    return this.organizations.updateRequiredReadings(user.organizationId, body.requiredReadings);
   }
 
   @Get('retention')

@@ -1,7 +1,8 @@
 import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
-import type { OrganizationSummary } from '@yardcall/shared';
+import { READING_RULES, type FieldProblem, type OrganizationSummary, type ReadingRule } from '@yardcall/shared';
 import { Repository } from 'typeorm';
+import { ApiValidationException } from '../common/api-validation.exception';
 import { Organization } from './entities/organization.entity';
 
 @Injectable()
@@ -11,6 +12,26 @@ export class OrganizationsService {
   async summary(organizationId: string): Promise<OrganizationSummary> {
     const organization = await this.organizations.findOneBy({ id: organizationId });
     if (!organization) throw new NotFoundException('Your organisation was not found.');
-    return { id: organization.id, name: organization.name };
+    return { id: organization.id, name: organization.name, requiredReadings: organization.requiredReadings };
+  }
+
+  // Stored once each, in READING_RULES order; a walk-around already begun keeps the rules it began with.
+  async updateRequiredReadings(organizationId: string, sent: readonly string[]): Promise<OrganizationSummary> {
+    const known = new Set<string>(READING_RULES);
+    const problems: FieldProblem[] = sent.flatMap((rule, index) =>
+      known.has(rule)
+        ? []
+        : [
+            {
+              field: `requiredReadings.${index}`,
+              message: `"${rule}" is not a reading the app knows; choose from: ${READING_RULES.join(', ')}.`,
+            },
+          ],
+    );
+    if (problems.length > 0) throw new ApiValidationException(problems);
+    const requiredReadings: ReadingRule[] = READING_RULES.filter((rule) => sent.includes(rule));
+    const result = await this.organizations.update({ id: organizationId }, { requiredReadings });
+    if (!result.affected) throw new NotFoundException('Your organisation was not found.');
+    return this.summary(organizationId);
   }
 }

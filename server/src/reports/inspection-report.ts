@@ -5,7 +5,11 @@ import {
   type DefectStatus,
   type InspectionKind,
   type InspectionResponse,
+  type InspectionSummary,
+  type NoReadingReason,
+  type ReadingRule,
   type SignatureRole,
+  type Verdict,
   type VehicleKind,
 } from '@yardcall/shared';
 import PDFDocument from 'pdfkit';
@@ -45,7 +49,8 @@ export type ReportInspection = Pick<
   | 'defects'
   | 'results'
   | 'notes'
->;
+  | 'requiredReadings'
+> & { summary: Pick<InspectionSummary, 'fixedOnTheSpot' | 'checkedWithoutReading' | 'noGauge'> };
 
 export interface InspectionReport {
   organizationName: string;
@@ -74,6 +79,27 @@ const STATUS_LABELS: Record<DefectStatus, string> = {
   repaired: 'Repaired',
   no_repair_needed: 'No repair needed',
   deferred: 'Deferred',
+};
+
+const READING_RULE_LABELS: Record<ReadingRule, string> = {
+  steer_tread_depth: 'steer tire tread depth',
+  tread_depth: 'tread depth of every tire',
+  tire_pressure: 'every tire pressure, with a gauge',
+  pushrod_stroke: 'brake push rod stroke',
+  lining_thickness: 'brake lining thickness',
+  steering_lash: 'steering wheel free play',
+  air_brake_test: 'air brake test readings',
+};
+
+const NO_READING_LABELS: Record<NoReadingReason, string> = {
+  visual: 'checked without a reading',
+  no_gauge: 'no gauge (reading required)',
+};
+
+const VERDICT_LABELS: Record<Verdict, string> = {
+  ok: 'within limit',
+  near_limit: 'near its limit',
+  out_of_limit: 'out of limit',
 };
 
 const ROLE_LABELS: Record<SignatureRole, string> = {
@@ -230,6 +256,62 @@ function writeDefect(writer: ReportWriter, defect: DefectResponse, report: Inspe
   }
 }
 
+// Defects corrected during the walk-around (the shared summary's list): on the record, apart from the
+// shop's defects.
+function writeSpotFixes(writer: ReportWriter, report: InspectionReport): void {
+  const { inspection } = report;
+  const fixed = inspection.summary.fixedOnTheSpot;
+  if (fixed.length === 0) return;
+  const measure = (value: number, unit: string) => formatMeasure(value, unit, inspection.locale);
+  writer.heading(`Fixed on the spot (${fixed.length})`);
+  writer.paragraph('Corrected by the driver during the inspection: no shop defect was opened for these.');
+  fixed.forEach((fix, index) => {
+    writer.ensureRoom(60);
+    writer.paragraph(`${index + 1}. ${fix.title}: ${fix.positionLabel}${fix.safety ? ', safety item' : ''}`, {
+      bold: true,
+    });
+    if (fix.detail) writer.paragraph(`Found: "${fix.detail}"`, { indent: 12 });
+    if (fix.measurement) {
+      const verdict = fix.verdict ? `, ${VERDICT_LABELS[fix.verdict]}` : '';
+      writer.paragraph(`Reading found: ${measure(fix.measurement.value, fix.measurement.unit)}${verdict}`, {
+        indent: 12,
+      });
+    }
+    writer.paragraph(`What was done: ${fix.action}, ${formatReportTime(fix.fixedAt)}`, { indent: 12 });
+    if (fix.newMeasurement) {
+      const verdict = fix.newVerdict ? `, ${VERDICT_LABELS[fix.newVerdict]}` : '';
+      writer.paragraph(`New reading: ${measure(fix.newMeasurement.value, fix.newMeasurement.unit)}${verdict}`, {
+        indent: 12,
+      });
+    }
+    if (fix.heard) writer.paragraph(`Heard: "${fix.heard}"`, { indent: 12 });
+  });
+}
+
+// Measured checks passed without a value, each said as such; the organisation's rules say which were required.
+function writeReadings(writer: ReportWriter, report: InspectionReport): void {
+  const { inspection } = report;
+  const { checkedWithoutReading, noGauge } = inspection.summary;
+  writer.heading('Readings');
+  writer.field(
+    'Required readings',
+    inspection.requiredReadings.length === 0
+      ? 'none (a measured check may be passed without a reading)'
+      : inspection.requiredReadings.map((rule) => READING_RULE_LABELS[rule]).join('; '),
+  );
+  const without = [...noGauge, ...checkedWithoutReading];
+  if (without.length === 0) {
+    writer.paragraph('Every measured check that was passed has its reading.');
+    return;
+  }
+  writer.paragraph(
+    `Measured checks passed without a reading (${without.length}): no gauge ${noGauge.length}, checked without a reading ${checkedWithoutReading.length}.`,
+  );
+  for (const entry of without) {
+    writer.paragraph(`${entry.title}: ${entry.positionLabel}: ${NO_READING_LABELS[entry.reason]}`, { indent: 12 });
+  }
+}
+
 function writeReport(writer: ReportWriter, report: InspectionReport): void {
   const { inspection } = report;
   const doc = writer.doc;
@@ -259,6 +341,9 @@ function writeReport(writer: ReportWriter, report: InspectionReport): void {
     writer.paragraph('No defect was found or reported on this inspection.');
   }
   inspection.defects.forEach((defect, index) => writeDefect(writer, defect, report, index));
+
+  writeSpotFixes(writer, report);
+  writeReadings(writer, report);
 
   writer.heading('Safety');
   writer.paragraph(safetyCaution(inspection.locale));

@@ -1,5 +1,5 @@
 // The HTTP contract between client and server: request and response shapes under /api.
-import type { Locale } from '../checklist/index.js';
+import type { Locale, ReadingRule } from '../checklist/index.js';
 import type { FieldProblem, VehicleConfig, VehicleKind, VehicleStatus } from '../vehicle/index.js';
 
 export const ROLES = ['driver', 'mechanic', 'supervisor', 'trainer', 'admin'] as const;
@@ -30,6 +30,12 @@ export const DEFAULT_DISPLAY_SETTINGS: DisplaySettings = {
 export interface OrganizationSummary {
   id: string;
   name: string;
+  // Readings every walk-around must take (by default none); a driver may still answer "no gauge".
+  requiredReadings: ReadingRule[];
+}
+
+export interface UpdateRequiredReadingsRequest {
+  requiredReadings: ReadingRule[];
 }
 
 export interface UserSummary {

@@ -6,6 +6,9 @@ import type {
   ItemResult,
   Locale,
   MeasurementValue,
+  NoReadingReason,
+  ReadingRule,
+  SpotFix,
   Verdict,
 } from '../checklist/index.js';
 import type { ReviewFlags, ZoneVisit } from '../review/index.js';
@@ -73,6 +76,10 @@ export interface ItemResultResponse {
   measurement: MeasurementValue | null;
   verdict: Verdict | null;
   limit: ResultLimit | null;
+  // A measured check passed without a value: the server's word, from the inspection's required readings.
+  noReading: NoReadingReason | null;
+  // A defect corrected on the spot; its new reading in the canonical unit with the server's verdict.
+  fixed: SpotFix | null;
   detail: string | null;
   heard: string | null;
   confidence: number | null;
@@ -188,6 +195,8 @@ export interface InspectionResponse extends InspectionListItem {
   location: string | null;
   odometer: number | null;
   checklist: Checklist;
+  // The organisation's required readings when the walk-around began: a later change rewrites no history.
+  requiredReadings: ReadingRule[];
   results: ItemResultResponse[];
   notes: VoiceNoteResponse[];
   photos: PhotoResponse[];

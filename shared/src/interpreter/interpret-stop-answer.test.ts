@@ -1,4 +1,8 @@
 import { describe, expect, it } from 'vitest';
+import fc from 'fast-check';
+import { normaliseText } from '../text/index.js';
+import { EN_LEXICON } from './lexicon/en.js';
+import { ES_LEXICON } from './lexicon/es.js';
 import { buildChecklist, sampleCombination, type Checklist, type Locale } from '../checklist/index.js';
 import { interpretStopAnswer } from './interpret-stop-answer.js';
 import { measurementToWords } from './read-back.js';
@@ -257,6 +261,20 @@ describe('interpretStopAnswer', () => {
     expect(at(wheel, 'the hub')).toMatchObject({ kind: 'unclear', reason: 'incomplete' });
     expect(at(wheel, 'purple monkey dishwasher')).toMatchObject({ kind: 'unclear', reason: 'not_understood' });
     expect(interpretStopAnswer([], wheel, 'en')).toEqual({ kind: 'unclear', reason: 'empty' });
+  });
+
+  it('never passes a stop on noise', () => {
+    // A short random string is sometimes a real pass word ("k", "si"): that is not noise.
+    const passWords = new Set(
+      [...EN_LEXICON.pass, ...ES_LEXICON.pass].flatMap((phrase) => normaliseText(phrase, 'en').tokens),
+    );
+    fc.assert(
+      fc.property(fc.string({ maxLength: 30 }), fc.constantFrom<Locale>('en', 'es'), (noise, locale) => {
+        fc.pre(!normaliseText(noise, locale).tokens.some((token) => passWords.has(token)));
+        const got = at(locale === 'en' ? wheel : rueda, noise, locale);
+        expect(got.kind === 'stop' && got.marks.length === 0).toBe(false);
+      }),
+    );
   });
 
   it('finds hypotheses that disagree between a pass and a problem unclear', () => {

@@ -2,14 +2,14 @@
 // loose", "defect, chafed air line", "good, ten thirty-seconds". Items the answer does not mark pass.
 import type { Locale } from '../checklist/index.js';
 import { normaliseText, originalWords, sliceText, type NormalisedText } from '../text/index.js';
+import { findNumbers } from '../numbers/index.js';
 import { QUANTITIES, type Quantity } from '../units/index.js';
 import { classifyWords, withoutFillers, type WordItem, type WordsVerdict } from './classify-words.js';
-import { compiledLexicon, type CompiledLexicon } from './compiled-lexicon.js';
-import { commandOf, heardOf, ranked, saysNoGauge } from './interpret-utterance.js';
+import type { CompiledLexicon } from './compiled-lexicon.js';
+import { disagreement, openAnswer, opposed, ranked, saysNoGauge, type Stance } from './interpret-utterance.js';
 import { PhraseMatcher, type PhraseMatch } from './phrase-matcher.js';
 import { readFix, type FixReading } from './read-fix.js';
 import { applyHomophones, correctedFrom, readMeasurement } from './read-measurement.js';
-import { findNumbers } from '../numbers/index.js';
 import type {
   Alternative,
   SpokenMeasurement,
@@ -18,8 +18,6 @@ import type {
   StopMark,
   UnclearReason,
 } from './types.js';
-
-type Heard = { heard: string; confidence?: number };
 
 // Pressures said without a unit below this are not tire or air pressures a driver reads out (a
 // truck tire in service runs far above it): a bare "ten" at a wheel end is a tread depth. Common
@@ -235,15 +233,9 @@ function interpretStopTranscript(
   locale: Locale,
   confidence: number | undefined,
 ): StopInterpretation {
-  const heard: Heard = heardOf(transcript, confidence);
-  const lx = compiledLexicon(locale);
-  const text = normaliseText(transcript, locale);
-  if (text.tokens.length === 0) return { kind: 'unclear', reason: 'empty', ...heard };
-  const allItems = lx.words.scan(text);
-  const spoken = withoutFillers(allItems);
-  if (spoken.length === 0) return { kind: 'unclear', reason: 'filler', ...heard };
-  const command = commandOf(text, spoken, lx, heard);
-  if (command) return command;
+  const opened = openAnswer(transcript, locale, confidence);
+  if ('kind' in opened) return opened;
+  const { heard, lx, text, allItems } = opened;
 
   const measured = new Set(items.flatMap((item) => (item.expects.type === 'measure' ? [item.expects.quantity] : [])));
   const fix = fixAtStop(transcript, text, allItems, measured, lx);
@@ -543,8 +535,6 @@ function markReading(
   return undefined;
 }
 
-type Stance = 'pass' | 'problem' | 'other';
-
 function stanceOf(interpretation: StopInterpretation): Stance {
   if (interpretation.kind === 'which') return 'problem';
   if (interpretation.kind !== 'stop') return 'other';
@@ -567,14 +557,7 @@ export function interpretStopAnswer(
   const topStance = stanceOf(top);
   for (const alt of ordered.slice(1)) {
     const stance = stanceOf(interpretStopTranscript(alt.transcript, items, locale, alt.confidence));
-    if ((topStance === 'pass' && stance === 'problem') || (topStance === 'problem' && stance === 'pass')) {
-      return {
-        kind: 'unclear',
-        reason: 'disagreement',
-        heard: top.heard,
-        ...(top.confidence === undefined ? {} : { confidence: top.confidence }),
-      };
-    }
+    if (opposed(topStance, stance)) return disagreement(top);
   }
   return top;
 }

@@ -99,12 +99,21 @@ function spokenFrom(
   return items.filter((item) => item.start >= from).flatMap((item) => text.tokens.slice(item.start, item.end));
 }
 
-export function interpretTranscript(
+export interface OpenedAnswer {
+  heard: { heard: string; confidence?: number };
+  lx: CompiledLexicon;
+  text: NormalisedText;
+  allItems: WordItem[];
+  // Without hesitations.
+  items: WordItem[];
+}
+
+// What every answer goes through first: nothing heard, only hesitation, or a command.
+export function openAnswer(
   transcript: string,
-  expectation: Expectation,
   locale: Locale,
-  confidence?: number,
-): Interpretation {
+  confidence: number | undefined,
+): OpenedAnswer | Extract<Interpretation, { kind: 'unclear' | 'command' }> {
   const heard = heardOf(transcript, confidence);
   const lx = compiledLexicon(locale);
   const text = normaliseText(transcript, locale);
@@ -112,9 +121,18 @@ export function interpretTranscript(
   const allItems = lx.words.scan(text);
   const items = withoutFillers(allItems);
   if (items.length === 0) return { kind: 'unclear', reason: 'filler', ...heard };
+  return commandOf(text, items, lx, heard) ?? { heard, lx, text, allItems, items };
+}
 
-  const command = commandOf(text, items, lx, heard);
-  if (command) return command;
+export function interpretTranscript(
+  transcript: string,
+  expectation: Expectation,
+  locale: Locale,
+  confidence?: number,
+): Interpretation {
+  const opened = openAnswer(transcript, locale, confidence);
+  if ('kind' in opened) return opened;
+  const { heard, lx, text, allItems, items } = opened;
 
   const quantity = expectation.type === 'measure' ? expectation.quantity : undefined;
   const fix = readFix(transcript, text, allItems, quantity, lx);
@@ -164,7 +182,26 @@ export function interpretTranscript(
   }
 }
 
-type Stance = 'pass' | 'problem' | 'other';
+export type Stance = 'pass' | 'problem' | 'other';
+
+// One hypothesis says fine and another says a problem: ask again rather than guess.
+export function opposed(a: Stance, b: Stance): boolean {
+  return (a === 'pass' && b === 'problem') || (a === 'problem' && b === 'pass');
+}
+
+export function disagreement(top: { heard: string; confidence?: number }): {
+  kind: 'unclear';
+  reason: 'disagreement';
+  heard: string;
+  confidence?: number;
+} {
+  return {
+    kind: 'unclear',
+    reason: 'disagreement',
+    heard: top.heard,
+    ...(top.confidence === undefined ? {} : { confidence: top.confidence }),
+  };
+}
 
 function stanceOf(interpretation: Interpretation): Stance {
   if (interpretation.kind !== 'answer') return 'other';
@@ -201,30 +238,14 @@ export function interpretUtterance(
     .map((alt) => ({ alt, meaning: interpretTranscript(alt.transcript, expectation, locale, alt.confidence) }));
   const topStance = stanceOf(top);
   for (const { alt, meaning } of others) {
-    const stance = stanceOf(meaning);
-    // One hypothesis says fine and another says a problem: ask again rather than guess.
-    if ((topStance === 'pass' && stance === 'problem') || (topStance === 'problem' && stance === 'pass')) {
-      return {
-        kind: 'unclear',
-        reason: 'disagreement',
-        heard: top.heard,
-        ...(top.confidence === undefined ? {} : { confidence: top.confidence }),
-      };
-    }
+    if (opposed(topStance, stanceOf(meaning))) return disagreement(top);
     if (top.kind === 'measurement' && meaning.kind === 'measurement') {
       const close =
         alt.confidence === undefined ||
         best.confidence === undefined ||
         alt.confidence >= best.confidence - VALUE_DOUBT_MARGIN;
       const differs = Math.abs(meaning.measurement.value - top.measurement.value) > 1e-6;
-      if (close && differs) {
-        return {
-          kind: 'unclear',
-          reason: 'disagreement',
-          heard: top.heard,
-          ...(top.confidence === undefined ? {} : { confidence: top.confidence }),
-        };
-      }
+      if (close && differs) return disagreement(top);
     }
   }
   return top;

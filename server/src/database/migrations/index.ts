@@ -3,6 +3,7 @@ import { CreateInspections1764700000000 } from './1764700000000-CreateInspection
 import { CreateNotesAndPhotos1764800000000 } from './1764800000000-CreateNotesAndPhotos';
 import { FleetReviewRetention1764900000000 } from './1764900000000-FleetReviewRetention';
 import { CreateTraining1764950000000 } from './1764950000000-CreateTraining';
+import { ReadingsAndSpotFixes1765200000000 } from './1765200000000-ReadingsAndSpotFixes';
 
 // Every migration in order, passed as classes; add new ones at the end.
 export const MIGRATIONS = [
@@ -11,4 +12,5 @@ export const MIGRATIONS = [
   CreateNotesAndPhotos1764800000000,
   FleetReviewRetention1764900000000,
   CreateTraining1764950000000,
+  ReadingsAndSpotFixes1765200000000,
 ];

@@ -4,6 +4,7 @@ import {
   INSPECTION_SORT_FIELDS,
   INSPECTION_STATUSES,
   LOCALES,
+  READING_RULES,
   SORT_DIRECTIONS,
   type InspectionListQuery,
   type InspectionSortField,
@@ -22,6 +23,7 @@ import {
   type Locale,
   type PendingAcknowledgement,
   type PhotoResponse,
+  type ReadingRule,
   type SubmitInspectionRequest,
   type VoiceNoteResponse,
 } from '@yardcall/shared';
@@ -281,6 +283,13 @@ export class InspectionResponseDto extends InspectionListItemDto implements Insp
     description: 'Built by the server from the vehicles as configured when the walk-around began.',
   })
   checklist: Checklist;
+
+  @ApiProperty({
+    enum: READING_RULES,
+    isArray: true,
+    description: "The organisation's required readings when the walk-around began; empty: none.",
+  })
+  requiredReadings: ReadingRule[];
 
   @ApiProperty({ type: [ItemResultResponseDto] })
   results: ItemResultResponseDto[];

@@ -1,16 +1,19 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import {
   ANSWERS,
+  NO_READING_REASONS,
   QUANTITIES,
   VERDICTS,
   type Answer,
   type ItemResultResponse,
   type MeasurementValue,
+  type NoReadingReason,
   type PutResultsRequest,
   type PutResultsResponse,
   type Quantity,
   type ResultLimit,
   type ResultUpsert,
+  type SpotFix,
   type Verdict,
 } from '@yardcall/shared';
 import { Type } from 'class-transformer';
@@ -29,10 +32,13 @@ import {
   Min,
   ValidateNested,
 } from 'class-validator';
+import { NotInTheFuture } from '../../common/client-time';
 
 // One batch holds a whole walk-around of a tractor and two trailers with room to spare.
 export const RESULTS_BATCH_MAX = 500;
 export const CLIENT_ID_MAX = 64;
+// What was done on the spot is a few words ("added air", "replaced the bulb"); a note says more.
+export const SPOT_FIX_ACTION_MAX = 300;
 
 export class MeasurementValueDto implements MeasurementValue {
   @ApiProperty({ enum: QUANTITIES })
@@ -47,6 +53,44 @@ export class MeasurementValueDto implements MeasurementValue {
   @IsString({ message: 'Send the unit as text, e.g. in/32, psi, in.' })
   @MaxLength(16, { message: 'A unit has at most 16 characters.' })
   unit: string;
+}
+
+// A defect corrected during the walk-around. Whether it may be sent with an answer, and the verdict on
+// its new reading, are the service's (it knows the item); the client's verdict is informative only.
+export class SpotFixDto implements SpotFix {
+  @ApiProperty({ example: 'added air', maxLength: SPOT_FIX_ACTION_MAX })
+  @IsString({ message: 'Send what was done on the spot as text, e.g. "added air".' })
+  @IsNotEmpty({ message: 'Say what was done on the spot, e.g. "added air".' })
+  @MaxLength(SPOT_FIX_ACTION_MAX, {
+    message: `Keep what was done on the spot under ${SPOT_FIX_ACTION_MAX} characters; a note can say more.`,
+  })
+  action: string;
+
+  @ApiPropertyOptional({
+    type: MeasurementValueDto,
+    description: 'The new reading; in the canonical unit when answered.',
+  })
+  @IsOptional()
+  @IsObject({ message: 'Send the new reading as {quantity, value, unit}.' })
+  @ValidateNested()
+  @Type(() => MeasurementValueDto)
+  measurement?: MeasurementValueDto;
+
+  @ApiPropertyOptional({ enum: VERDICTS, description: 'Informative when sent; answered with the server’s verdict.' })
+  @IsOptional()
+  @IsIn(VERDICTS, { message: `Choose a verdict: ${VERDICTS.join(', ')}.` })
+  verdict?: Verdict;
+
+  @ApiPropertyOptional({ description: 'What the recogniser heard.' })
+  @IsOptional()
+  @IsString({ message: 'Send what was heard as text.' })
+  @MaxLength(2000, { message: 'Keep what was heard under 2000 characters.' })
+  heard?: string;
+
+  @ApiProperty({ format: 'date-time' })
+  @IsISO8601({ strict: true }, { message: 'Send fixed.at as an ISO 8601 time, e.g. 2026-12-01T06:15:00.000Z.' })
+  @NotInTheFuture()
+  at: string;
 }
 
 export class ResultUpsertDto implements ResultUpsert {
@@ -72,6 +116,22 @@ export class ResultUpsertDto implements ResultUpsert {
   @IsIn(VERDICTS, { message: `Choose a verdict: ${VERDICTS.join(', ')}.` })
   verdict?: Verdict;
 
+  @ApiPropertyOptional({
+    enum: NO_READING_REASONS,
+    description:
+      'Only on a pass of a measured check without a value. Informative: the server records no_gauge where the inspection requires the reading, visual elsewhere.',
+  })
+  @IsOptional()
+  @IsIn(NO_READING_REASONS, { message: `Choose why there is no reading: ${NO_READING_REASONS.join(', ')}.` })
+  noReading?: NoReadingReason;
+
+  @ApiPropertyOptional({ type: SpotFixDto, description: 'Only on a defect corrected on the spot.' })
+  @IsOptional()
+  @IsObject({ message: 'Send the fix as {action, measurement?, heard?, at}.' })
+  @ValidateNested()
+  @Type(() => SpotFixDto)
+  fixed?: SpotFixDto;
+
   @ApiPropertyOptional({ example: 'cracked lens' })
   @IsOptional()
   @IsString({ message: 'Send the detail as text.' })
@@ -93,6 +153,7 @@ export class ResultUpsertDto implements ResultUpsert {
 
   @ApiProperty({ format: 'date-time' })
   @IsISO8601({ strict: true }, { message: 'Send answeredAt as an ISO 8601 time, e.g. 2026-12-01T06:15:00.000Z.' })
+  @NotInTheFuture()
   answeredAt: string;
 
   @ApiProperty({ description: 'Made by the client; a retried answer with the same id changes nothing.' })
@@ -143,6 +204,12 @@ export class ItemResultResponseDto implements ItemResultResponse {
 
   @ApiProperty({ type: ResultLimitDto, nullable: true })
   limit: ResultLimitDto | null;
+
+  @ApiProperty({ enum: NO_READING_REASONS, nullable: true, description: 'A measured check passed without a value.' })
+  noReading: NoReadingReason | null;
+
+  @ApiProperty({ type: SpotFixDto, nullable: true, description: 'A defect corrected on the spot.' })
+  fixed: SpotFixDto | null;
 
   @ApiProperty({ type: String, nullable: true })
   detail: string | null;

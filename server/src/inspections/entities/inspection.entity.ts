@@ -4,6 +4,7 @@ import {
   type InspectionKind,
   type InspectionStatus,
   type Locale,
+  type ReadingRule,
   type VehicleConfig,
   type VehicleKind,
 } from '@yardcall/shared';
@@ -64,6 +65,10 @@ export class Inspection extends EditableOrganizationOwned {
 
   @Column({ type: 'jsonb' })
   vehicles: InspectionVehicleSnapshot[];
+
+  // The organisation's required readings when the walk-around began, so a later change rewrites no history.
+  @Column({ name: 'required_readings', type: 'jsonb', default: [] })
+  requiredReadings: ReadingRule[];
 
   @Column({ type: 'boolean', default: false })
   rushed: boolean;

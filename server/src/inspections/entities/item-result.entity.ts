@@ -1,4 +1,13 @@
-import { ANSWERS, VERDICTS, type Answer, type Quantity, type Verdict } from '@yardcall/shared';
+import {
+  ANSWERS,
+  NO_READING_REASONS,
+  VERDICTS,
+  type Answer,
+  type NoReadingReason,
+  type Quantity,
+  type SpotFix,
+  type Verdict,
+} from '@yardcall/shared';
 import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
 import { Inspection } from './inspection.entity';
 
@@ -47,6 +56,20 @@ export class ItemResult {
 
   @Column({ name: 'limit_source', type: 'varchar', length: 120, nullable: true })
   limitSource: string | null;
+
+  // Set by the server on a measured check passed without a value, from the inspection's required readings.
+  @Column({
+    name: 'no_reading',
+    type: 'enum',
+    enum: [...NO_READING_REASONS],
+    enumName: 'item_no_reading',
+    nullable: true,
+  })
+  noReading: NoReadingReason | null;
+
+  // A defect corrected on the spot: its new reading in the canonical unit, judged by the server.
+  @Column({ type: 'jsonb', nullable: true })
+  fixed: SpotFix | null;
 
   @Column({ type: 'text', nullable: true })
   detail: string | null;

@@ -1,5 +1,5 @@
 import { ApiProperty } from '@nestjs/swagger';
-import type { OrganizationSummary } from '@yardcall/shared';
+import { READING_RULES, type OrganizationSummary, type ReadingRule } from '@yardcall/shared';
 
 export class OrganizationSummaryDto implements OrganizationSummary {
   @ApiProperty({ format: 'uuid' })
@@ -7,4 +7,11 @@ export class OrganizationSummaryDto implements OrganizationSummary {
 
   @ApiProperty({ example: 'Kestrel Valley Freight' })
   name: string;
+
+  @ApiProperty({
+    enum: READING_RULES,
+    isArray: true,
+    description: 'Readings every walk-around must take; empty: none.',
+  })
+  requiredReadings: ReadingRule[];
 }

@@ -1,3 +1,4 @@
+import type { ReadingRule } from '@yardcall/shared';
 import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
 
 @Entity({ name: 'organizations' })
@@ -11,6 +12,10 @@ export class Organization {
   // How long inspection records are kept; never below 3 (49 CFR 396.11(a)(4)), checked by the service.
   @Column({ name: 'retention_months', type: 'integer', default: 3 })
   retentionMonths: number;
+
+  // Readings every walk-around must take; by default none (checked against READING_RULES by the service).
+  @Column({ name: 'required_readings', type: 'jsonb', default: [] })
+  requiredReadings: ReadingRule[];
 
   @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
   createdAt: Date;

@@ -2,4 +2,5 @@
 export const organizationKeys = {
   all: ['organization'] as const,
   retention: () => [...organizationKeys.all, 'retention'] as const,
+  current: () => [...organizationKeys.all, 'current'] as const,
 };
