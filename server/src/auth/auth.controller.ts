@@ -1,4 +1,4 @@
-import { Body, Controller, Get, HttpCode, HttpStatus, Patch, Post, UseGuards } from '@nestjs/common';
+import { Body, Controller, Get, HttpCode, HttpStatus, Ip, Patch, Post } from '@nestjs/common';
 import {
   ApiBearerAuth,
   ApiOkResponse,
@@ -17,7 +17,6 @@ import { Public } from './decorators/public.decorator';
 import { UpdateDisplaySettingsDto } from './dto/display-settings.dto';
 import { LoginResponseDto } from './dto/login-response.dto';
 import { LoginDto } from './dto/login.dto';
-import { LoginThrottlerGuard } from './guards/login-throttler.guard';
 
 @ApiTags('auth')
 @Controller('auth')
@@ -25,15 +24,17 @@ export class AuthController {
   constructor(private readonly auth: AuthService) {}
 
   @Public()
-  @UseGuards(LoginThrottlerGuard)
   @Post('login')
   @HttpCode(HttpStatus.OK)
   @ApiOperation({ summary: 'Sign in with e-mail and password; answers an access token and the user.' })
   @ApiOkResponse({ type: LoginResponseDto })
   @ApiUnauthorizedResponse({ type: ApiErrorBodyDto, description: 'Email or password is wrong.' })
-  @ApiTooManyRequestsResponse({ type: ApiErrorBodyDto, description: 'Too many attempts for this e-mail address.' })
-  login(@Body() body: LoginDto): Promise<LoginResponse> {
-    return this.auth.login(body.email, body.password);
+  @ApiTooManyRequestsResponse({
+    type: ApiErrorBodyDto,
+    description: 'Too many failed attempts for this e-mail address, or from this client, in the last minute.',
+  })
+  login(@Body() body: LoginDto, @Ip() client: string): Promise<LoginResponse> {
+    return this.auth.login(body.email, body.password, client);
   }
 
   @ApiBearerAuth()

@@ -7,6 +7,7 @@ import { User } from '../users/entities/user.entity';
 import { toUserSummary } from '../users/user-summary';
 import type { AccessTokenPayload } from './auth-user';
 import type { UpdateDisplaySettingsDto } from './dto/display-settings.dto';
+import { LoginLimiter } from './login-limiter';
 import { verifyPassword } from './password';
 
 const WRONG_CREDENTIALS = 'Email or password is wrong.';
@@ -16,16 +17,23 @@ export class AuthService {
   constructor(
     @InjectRepository(User) private readonly users: Repository<User>,
     private readonly jwt: JwtService,
+    private readonly limiter: LoginLimiter,
   ) {}
 
-  async login(email: string, password: string): Promise<LoginResponse> {
+  // `client` is the caller's address (behind a local proxy, the one it forwards).
+  async login(email: string, password: string, client: string): Promise<LoginResponse> {
+    this.limiter.assertAllowed(client, email);
     const user = await this.users
       .createQueryBuilder('user')
       .innerJoinAndSelect('user.organization', 'organization')
       .where('lower(user.email) = lower(:email)', { email: email.trim() })
       .getOne();
     const ok = await verifyPassword(password, user?.status === 'active' ? (user.passwordHash ?? null) : null);
-    if (!user || !ok) throw new UnauthorizedException(WRONG_CREDENTIALS);
+    if (!user || !ok) {
+      this.limiter.recordFailure(client, email);
+      throw new UnauthorizedException(WRONG_CREDENTIALS);
+    }
+    this.limiter.recordSuccess(email);
     return this.issue(user);
   }
 
