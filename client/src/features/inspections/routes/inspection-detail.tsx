@@ -10,6 +10,7 @@ import type { WaveformHandle } from '@/lib/audio/waveform-player';
 import { describeError } from '@/lib/errors';
 import { inspectionQueryOptions, useInspection } from '../api/get-inspection';
 import { useReportPdf } from '../api/get-report-pdf';
+import { FixedOnTheSpot } from '../components/fixed-on-the-spot';
 import { InspectionFacts, InspectionFlags, inspectionTitle } from '../components/inspection-header';
 import { InspectionItems } from '../components/inspection-items';
 import { InspectionNotes } from '../components/inspection-notes';
@@ -83,6 +84,9 @@ export function InspectionDetailRoute() {
       </Section>
       <Section title={t('inspections.detail.route')} id="inspection-route">
         <InspectionTimeline visits={data.timeline} />
+      </Section>
+      <Section title={t('inspections.detail.fixes')} id="inspection-fixes">
+        <FixedOnTheSpot inspection={data} />
       </Section>
       <Section title={t('inspections.detail.items')} id="inspection-answers">
         <div className="mb-4">
