@@ -55,6 +55,8 @@ const ROUTES: RouteRow[] = [
   { method: 'get', path: '/api/fleet/board', access: ['supervisor', 'admin', 'mechanic'] },
   { method: 'get', path: '/api/inspections/export.csv', access: ['supervisor', 'admin'] },
   { method: 'patch', path: '/api/organizations/readings', access: ['admin'] },
+  { method: 'get', path: '/api/organizations/time-zone', access: 'signed-in' },
+  { method: 'patch', path: '/api/organizations/time-zone', access: ['admin'] },
   { method: 'get', path: '/api/organizations/retention', access: ['admin'] },
   { method: 'patch', path: '/api/organizations/retention', access: ['admin'] },
   { method: 'post', path: '/api/organizations/retention/purge', access: ['admin'] },

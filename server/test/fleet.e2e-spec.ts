@@ -1,7 +1,8 @@
-import type { ChecklistItem, FleetBoard, InspectionResponse, ResultUpsert, Role } from '@yardcall/shared';
+import type { ChecklistItem, FleetBoard, ResultUpsert, Role } from '@yardcall/shared';
 import { randomInt, randomUUID } from 'node:crypto';
 import request from 'supertest';
 import {
+  answerAndSubmit,
   bearer,
   bodyOf,
   createVehicle,
@@ -45,17 +46,7 @@ describe('fleet board', () => {
       answeredAt: new Date(startMs + (index + 1) * 6000).toISOString(),
       clientId: randomUUID(),
     }));
-    const put = await request(t.url)
-      .put(`/api/inspections/${started.id}/results`)
-      .set(bearer(tokens.driver))
-      .send({ results });
-    expect(put.status).toBe(200);
-    const submitted = await request(t.url)
-      .post(`/api/inspections/${started.id}/submit`)
-      .set(bearer(tokens.driver))
-      .send({ signature: { name: 'Dana Okafor' } });
-    expect(submitted.status).toBe(200);
-    return bodyOf<InspectionResponse>(submitted);
+    return answerAndSubmit(t.url, tokens.driver, started.id, results);
   }
 
   it('shows each vehicle with its status, since when and why it is out of service, and its last report', async () => {

@@ -44,7 +44,8 @@ describe('inspections and defects', () => {
   let secondDriver: string;
   let otherAdmin: string;
   // Each walk-around starts a minute after the one before, so lists have a known order.
-  let clock = Date.parse('2026-11-01T06:00:00.000Z');
+  // Starting two days ago: within the offline window, and a minute apart never reaches the present.
+  let clock = Date.now() - 2 * 24 * 3_600_000;
   const nextStart = () => new Date((clock += 60_000)).toISOString();
 
   beforeAll(async () => {

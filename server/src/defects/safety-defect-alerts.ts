@@ -1,7 +1,9 @@
 import { Injectable, Logger, type OnApplicationBootstrap } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
+import { DEFAULT_TIME_ZONE } from '@yardcall/shared';
 import { DataSource, In } from 'typeorm';
 import type { AppEnv } from '../config/env.validation';
+import { Organization } from '../organizations/entities/organization.entity';
 import { Inspection } from '../inspections/entities/inspection.entity';
 import { JOB_SAFETY_DEFECT_REPORTED, type SafetyDefectReportedJob } from '../jobs/job-names';
 import { JobsService, type RetryPolicy } from '../jobs/jobs.service';
@@ -43,7 +45,7 @@ export class SafetyDefectAlerts implements OnApplicationBootstrap {
     const manager = this.dataSource.manager;
     const inspection = await manager.findOneBy(Inspection, { id: inspectionId, organizationId });
     if (!inspection) return [];
-    const [defects, driver, recipients] = await Promise.all([
+    const [defects, driver, recipients, organization] = await Promise.all([
       manager.find(Defect, {
         where: { inspectionId, organizationId, safety: true },
         order: { createdAt: 'ASC', id: 'ASC' },
@@ -54,6 +56,7 @@ export class SafetyDefectAlerts implements OnApplicationBootstrap {
         where: { organizationId, role: In(['mechanic', 'supervisor']), status: 'active' },
         order: { email: 'ASC' },
       }),
+      manager.findOne(Organization, { select: { id: true, timeZone: true }, where: { id: organizationId } }),
     ]);
     if (defects.length === 0) return [];
     const unitOf = new Map(inspection.vehicles.map((v) => [v.id, v.unitNumber]));
@@ -62,6 +65,7 @@ export class SafetyDefectAlerts implements OnApplicationBootstrap {
       kind: inspection.kind,
       units: inspection.vehicles.map((v) => v.unitNumber),
       submittedAt: inspection.submittedAt,
+      timeZone: organization?.timeZone ?? DEFAULT_TIME_ZONE,
       defects: defects.map((d) => ({
         unit: unitOf.get(d.vehicleId) ?? '?',
         title: d.title,

@@ -5,6 +5,7 @@ const facts: SafetyDefectFacts = {
   kind: 'pre_trip',
   units: ['KV-101', 'KV-T21'],
   submittedAt: new Date('2026-11-30T06:20:00.000Z'),
+  timeZone: 'America/Chicago',
   defects: [
     { unit: 'KV-101', title: 'Air leak', positionLabel: 'Tractor, cab', detail: 'audible at idle' },
     { unit: 'KV-T21', title: 'Brake hose', positionLabel: 'Trailer, axle 1, left', detail: null },
@@ -23,6 +24,12 @@ describe('safety-defect e-mail', () => {
     expect(mail.text).toContain('396.11(a)(3)');
     expect(mail.text).toContain('Open the report: http://yardcall.example.test/inspections/abc');
     expect(mail.text).toContain('does not replace your judgement');
+  });
+
+  it("gives the submit time on the organisation's clock, with the zone's name", () => {
+    expect(safetyDefectMail('en', 'mechanic@yardcall.test', facts).text).toContain('(submitted 2026-11-30 00:20 CST)');
+    const utc = safetyDefectMail('en', 'mechanic@yardcall.test', { ...facts, timeZone: 'UTC' });
+    expect(utc.text).toContain('(submitted 2026-11-30 06:20 UTC)');
   });
 
   it('speaks Spanish to a recipient who reads Spanish', () => {

@@ -1,4 +1,4 @@
-import type { InspectionKind, Locale } from '@yardcall/shared';
+import { formatZonedTime, type InspectionKind, type Locale } from '@yardcall/shared';
 import type { OutgoingMail } from '../mail/mail.service';
 
 export interface SafetyDefectFacts {
@@ -7,6 +7,8 @@ export interface SafetyDefectFacts {
   // Power unit first, then trailers.
   units: string[];
   submittedAt: Date | null;
+  // The organisation's IANA time zone: the time reads as the people at the yard see it.
+  timeZone: string;
   defects: { unit: string; title: string; positionLabel: string; detail: string | null }[];
   link: string;
 }
@@ -29,7 +31,7 @@ function list(locale: Locale, items: string[]): string {
 // The subject names the unit(s) with a safety defect; the body the driver, each defect and the link.
 export function safetyDefectMail(locale: Locale, to: string, facts: SafetyDefectFacts): OutgoingMail {
   const defectUnits = [...new Set(facts.defects.map((d) => d.unit))];
-  const when = facts.submittedAt?.toISOString() ?? '';
+  const when = facts.submittedAt ? formatZonedTime(facts.submittedAt, facts.timeZone) : '';
   const lines = facts.defects.map(
     (d) => `- ${d.unit}: ${d.title}, ${d.positionLabel}${d.detail ? ` (${d.detail})` : ''}`,
   );

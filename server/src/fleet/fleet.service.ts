@@ -24,7 +24,7 @@ export class FleetService {
     const manager = this.dataSource.manager;
     const [vehicles, defects, last] = await Promise.all([
       manager.find(Vehicle, {
-        select: { id: true, unitNumber: true, kind: true, status: true, statusSince: true },
+        select: { id: true, unitNumber: true, kind: true, status: true, statusSince: true, statusReason: true },
         where: { organizationId },
       }),
       manager.find(Defect, {
@@ -72,6 +72,7 @@ export class FleetService {
         kind: v.kind,
         status: v.status,
         outOfServiceSince: v.status === 'out_of_service' ? v.statusSince.toISOString() : null,
+        statusReason: v.status === 'out_of_service' ? v.statusReason : null,
         openSafetyDefects: defectsOf.get(v.id) ?? [],
         lastInspection: lastOf.get(v.id) ?? null,
       }))

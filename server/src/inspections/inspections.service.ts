@@ -3,6 +3,7 @@ import { InjectRepository } from '@nestjs/typeorm';
 import {
   ChecklistError,
   DEFAULT_DISPLAY_SETTINGS,
+  DEFAULT_TIME_ZONE,
   LimitError,
   buildChecklist,
   canonicalUnitOf,
@@ -24,7 +25,7 @@ import {
   type SpotFix,
   type Verdict,
 } from '@yardcall/shared';
-import { DataSource, In, Repository } from 'typeorm';
+import { DataSource, In, Repository, type SelectQueryBuilder } from 'typeorm';
 import type { AuthUser } from '../auth/auth-user';
 import { ApiValidationException } from '../common/api-validation.exception';
 import { isUniqueViolation } from '../common/database-errors';
@@ -136,7 +137,8 @@ WITH input AS (
     measurement_unit = EXCLUDED.measurement_unit, verdict = EXCLUDED.verdict,
     limit_value = EXCLUDED.limit_value, limit_unit = EXCLUDED.limit_unit, limit_source = EXCLUDED.limit_source,
     detail = EXCLUDED.detail, heard = EXCLUDED.heard, confidence = EXCLUDED.confidence,
-    answered_at = EXCLUDED.answered_at, no_reading = EXCLUDED.no_reading, fixed = EXCLUDED.fixed
+    answered_at = EXCLUDED.answered_at, no_reading = EXCLUDED.no_reading, fixed = EXCLUDED.fixed,
+    received_at = now()
   WHERE r.answered_at < EXCLUDED.answered_at
      OR (r.answered_at = EXCLUDED.answered_at AND r.client_id <> EXCLUDED.client_id)
   RETURNING r.*
@@ -174,17 +176,46 @@ function timeOf(iso: string): number {
   return Date.parse(iso);
 }
 
+// An answer is given during its walk-around: never before the start (both times are the phone's).
+function assertAnsweredAfterStart(results: readonly ResultUpsertDto[], startedAt: Date): void {
+  const problems = results.flatMap((result, index) =>
+    timeOf(result.answeredAt) < startedAt.getTime()
+      ? [
+          {
+            field: `results.${index}.answeredAt`,
+            message: `${result.answeredAt} is before this walk-around started (${startedAt.toISOString()}): check the phone's date and time.`,
+          },
+        ]
+      : [],
+  );
+  if (problems.length > 0) throw new ApiValidationException(problems);
+}
+
 const EXPORT_PAGE = 500;
 const BARE_DATE = /^\d{4}-\d{2}-\d{2}$/;
 
-// A bare date is a UTC day: `from` its start, `to` the end of it (the next day's start, exclusive).
-function dayOrTime(text: string, bound: 'from' | 'to'): Date {
-  const date = new Date(BARE_DATE.test(text) ? `${text}T00:00:00.000Z` : text);
+// A bare date is a day of the organisation's time zone: `from` its start, `to` the end of it (the next
+// day's start, exclusive). PostgreSQL works out the day's edges, daylight saving time included.
+function whereStartedWithin(
+  builder: SelectQueryBuilder<Inspection>,
+  bound: 'from' | 'to',
+  text: string,
+  timeZone: string,
+): void {
+  const operator = bound === 'from' ? '>=' : '<';
+  if (BARE_DATE.test(text)) {
+    const day = bound === 'from' ? `:${bound}Day::date` : `(:${bound}Day::date + 1)`;
+    builder.andWhere(`inspection.started_at ${operator} (${day})::timestamp AT TIME ZONE :dayZone`, {
+      [`${bound}Day`]: text,
+      dayZone: timeZone,
+    });
+    return;
+  }
+  const date = new Date(text);
   if (Number.isNaN(date.getTime())) {
     throw new ApiValidationException([{ field: bound, message: `${text} is not a day or time this list knows.` }]);
   }
-  if (BARE_DATE.test(text) && bound === 'to') date.setUTCDate(date.getUTCDate() + 1);
-  return date;
+  builder.andWhere(`inspection.started_at ${operator} :${bound}`, { [bound]: date });
 }
 
 @Injectable()
@@ -320,8 +351,11 @@ export class InspectionsService {
     if (query.driverId) builder.andWhere('inspection.driver_id = :driverId', { driverId: query.driverId });
     if (query.kind) builder.andWhere('inspection.kind = :kind', { kind: query.kind });
     if (query.status) builder.andWhere('inspection.status = :status', { status: query.status });
-    if (query.from) builder.andWhere('inspection.started_at >= :from', { from: dayOrTime(query.from, 'from') });
-    if (query.to) builder.andWhere('inspection.started_at < :to', { to: dayOrTime(query.to, 'to') });
+    if (query.from || query.to) {
+      const timeZone = await this.timeZoneOf(user.organizationId);
+      if (query.from) whereStartedWithin(builder, 'from', query.from, timeZone);
+      if (query.to) whereStartedWithin(builder, 'to', query.to, timeZone);
+    }
     // Written as the partial indexes' predicates, so the planner can use them.
     if (query.hasDefects !== undefined) {
       builder.andWhere(query.hasDefects ? 'inspection.defect_count > 0' : 'inspection.defect_count = 0');
@@ -357,6 +391,14 @@ export class InspectionsService {
     };
   }
 
+  private async timeZoneOf(organizationId: string): Promise<string> {
+    const organization = await this.dataSource.manager.findOne(Organization, {
+      select: { id: true, timeZone: true },
+      where: { id: organizationId },
+    });
+    return organization?.timeZone ?? DEFAULT_TIME_ZONE;
+  }
+
   async get(user: AuthUser, id: string): Promise<InspectionResponse> {
     return this.assemble(await this.findReadable(user, id));
   }
@@ -380,15 +422,22 @@ export class InspectionsService {
     return this.editable(inspection);
   }
 
-  private editable(inspection: Inspection | null): { inspection: Inspection; checklist: Checklist } {
-    if (!inspection) throw new NotFoundException(NOT_FOUND);
-    if (inspection.status === 'submitted') throw new ConflictException(SUBMITTED_MESSAGE);
+  private editable(found: Inspection | null): { inspection: Inspection; checklist: Checklist } {
+    const inspection = this.assertEditable(found);
     return { inspection, checklist: this.checklistOf(inspection).checklist };
   }
 
+  private assertEditable(inspection: Inspection | null): Inspection {
+    if (!inspection) throw new NotFoundException(NOT_FOUND);
+    if (inspection.status === 'submitted') throw new ConflictException(SUBMITTED_MESSAGE);
+    return inspection;
+  }
+
   async putResults(user: AuthUser, id: string, dto: PutResultsDto): Promise<ItemResultResponse[]> {
-    // The hot path: the vehicles snapshot is read only when the checklist is not cached.
-    const { inspection } = this.editable(
+    // The hot path: the vehicles snapshot is read only when the checklist is not cached. The cache is
+    // read once: a later read could find the entry evicted meanwhile, with no snapshot to rebuild from.
+    const cached = this.checklists.get(id);
+    const inspection = this.assertEditable(
       await this.inspections.findOne({
         select: {
           id: true,
@@ -396,12 +445,14 @@ export class InspectionsService {
           status: true,
           locale: true,
           requiredReadings: true,
-          vehicles: !this.checklists.has(id),
+          startedAt: true,
+          vehicles: !cached,
         },
         where: { id, organizationId: user.organizationId, driverId: user.id },
       }),
     );
-    const { byKey } = this.checklistOf(inspection);
+    const { byKey } = cached ?? this.checklistOf(inspection);
+    assertAnsweredAfterStart(dto.results, inspection.startedAt);
     const prepared = this.prepareResults(dto.results, byKey, inspection);
     if (prepared.length === 0) return [];
     const column = <T>(pick: (p: PreparedResult) => T): T[] => prepared.map(pick);

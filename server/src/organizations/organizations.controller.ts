@@ -1,6 +1,11 @@
 import { Body, Controller, Get, HttpCode, Patch, Post } from '@nestjs/common';
 import { ApiBadRequestResponse, ApiBearerAuth, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
-import type { OrganizationSummary, RetentionPurgeResult, RetentionSettings } from '@yardcall/shared';
+import type {
+  OrganizationSummary,
+  OrganizationTimeZone,
+  RetentionPurgeResult,
+  RetentionSettings,
+} from '@yardcall/shared';
 import type { AuthUser } from '../auth/auth-user';
 import { CurrentUser } from '../auth/decorators/current-user.decorator';
 import { Roles } from '../auth/decorators/roles.decorator';
@@ -8,6 +13,7 @@ import { ApiErrorBodyDto } from '../common/dto/api-error-body.dto';
 import { OrganizationSummaryDto } from './dto/organization-summary.dto';
 import { UpdateRequiredReadingsDto } from './dto/required-readings.dto';
 import { RetentionPurgeResultDto, RetentionSettingsDto, UpdateRetentionDto } from './dto/retention.dto';
+import { OrganizationTimeZoneDto, UpdateTimeZoneDto } from './dto/time-zone.dto';
 import { OrganizationsService } from './organizations.service';
 import { RetentionService } from './retention.service';
 
@@ -37,6 +43,22 @@ export class OrganizationsController {
   @ApiBadRequestResponse({ type: ApiErrorBodyDto, description: 'Not a list, or a reading the app does not know.' })
   updateReadings(@CurrentUser() user: AuthUser, @Body() body: UpdateRequiredReadingsDto): Promise<OrganizationSummary> {
     return this.organizations.updateRequiredReadings(user.organizationId, body.requiredReadings);
+  }
+
+  @Get('time-zone')
+  @ApiOperation({ summary: "The organisation's time zone: days, report times and e-mails read in it." })
+  @ApiOkResponse({ type: OrganizationTimeZoneDto })
+  getTimeZone(@CurrentUser() user: AuthUser): Promise<OrganizationTimeZone> {
+    return this.organizations.timeZone(user.organizationId);
+  }
+
+  @Patch('time-zone')
+  @Roles('admin')
+  @ApiOperation({ summary: "Set the organisation's time zone (an IANA name, e.g. America/Chicago)." })
+  @ApiOkResponse({ type: OrganizationTimeZoneDto })
+  @ApiBadRequestResponse({ type: ApiErrorBodyDto, description: 'Not a time zone name the server knows.' })
+  updateTimeZone(@CurrentUser() user: AuthUser, @Body() body: UpdateTimeZoneDto): Promise<OrganizationTimeZone> {
+    return this.organizations.updateTimeZone(user.organizationId, body.timeZone);
   }
 
   @Get('retention')

@@ -1,6 +1,13 @@
 import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
-import { READING_RULES, type FieldProblem, type OrganizationSummary, type ReadingRule } from '@yardcall/shared';
+import {
+  READING_RULES,
+  canonicalTimeZone,
+  type FieldProblem,
+  type OrganizationSummary,
+  type OrganizationTimeZone,
+  type ReadingRule,
+} from '@yardcall/shared';
 import { Repository } from 'typeorm';
 import { ApiValidationException } from '../common/api-validation.exception';
 import { Organization } from './entities/organization.entity';
@@ -33,5 +40,29 @@ export class OrganizationsService {
     const result = await this.organizations.update({ id: organizationId }, { requiredReadings });
     if (!result.affected) throw new NotFoundException('Your organisation was not found.');
     return this.summary(organizationId);
+  }
+
+  async timeZone(organizationId: string): Promise<OrganizationTimeZone> {
+    const organization = await this.organizations.findOne({
+      select: { id: true, timeZone: true },
+      where: { id: organizationId },
+    });
+    if (!organization) throw new NotFoundException('Your organisation was not found.');
+    return { timeZone: organization.timeZone };
+  }
+
+  async updateTimeZone(organizationId: string, name: string): Promise<OrganizationTimeZone> {
+    const timeZone = canonicalTimeZone(name.trim());
+    if (!timeZone) {
+      throw new ApiValidationException([
+        {
+          field: 'timeZone',
+          message: `"${name}" is not a time zone name this server knows: use an IANA name such as America/Chicago, Europe/Madrid or UTC.`,
+        },
+      ]);
+    }
+    const result = await this.organizations.update({ id: organizationId }, { timeZone });
+    if (!result.affected) throw new NotFoundException('Your organisation was not found.');
+    return { timeZone };
   }
 }

@@ -1,4 +1,6 @@
 import {
+  DEFAULT_TIME_ZONE,
+  formatZonedTime,
   formatMeasure,
   safetyCaution,
   type DefectResponse,
@@ -58,6 +60,8 @@ export interface InspectionReport {
   vehicles: ReportVehicle[];
   signatures: ReportSignature[];
   generatedAt: string;
+  // The organisation's IANA time zone; every time in the report reads in it (UTC when absent).
+  timeZone?: string;
 }
 
 const KIND_LABELS: Record<InspectionKind, string> = {
@@ -118,10 +122,10 @@ const BOLD_TTF = require.resolve('@expo-google-fonts/atkinson-hyperlegible/700Bo
 const MARGIN = 54;
 const SIGNATURE_BOX = { width: 220, height: 70 };
 
-export function formatReportTime(iso: string | null): string {
+export function formatReportTime(iso: string | null, timeZone = DEFAULT_TIME_ZONE): string {
   if (!iso) return '—';
   const date = new Date(iso);
-  return Number.isNaN(date.getTime()) ? iso : `${date.toISOString().slice(0, 16).replace('T', ' ')} UTC`;
+  return Number.isNaN(date.getTime()) ? iso : formatZonedTime(date, timeZone);
 }
 
 class ReportWriter {
@@ -248,9 +252,9 @@ function writeDefect(writer: ReportWriter, defect: DefectResponse, report: Inspe
   if (measured) writer.paragraph(measured, { indent: 12 });
   if (defect.repair) {
     const repair = defect.repair;
-    const until = repair.deferredUntil ? `, until ${formatReportTime(repair.deferredUntil)}` : '';
+    const until = repair.deferredUntil ? `, until ${formatReportTime(repair.deferredUntil, report.timeZone)}` : '';
     writer.paragraph(
-      `Certified ${STATUS_LABELS[repair.action].toLowerCase()}${until} by ${repair.mechanic.name}, ${formatReportTime(repair.signedAt)}: ${repair.note}`,
+      `Certified ${STATUS_LABELS[repair.action].toLowerCase()}${until} by ${repair.mechanic.name}, ${formatReportTime(repair.signedAt, report.timeZone)}: ${repair.note}`,
       { indent: 12 },
     );
   }
@@ -277,7 +281,7 @@ function writeSpotFixes(writer: ReportWriter, report: InspectionReport): void {
         indent: 12,
       });
     }
-    writer.paragraph(`What was done: ${fix.action}, ${formatReportTime(fix.fixedAt)}`, { indent: 12 });
+    writer.paragraph(`What was done: ${fix.action}, ${formatReportTime(fix.fixedAt, report.timeZone)}`, { indent: 12 });
     if (fix.newMeasurement) {
       const verdict = fix.newVerdict ? `, ${VERDICT_LABELS[fix.newVerdict]}` : '';
       writer.paragraph(`New reading: ${measure(fix.newMeasurement.value, fix.newMeasurement.unit)}${verdict}`, {
@@ -323,8 +327,11 @@ function writeReport(writer: ReportWriter, report: InspectionReport): void {
   doc.moveDown(0.5).fontSize(11);
 
   writer.field('Driver', inspection.driver.name);
-  writer.field('Started', formatReportTime(inspection.startedAt));
-  writer.field('Submitted', inspection.submittedAt ? formatReportTime(inspection.submittedAt) : 'Not yet submitted');
+  writer.field('Started', formatReportTime(inspection.startedAt, report.timeZone));
+  writer.field(
+    'Submitted',
+    inspection.submittedAt ? formatReportTime(inspection.submittedAt, report.timeZone) : 'Not yet submitted',
+  );
   writer.field('Odometer', inspection.odometer === null ? '—' : inspection.odometer.toLocaleString('en-US'));
   writer.field('Location', inspection.location ?? '—');
   writer.field('Report id', inspection.id);
@@ -355,7 +362,7 @@ function writeReport(writer: ReportWriter, report: InspectionReport): void {
     const signer =
       signature.signerName && signature.signerName !== signature.name ? ` (account: ${signature.signerName})` : '';
     writer.paragraph(
-      `${ROLE_LABELS[signature.role]}: ${signature.name}${signer}, ${formatReportTime(signature.signedAt)}`,
+      `${ROLE_LABELS[signature.role]}: ${signature.name}${signer}, ${formatReportTime(signature.signedAt, report.timeZone)}`,
       {
         bold: true,
       },
@@ -375,7 +382,7 @@ function writeReport(writer: ReportWriter, report: InspectionReport): void {
       .font(REGULAR)
       .fontSize(8)
       .text(
-        `Yardcall · generated ${formatReportTime(report.generatedAt)} · page ${page + 1} of ${range.count}`,
+        `Yardcall · generated ${formatReportTime(report.generatedAt, report.timeZone)} · page ${page + 1} of ${range.count}`,
         MARGIN,
         doc.page.height - MARGIN + 16,
         { width: doc.page.width - MARGIN * 2, align: 'center', lineBreak: false },

@@ -52,6 +52,7 @@ export class ReportsService {
         drawing: drawingOf.get(s.id) ?? null,
       })),
       generatedAt: now.toISOString(),
+      timeZone: organization.timeZone,
     };
   }
 

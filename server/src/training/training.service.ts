@@ -178,7 +178,9 @@ export class TrainingService {
       }
       return { created: false, attempt: await this.assemble(attempt) };
     }
-    const objectKey = `training/${attempt.id}/recording.${checked.extension}`;
+    // Named by its content: two uploads racing for one attempt never write to the same object, so the
+    // loser cannot overwrite the winner's bytes (the same file writes the same bytes).
+    const objectKey = `training/${attempt.id}/${checked.sha256}.${checked.extension}`;
     await this.storage.put(objectKey, checked.buffer, { contentType: checked.mimeType });
     const result = await this.attempts
       .createQueryBuilder()
@@ -194,8 +196,9 @@ export class TrainingService {
       .execute();
     const saved = await this.attempts.findOneByOrFail({ id: attempt.id });
     if (!result.affected) {
-      // Another upload raced in first; it stands if it is the same file.
+      // Another upload raced in first; it stands if it is the same file, and this one's object goes.
       if (saved.audioSha256 !== checked.sha256) {
+        await this.storage.delete(objectKey);
         throw new ConflictException('This practice attempt already has its recording.');
       }
       return { created: false, attempt: await this.assemble(saved) };

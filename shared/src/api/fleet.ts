@@ -27,6 +27,8 @@ export interface FleetBoardVehicle {
   status: VehicleStatus;
   // When the vehicle went out of service; null while it is in service.
   outOfServiceSince: string | null;
+  // Why, in words: a hold put by hand (the supervisor's or admin's reason), then the open safety defects.
+  statusReason: string | null;
   // Why it is out of service: its open safety defects, oldest first (empty when in service).
   openSafetyDefects: FleetBoardDefect[];
   // The last submitted inspection that covered it, or null.

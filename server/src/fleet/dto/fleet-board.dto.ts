@@ -60,6 +60,13 @@ export class FleetBoardVehicleDto implements FleetBoardVehicle {
   @ApiProperty({ type: String, format: 'date-time', nullable: true })
   outOfServiceSince: string | null;
 
+  @ApiProperty({
+    type: String,
+    nullable: true,
+    description: 'Why it is out of service, in words: a hold put by hand first, then the open safety defects.',
+  })
+  statusReason: string | null;
+
   @ApiProperty({ type: [FleetBoardDefectDto], description: 'Why it is out of service: its open safety defects.' })
   openSafetyDefects: FleetBoardDefectDto[];
 

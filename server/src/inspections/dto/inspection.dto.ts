@@ -47,6 +47,7 @@ import {
   Min,
   ValidateNested,
 } from 'class-validator';
+import { NotInTheFuture, WithinOfflineWindow } from '../../common/client-time';
 import { DefectResponseDto } from '../../defects/dto/defect.dto';
 import { InspectionVehicleDto, PersonRefDto } from './person-ref.dto';
 import { CLIENT_ID_MAX, ItemResultResponseDto } from './result.dto';
@@ -73,6 +74,8 @@ export class CreateInspectionDto implements CreateInspectionRequest {
 
   @ApiProperty({ format: 'date-time' })
   @IsISO8601({ strict: true }, { message: `Send startedAt as ${ISO_TIME}.` })
+  @NotInTheFuture()
+  @WithinOfflineWindow()
   startedAt: string;
 
   @ApiPropertyOptional({ example: 'Kestrel Valley yard, bay 3' })

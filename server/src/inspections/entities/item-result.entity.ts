@@ -82,4 +82,8 @@ export class ItemResult {
 
   @Column({ name: 'answered_at', type: 'timestamptz' })
   answeredAt: Date;
+
+  // The server's own clock when this answer was stored (answeredAt is the phone's).
+  @Column({ name: 'received_at', type: 'timestamptz', default: () => 'now()' })
+  receivedAt: Date;
 }

@@ -17,6 +17,10 @@ export class Organization {
   @Column({ name: 'required_readings', type: 'jsonb', default: [] })
   requiredReadings: ReadingRule[];
 
+  // An IANA time zone name: the supervisor's days, the report PDF and the e-mails read times in it.
+  @Column({ name: 'time_zone', type: 'varchar', length: 64, default: 'UTC' })
+  timeZone: string;
+
   @CreateDateColumn({ name: 'created_at', type: 'timestamptz' })
   createdAt: Date;
 }

@@ -36,6 +36,7 @@ import {
   Min,
   ValidateNested,
 } from 'class-validator';
+import { NotInTheFuture, WithinOfflineWindow } from '../../common/client-time';
 
 const CLIENT_ID_MAX = 64;
 const ITEM_KEY_MAX = 160;
@@ -63,6 +64,8 @@ export class CreateTrainingAttemptDto implements CreateTrainingAttemptRequest {
 
   @ApiProperty({ format: 'date-time' })
   @IsISO8601({ strict: true }, { message: `Send startedAt as ${ISO_TIME}.` })
+  @NotInTheFuture()
+  @WithinOfflineWindow()
   startedAt: string;
 
   @ApiPropertyOptional({ enum: LOCALES, description: "Defaults to the student's language." })
@@ -120,6 +123,7 @@ export class TrainingAudioUploadDto implements TrainingAudioUpload {
 export class FinishTrainingAttemptDto implements FinishTrainingAttemptRequest {
   @ApiProperty({ format: 'date-time' })
   @IsISO8601({ strict: true }, { message: `Send finishedAt as ${ISO_TIME}.` })
+  @NotInTheFuture()
   finishedAt: string;
 
   @ApiProperty({ description: 'Length of the narration in milliseconds.' })

@@ -35,4 +35,9 @@ export class Vehicle extends EditableOrganizationOwned {
 
   @Column({ type: 'jsonb' })
   config: VehicleConfig;
+
+  // Set when a supervisor or admin took the unit out of service by hand: their reason. The hold stays
+  // until they lift it, whatever happens to the unit's defects.
+  @Column({ name: 'manual_hold_reason', type: 'text', nullable: true })
+  manualHoldReason: string | null;
 }

@@ -49,7 +49,7 @@ function BoardUnit({ vehicle }: { vehicle: FleetBoardVehicle }) {
             <div>
               <p className="font-bold">{t('board.why')}</p>
               {vehicle.openSafetyDefects.length === 0 ? (
-                <p>{t('board.noReason')}</p>
+                <p data-testid="board-reason">{vehicle.statusReason ?? t('board.noReason')}</p>
               ) : (
                 <ul className="ml-5 list-disc" data-testid="board-defects">
                   {vehicle.openSafetyDefects.map((defect) => (
