@@ -1,6 +1,7 @@
 import { defineConfig } from 'vitest/config';
 import react from '@vitejs/plugin-react';
 import tailwindcss from '@tailwindcss/vite';
+import { VitePWA } from 'vite-plugin-pwa';
 
 // The API runs beside the dev server; the built client is served by the API itself.
 const reactRouterBuild = (file: string) =>
@@ -8,8 +9,44 @@ const reactRouterBuild = (file: string) =>
 
 const apiProxy = { '/api': { target: 'http://127.0.0.1:3000', changeOrigin: false } };
 
+// An installable app that opens with no signal: the service worker (src/lib/offline/service-worker.ts)
+// precaches the shell, every screen, the fonts and the words; the run route gets its own page.
+const pwa = VitePWA({
+  strategies: 'injectManifest',
+  srcDir: 'src/lib/offline',
+  filename: 'service-worker.ts',
+  // Registered by the app itself (src/lib/offline/app-update.ts), after the first screen.
+  injectRegister: false,
+  registerType: 'prompt',
+  manifest: {
+    id: '/',
+    name: 'Yardcall',
+    short_name: 'Yardcall',
+    description: 'Spoken walk-around inspections and signed DVIRs, with or without a signal.',
+    start_url: '/',
+    scope: '/',
+    display: 'standalone',
+    orientation: 'portrait',
+    theme_color: '#0b4f6c',
+    background_color: '#0b4f6c',
+    icons: [
+      { src: '/icons/icon-192.png', sizes: '192x192', type: 'image/png', purpose: 'any' },
+      { src: '/icons/icon-512.png', sizes: '512x512', type: 'image/png', purpose: 'any' },
+      { src: '/icons/maskable-512.png', sizes: '512x512', type: 'image/png', purpose: 'maskable' },
+      { src: '/favicon.svg', sizes: 'any', type: 'image/svg+xml', purpose: 'any' },
+    ],
+  },
+  includeAssets: ['favicon.svg', 'icons/apple-touch-icon.png'],
+  injectManifest: {
+    // Fonts as woff2 only (every browser that runs a service worker reads it).
+    globPatterns: ['**/*.{js,css,html,svg,png,woff2,webmanifest}'],
+    // ffmpeg.wasm is for the office's audio tools, never a driver's phone with no signal.
+    globIgnores: ['**/ffmpeg-core*', '**/*.wasm'],
+  },
+});
+
 export default defineConfig({
-  plugins: [react(), tailwindcss()],
+  plugins: [react(), tailwindcss(), pwa],
   resolve: { alias: { '@': new URL('./src', import.meta.url).pathname } },
   build: {
     outDir: 'dist',

@@ -6,6 +6,7 @@ import { createRoot } from 'react-dom/client';
 import { App } from '@/app/app';
 import { applyDisplaySettings, readCachedDisplaySettings } from '@/lib/display-settings';
 import { addScreenWords } from '@/lib/i18n/add-screen-words';
+import { registerAppServiceWorker } from '@/lib/offline/app-update';
 
 // Before the first paint: every screen's words, and the last settings used on this device (text
 // size, theme, language).
@@ -14,6 +15,7 @@ applyDisplaySettings(readCachedDisplaySettings());
 
 const root = document.getElementById('root');
 if (!root) throw new Error('index.html has no #root element.');
+registerAppServiceWorker();
 createRoot(root).render(
   <StrictMode>
     <App />

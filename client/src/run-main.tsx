@@ -5,6 +5,7 @@ import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { RunPage } from '@/app/run-page';
 import { applyDisplaySettings, readCachedDisplaySettings } from '@/lib/display-settings';
+import { registerAppServiceWorker } from '@/lib/offline/app-update';
 
 // A walk-around opened cold (a reload, a resume from a link): the glove screen alone, without the
 // router and the rest of the app, so the phone loads as little as it can.
@@ -12,6 +13,9 @@ applyDisplaySettings(readCachedDisplaySettings());
 
 const root = document.getElementById('root');
 if (!root) throw new Error('driver-run/index.html has no #root element.');
+// Registered here too (a cold load of a run may be the phone's first visit); a new version is
+// never offered on this page, only on the homes between walk-arounds.
+registerAppServiceWorker();
 createRoot(root).render(
   <StrictMode>
     <RunPage clientId={decodeURIComponent(window.location.pathname.split('/').filter(Boolean).at(-1) ?? '')} />

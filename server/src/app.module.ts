@@ -24,7 +24,8 @@ import { UsersModule } from './users/users.module';
 import { VehiclesModule } from './vehicles/vehicles.module';
 
 // The client's run route, /driver/inspections/:clientId (not its /finish).
-const RUN_PAGE_PATH = /^\/driver\/inspections\/[^/]+\/?$/;
+const RUN_PAGE_ROOT = '/driver/inspections';
+const RUN_PAGE_PATH = '/:clientId';
 
 // The environment is the only configuration source (no .env file), checked once at boot. forRoot answers a
 // promise that a bad value rejects; NestFactory.create then rejects with that sentence. The no-op catch only
@@ -50,10 +51,12 @@ void configModule.catch(() => undefined);
         const clientDist = config.get('CLIENT_DIST', { infer: true });
         if (!clientDist) return [];
         return [
-          // A walk-around's run route opened cold gets the glove screen's own light page (no
-          // directory index from this folder, so "/" stays the app's).
+          // A walk-around's run route opened cold gets the glove screen's own light page. Mounted under
+          // the run routes only: at the root this folder would answer /index.html (which the service
+          // worker precaches as the app) with the run page.
           {
             rootPath: join(clientDist, 'driver-run'),
+            serveRoot: RUN_PAGE_ROOT,
             renderPath: RUN_PAGE_PATH,
             serveStaticOptions: { index: false },
           },
