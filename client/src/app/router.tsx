@@ -139,6 +139,10 @@ export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
               const route = await import('@/features/organization/routes/retention');
               return { Component: route.RetentionRoute, loader: route.retentionLoader(queryClient) };
             }),
+            screen('admin/time-zone', ['admin'], async () => {
+              const route = await import('@/features/organization/routes/time-zone');
+              return { Component: route.TimeZoneRoute, loader: route.timeZoneLoader(queryClient) };
+            }),
             screen('admin/readings', ['admin'], async () => {
               const route = await import('@/features/organization/routes/required-readings');
               return { Component: route.RequiredReadingsRoute, loader: route.requiredReadingsLoader(queryClient) };

@@ -9,6 +9,7 @@ export function AdminHome() {
     { to: '/vehicles', label: t('admin.vehicles'), hint: t('admin.vehiclesHint') },
     { to: '/admin/outbox', label: t('admin.outbox'), hint: t('admin.outboxHint') },
     { to: '/admin/retention', label: t('retention.homeLink'), hint: t('retention.homeHint') },
+    { to: '/admin/time-zone', label: t('timeZone.homeLink'), hint: t('timeZone.homeHint') },
     { to: '/admin/readings', label: t('readings.homeLink'), hint: t('readings.homeHint') },
   ];
   return (

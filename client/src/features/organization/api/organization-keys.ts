@@ -3,4 +3,5 @@ export const organizationKeys = {
   all: ['organization'] as const,
   retention: () => [...organizationKeys.all, 'retention'] as const,
   current: () => [...organizationKeys.all, 'current'] as const,
+  timeZone: () => [...organizationKeys.all, 'time-zone'] as const,
 };
