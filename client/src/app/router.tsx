@@ -64,7 +64,7 @@ export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
             publicScreen('settings', async () => (await import('@/features/settings/routes/settings')).SettingsRoute),
 
             screen('driver', ['driver'], async () => ({
-              Component: (await import('@/features/home/routes/driver-home')).DriverHome,
+              Component: (await import('./routes/driver-home')).DriverHomeRoute,
             })),
             screen('driver/start', ['driver'], async () => {
               const route = await import('./routes/start-inspection');

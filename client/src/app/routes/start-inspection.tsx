@@ -1,11 +1,15 @@
 import type { QueryClient } from '@tanstack/react-query';
+import { startDataQueryOptions } from '@/features/walkaround/api/get-start-data';
 import { StartWalkaround } from '@/features/walkaround/components/start-walkaround';
 import { useVehicles, vehiclesQueryOptions } from '@/features/vehicles/api/get-vehicles';
 import { VehiclePicker } from '@/features/vehicles/components/vehicle-picker';
 
+// The units come with the start data, which the phone keeps for a start with no signal: the
+// picker's list is filled from it, so it shows whether or not the server answers.
 export function startInspectionLoader(queryClient: QueryClient) {
   return async () => {
-    await queryClient.ensureQueryData(vehiclesQueryOptions());
+    const start = await queryClient.fetchQuery(startDataQueryOptions());
+    queryClient.setQueryData(vehiclesQueryOptions().queryKey, start.data.vehicles);
     return null;
   };
 }

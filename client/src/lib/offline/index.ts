@@ -8,9 +8,18 @@ export type {
   OfflineDb,
   OutboxEntry,
   OutboxKind,
+  Refusal,
 } from './offline-db';
-export { createOfflineStore } from './offline-store';
-export type { LocalWalkaround, NewInspection, NewNote, NewPhoto, OfflineStore } from './offline-store';
+export { createOfflineStore, SignedInspectionError } from './offline-store';
+export type { LocalWalkaround, NewInspection, NewNote, NewPhoto, OfflineStore, RefusedEntry } from './offline-store';
+export { getStartData, readKeptStartData, START_DATA_KEY } from './start-data';
+export { fetchKeepingCopy, readKeptCopy } from './kept-copy';
+export type { KeptCopy } from './kept-copy';
+export type { KeptStartData, StartData } from './start-data';
+export { estimateStorageRoom } from './storage-estimate';
+export { describeCopyAge } from './copy-age';
+export { registerAppServiceWorker, useAppUpdate } from './app-update';
+export type { StorageRoom } from './storage-estimate';
 export {
   createSyncEngine,
   defaultRetryDelayMs,

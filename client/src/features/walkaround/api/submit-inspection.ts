@@ -1,43 +1,27 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { InspectionResponse, SubmitInspectionRequest } from '@yardcall/shared';
-import { ApiError, NETWORK_ERROR_STATUS, api } from '@/lib/api-client';
-import { getOfflineRuntime } from '@/lib/offline';
+import type { SubmitInspectionRequest } from '@yardcall/shared';
+import { getOfflineRuntime, type LocalInspection } from '@/lib/offline';
 import { walkaroundKeys } from './walkaround-keys';
 
-export function submitInspection(inspectionId: string, body: SubmitInspectionRequest): Promise<InspectionResponse> {
-  return api.post<InspectionResponse>(`/inspections/${encodeURIComponent(inspectionId)}/submit`, body);
-}
-
-export class WaitingToSyncError extends Error {
-  constructor(readonly waiting: number) {
-    super('Some answers are still waiting to sync.');
-    this.name = 'WaitingToSyncError';
-  }
-}
-
-// Submitting needs the server: everything waiting is sent first, so the signed report holds every
-// answer, note and photo. Offline, nothing is lost: it stays on the phone until the driver retries.
-export async function syncThenSubmit(clientId: string, body: SubmitInspectionRequest): Promise<InspectionResponse> {
+// Signing needs no signal: the signed report is kept on the phone and the outbox sends it after
+// its answers, notes and photos, now or when the phone finds a network. The server keeps the time
+// it was signed here and the time it arrived.
+export async function signWalkaround(clientId: string, body: SubmitInspectionRequest): Promise<LocalInspection> {
   const { engine, store } = getOfflineRuntime();
-  if (globalThis.navigator?.onLine === false) {
-    throw new ApiError(NETWORK_ERROR_STATUS, 'offline', 'network');
-  }
-  await engine.syncNow();
-  await engine.idle();
-  const waiting = await store.countWaitingFor(clientId);
-  const serverId = await store.serverIdOf(clientId);
-  if (waiting > 0 || !serverId) throw new WaitingToSyncError(waiting);
-  return submitInspection(serverId, body);
+  const signed = await store.signInspection(clientId, { ...body, signedAt: body.signedAt ?? new Date().toISOString() });
+  // Not awaited: with no signal the run ends at once; with signal the report view follows.
+  void engine.syncNow();
+  return signed;
 }
 
-export function useSubmitInspection(clientId: string) {
+export function useSignWalkaround(clientId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: SubmitInspectionRequest) => syncThenSubmit(clientId, body),
-    onSuccess: async (inspection) => {
-      queryClient.setQueryData(walkaroundKeys.detail(inspection.id), inspection);
-      // The local copy learnt its server id during the sync: read it again so the report shows.
+    mutationFn: (body: SubmitInspectionRequest) => signWalkaround(clientId, body),
+    networkMode: 'always',
+    onSuccess: async () => {
       await queryClient.invalidateQueries({ queryKey: walkaroundKeys.local(clientId) });
+      await queryClient.invalidateQueries({ queryKey: walkaroundKeys.localLists() });
     },
   });
 }

@@ -1,4 +1,5 @@
-import { useState, type FormEvent } from 'react';
+import { useEffect, useState, type FormEvent } from 'react';
+import { useQueryClient } from '@tanstack/react-query';
 import { useTranslation } from 'react-i18next';
 import { formatMeasure, summarizeInspection, type ItemResult, type Locale } from '@yardcall/shared';
 import { ErrorAlert } from '@/components/ui/alert';
@@ -7,16 +8,59 @@ import { LinkButton } from '@/components/ui/link-button';
 import { TextField } from '@/components/ui/field';
 import { SignaturePad } from '@/components/ui/signature-pad';
 import { Card, EmptyState, PageHeading, Section } from '@/components/ui/layout';
-import { ApiError, NETWORK_ERROR_STATUS } from '@/lib/api-client';
 import { describeError } from '@/lib/errors';
-import type { LocalWalkaround } from '@/lib/offline';
-import { WaitingToSyncError, useSubmitInspection } from '../api/submit-inspection';
+import { useSyncStatus, type LocalInspection, type LocalWalkaround } from '@/lib/offline';
+import { useSignWalkaround } from '../api/submit-inspection';
+import { walkaroundKeys } from '../api/walkaround-keys';
 import { SafetyCaution } from '@/components/ui/safety-caution';
 
 // How many unanswered items are named one by one; the rest are counted.
 const UNANSWERED_SHOWN = 10;
 
+// Signed on this phone: the report waits in the outbox until the server has it. The driver may
+// close the app; the screen turns into the report once the server acknowledges it.
+function SignedWaiting({ inspection }: { inspection: LocalInspection }) {
+  const { t, i18n } = useTranslation();
+  const queryClient = useQueryClient();
+  const status = useSyncStatus();
+  useEffect(() => {
+    // Each acknowledgement may be this report's: read the local copy and the server's report again.
+    void queryClient.invalidateQueries({ queryKey: walkaroundKeys.local(inspection.clientId) });
+    if (inspection.serverId) {
+      void queryClient.invalidateQueries({ queryKey: walkaroundKeys.detail(inspection.serverId) });
+    }
+  }, [status.lastSyncedAt, queryClient, inspection.clientId, inspection.serverId]);
+  const signedAt = new Date(inspection.signed?.signedAt ?? inspection.updatedAt).toLocaleString(i18n.language, {
+    dateStyle: 'medium',
+    timeStyle: 'short',
+  });
+  return (
+    <div data-testid="signed-waiting" data-sent={inspection.submittedAt ? 'yes' : 'no'}>
+      <PageHeading
+        title={t('walkaround.finish.signedTitle')}
+        lead={t('walkaround.finish.signedAt', { at: signedAt })}
+      />
+      <Card>
+        <p className="text-xl font-bold" role="status">
+          {inspection.submittedAt ? t('walkaround.finish.signedSent') : t('walkaround.finish.signedWaiting')}
+        </p>
+        {inspection.submittedAt ? null : <p>{t('walkaround.finish.signedMayClose')}</p>}
+      </Card>
+      <div className="mt-6">
+        <LinkButton to="/driver" variant="secondary">
+          {t('walkaround.finish.toHome')}
+        </LinkButton>
+      </div>
+    </div>
+  );
+}
+
 export function FinishReview({ walkaround, runPath }: { walkaround: LocalWalkaround; runPath: string }) {
+  if (walkaround.inspection.signed) return <SignedWaiting inspection={walkaround.inspection} />;
+  return <FinishForm walkaround={walkaround} runPath={runPath} />;
+}
+
+function FinishForm({ walkaround, runPath }: { walkaround: LocalWalkaround; runPath: string }) {
   const { t, i18n } = useTranslation();
   const locale: Locale = i18n.language === 'es' ? 'es' : 'en';
   const { inspection } = walkaround;
@@ -27,7 +71,7 @@ export function FinishReview({ walkaround, runPath }: { walkaround: LocalWalkaro
   const [name, setName] = useState('');
   const [drawing, setDrawing] = useState<string | null>(null);
   const [errors, setErrors] = useState<{ name?: string; odometer?: string }>({});
-  const submit = useSubmitInspection(inspection.clientId);
+  const submit = useSignWalkaround(inspection.clientId);
   const outOfLimit = summary.defects.filter((d) => d.reasons.includes('out_of_limit'));
 
   const onSubmit = (event: FormEvent) => {
@@ -43,12 +87,6 @@ export function FinishReview({ walkaround, runPath }: { walkaround: LocalWalkaro
       signature: { name: name.trim(), ...(drawing ? { drawing } : {}) },
       ...(miles !== undefined ? { odometer: miles } : {}),
     });
-  };
-
-  const submitError = (error: unknown): string => {
-    if (error instanceof WaitingToSyncError) return t('walkaround.finish.stillWaiting', { count: error.waiting });
-    if (error instanceof ApiError && error.status === NETWORK_ERROR_STATUS) return t('walkaround.finish.offline');
-    return describeError(error);
   };
 
   return (
@@ -147,8 +185,8 @@ export function FinishReview({ walkaround, runPath }: { walkaround: LocalWalkaro
           clearLabel={t('walkaround.finish.clearSignature')}
           onChange={setDrawing}
         />
-        <p>{t('walkaround.finish.needsConnection')}</p>
-        {submit.isError ? <ErrorAlert>{submitError(submit.error)}</ErrorAlert> : null}
+        <p>{t('walkaround.finish.noSignalNeeded')}</p>
+        {submit.isError ? <ErrorAlert>{describeError(submit.error)}</ErrorAlert> : null}
         <Button type="submit" size="large" busy={submit.isPending} data-testid="submit-report">
           {t('walkaround.finish.submit')}
         </Button>

@@ -9,8 +9,10 @@ import { PageHeading, Section } from '@/components/ui/layout';
 import { ApiError, NETWORK_ERROR_STATUS } from '@/lib/api-client';
 import { describeError } from '@/lib/errors';
 import { isLocale } from '@/lib/i18n';
+import { describeCopyAge } from '@/lib/offline';
 import { useCreateLocalInspection } from '../api/create-local-inspection';
 import { pendingAcknowledgementQueryOptions } from '../api/get-pending-acknowledgement';
+import { useStartData } from '../api/get-start-data';
 import { runPath } from '../walkaround-paths';
 import { PendingAcknowledgementReview } from './pending-acknowledgement-review';
 
@@ -33,14 +35,27 @@ export function StartWalkaround({ renderPicker, vehicles }: StartWalkaroundProps
   const [pending, setPending] = useState<{ list: PendingAcknowledgement[]; chosen: VehicleResponse[] } | null>(null);
   const [problem, setProblem] = useState<string | null>(null);
   const [checking, setChecking] = useState(false);
+  // With no signal, reviews the phone's copy says are waiting: shown before the start, signed later.
+  const [waitingReviews, setWaitingReviews] = useState<{
+    list: PendingAcknowledgement[];
+    chosen: VehicleResponse[];
+  } | null>(null);
   const create = useCreateLocalInspection();
+  const startData = useStartData();
   const trailers = vehicles.filter((v) => v.kind === 'trailer');
 
   const begin = async (chosen: VehicleResponse[]) => {
     const locale = isLocale(i18n.language) ? i18n.language : 'en';
-    const inspection = await create.mutateAsync({ vehicles: chosen, kind, locale });
+    const requiredReadings = startData.data?.data.requiredReadings ?? [];
+    const inspection = await create.mutateAsync({ vehicles: chosen, kind, locale, requiredReadings });
     await navigate(runPath(inspection.clientId));
   };
+
+  const keptReviewsFor = (chosen: VehicleResponse[]): PendingAcknowledgement[] =>
+    chosen.flatMap((v) => {
+      const pending = startData.data?.data.pendingAcknowledgements[v.id];
+      return pending ? [pending] : [];
+    });
 
   // The last report of each unit may wait for this driver's review (pre-trip only, 396.13).
   const checkThenBegin = async (chosen: VehicleResponse[]) => {
@@ -57,9 +72,15 @@ export function StartWalkaround({ renderPicker, vehicles }: StartWalkaroundProps
         return;
       }
     } catch (error) {
-      // No signal: start anyway; the server asks for the review when the walk-around syncs.
       if (!(error instanceof ApiError && error.status === NETWORK_ERROR_STATUS)) {
         setProblem(describeError(error));
+        return;
+      }
+      // No signal: the phone's copy says whether a review waits. The driver is told, may start,
+      // and signs the review when the phone has a signal (the server asks for it when the walk-around syncs).
+      const kept = keptReviewsFor(chosen);
+      if (kept.length > 0) {
+        setWaitingReviews({ list: kept, chosen });
         return;
       }
     } finally {
@@ -84,6 +105,7 @@ export function StartWalkaround({ renderPicker, vehicles }: StartWalkaroundProps
   };
 
   const firstPending = pending?.list[0];
+  const kept = startData.data?.fromPhone ? startData.data : null;
 
   return (
     <div data-testid="start-inspection-screen">
@@ -98,9 +120,48 @@ export function StartWalkaround({ renderPicker, vehicles }: StartWalkaroundProps
           <ErrorAlert>{describeError(create.error)}</ErrorAlert>
         </div>
       ) : null}
+      {kept ? (
+        <p className="mb-4 rounded-lg border-2 border-line bg-surface p-3" role="status" data-testid="kept-copy">
+          {t('walkaround.start.keptCopy', { age: describeCopyAge(kept.savedAt, i18n.language) })}
+        </p>
+      ) : null}
       {checking || create.isPending ? <Loading label={t('walkaround.start.preparing')} /> : null}
 
-      {pending && firstPending ? (
+      {waitingReviews ? (
+        <Section title={t('walkaround.start.reviewWaitsTitle')} id="start-review-waits">
+          <ul className="mb-4 flex flex-col gap-2" data-testid="review-waits">
+            {waitingReviews.list.map((review) => (
+              <li key={review.inspectionId}>
+                {t('walkaround.start.reviewWaits', {
+                  unit: review.vehicle.unitNumber,
+                  count: review.defects.length,
+                })}
+              </li>
+            ))}
+          </ul>
+          <div className="flex flex-wrap gap-tap-gap">
+            <Button
+              size="large"
+              onClick={() => {
+                const { chosen } = waitingReviews;
+                setWaitingReviews(null);
+                begin(chosen).catch((error: unknown) => setProblem(describeError(error)));
+              }}
+            >
+              {t('walkaround.start.startAnyway')}
+            </Button>
+            <Button
+              variant="quiet"
+              onClick={() => {
+                setWaitingReviews(null);
+                setPowerUnit(null);
+              }}
+            >
+              {t('walkaround.start.otherUnit')}
+            </Button>
+          </div>
+        </Section>
+      ) : pending && firstPending ? (
         <PendingAcknowledgementReview
           key={firstPending.inspectionId}
           pending={firstPending}
