@@ -2,7 +2,7 @@
 // loose", "defect, chafed air line", "good, ten thirty-seconds". Items the answer does not mark pass.
 import type { Locale } from '../checklist/index.js';
 import { normaliseText, originalWords, sliceText, type NormalisedText } from '../text/index.js';
-import { findNumbers } from '../numbers/index.js';
+import { findNumbers, type NumberSpan } from '../numbers/index.js';
 import { QUANTITIES, type Quantity } from '../units/index.js';
 import { classifyWords, withoutFillers, type WordItem, type WordsVerdict } from './classify-words.js';
 import type { CompiledLexicon } from './compiled-lexicon.js';
@@ -40,19 +40,27 @@ function isUsual(quantity: Quantity, value: number): boolean {
 const NAME_CACHE_LIMIT = 64;
 
 interface StopNames {
+  locale: Locale;
   matcher: PhraseMatcher<number[]>;
   // Every stem of every name of each item, to tell which item a run of names points at.
   stems: ReadonlySet<string>[];
 }
 
 const nameCache = new Map<string, StopNames>();
+// The voice loop asks about one stop's items many times over: skip even building the key.
+const namesByItems = new WeakMap<readonly StopItemRef[], StopNames>();
 
 // Matches the words that point at the stop's items; a phrase several items share ("tire" at a
 // dual) points at all of them.
 function stopNames(items: readonly StopItemRef[], locale: Locale): StopNames {
+  const known = namesByItems.get(items);
+  if (known?.locale === locale) return known;
   const cacheKey = `${locale}\u0000${items.map((item) => `${item.key}\u0001${item.names.join('\u0002')}`).join('\u0003')}`;
   const cached = nameCache.get(cacheKey);
-  if (cached) return cached;
+  if (cached) {
+    namesByItems.set(items, cached);
+    return cached;
+  }
   const byStems = new Map<string, { phrase: string; indices: number[] }>();
   const stems = items.map(() => new Set<string>());
   items.forEach((item, index) => {
@@ -69,9 +77,10 @@ function stopNames(items: readonly StopItemRef[], locale: Locale): StopNames {
     locale,
     [...byStems.values()].map(({ phrase, indices }) => ({ category: indices, phrases: [phrase] })),
   );
-  const compiled = { matcher, stems };
+  const compiled = { locale, matcher, stems };
   if (nameCache.size >= NAME_CACHE_LIMIT) nameCache.delete(nameCache.keys().next().value ?? '');
   nameCache.set(cacheKey, compiled);
+  namesByItems.set(items, compiled);
   return compiled;
 }
 
@@ -112,18 +121,25 @@ function hasNegator(items: readonly WordItem[]): boolean {
 // cuts"), nor inside an item's name ("lug nuts and studs").
 function segmentsOf(reader: Reader): Segment[] {
   const { text, allItems, names, lx } = reader;
-  const tokens = applyHomophones(text.tokens, lx);
-  const numbers = [
-    ...findNumbers(tokens, lx.locale, { gauge: true }),
-    ...findNumbers(tokens, lx.locale, { bareDenominators: true }),
-  ];
+  let found: NumberSpan[] | undefined;
+  // Only read when a conjunction is met: most answers have none.
+  const numbers = (): NumberSpan[] => {
+    if (found) return found;
+    const tokens = applyHomophones(text.tokens, lx);
+    found = [
+      ...findNumbers(tokens, lx.locale, { gauge: true }),
+      ...findNumbers(tokens, lx.locale, { bareDenominators: true }),
+    ];
+    return found;
+  };
   // "one hundred and ten", "an inch and a half", "una pulgada y media": one value, not two answers.
   const unitEndsAt = (end: number): boolean =>
     [1, 2, 3].some((length) => lx.units.matchAt(text, end - length)?.end === end);
   const joinsValue = (item: WordItem): boolean =>
-    numbers.some(
+    numbers().some(
       (span) =>
-        (span.start < item.start && item.end < span.end) ||
+        // "ten and eight thirty-seconds" is two readings: nobody says a mixed number in 32nds.
+        (span.start < item.start && item.end < span.end && (span.form !== 'mixed' || (span.denominator ?? 0) <= 8)) ||
         (span.start === item.end && span.value < 1 && span.form === 'fraction' && unitEndsAt(item.start)),
     );
   const out: Segment[] = [];
@@ -452,6 +468,7 @@ function hasNumber(tokens: readonly string[], lx: CompiledLexicon): boolean {
 function takenBack(reader: Reader, segments: readonly Segment[]): Set<number> {
   const out = new Set<number>();
   const { text, lx } = reader;
+  if (!text.tokens.some((_, i) => lx.corrections.matchAt(text, i) !== undefined)) return out;
   let lastWithNumber = -1;
   // A segment that is only the correcting word: "one ten, no, one twelve".
   let lastMarkerOnly = -1;
