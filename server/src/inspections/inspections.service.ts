@@ -56,6 +56,18 @@ import { recurringDefectsOf } from './review';
 import { driverStatement } from './statements';
 import { BoundedCache } from '../common/bounded-cache';
 
+// A signature cannot come before the walk-around began (the future is the DTO's to refuse).
+function signedTimeOf(dto: SubmitInspectionDto, startedAt: Date, now: Date): Date {
+  if (dto.signedAt === undefined) return now;
+  const signedAt = new Date(dto.signedAt);
+  if (signedAt.getTime() < startedAt.getTime()) {
+    throw new ApiValidationException([
+      { field: 'signedAt', message: "signedAt is before the walk-around began: check the phone's date and time." },
+    ]);
+  }
+  return signedAt;
+}
+
 export const SUBMITTED_MESSAGE =
   "This report is submitted and signed, so it can no longer be changed: changes now go through the mechanic's repair certification and the next driver's acknowledgement.";
 const NOT_FOUND = 'No inspection with this id in your organisation.';
@@ -498,7 +510,10 @@ export class InspectionsService {
       const summary = summarizeInspection(checklist, rows.map(toSharedResult), {
         startedAt: inspection.startedAt.toISOString(),
       });
+      // The server's clock says when the report arrived (submittedAt); the driver's signature keeps
+      // when it was signed on the phone, which may be hours earlier with no signal.
       const now = new Date();
+      const signedAt = signedTimeOf(dto, inspection.startedAt, now);
       await manager.insert(Signature, {
         inspectionId: id,
         defectId: null,
@@ -512,7 +527,7 @@ export class InspectionsService {
           date: inspection.startedAt,
           defectCount: summary.defects.length,
         }),
-        signedAt: now,
+        signedAt,
       });
       const defects = summary.defects.map((defect) => {
         const item = byKey.get(defect.itemKey) as ChecklistItem;

@@ -109,6 +109,13 @@ export class SubmitInspectionDto implements SubmitInspectionRequest {
   @Min(0, { message: 'The odometer reading cannot be negative.' })
   @Max(99_999_999, { message: 'The odometer reading has at most 8 digits.' })
   odometer?: number;
+
+  // Signed on the phone, perhaps with no signal: the report may arrive hours later.
+  @ApiPropertyOptional({ format: 'date-time' })
+  @IsOptional()
+  @IsISO8601({ strict: true }, { message: `Send signedAt as ${ISO_TIME}.` })
+  @NotInTheFuture()
+  signedAt?: string;
 }
 
 export class AcknowledgeDto implements AcknowledgeRequest {
