@@ -144,13 +144,14 @@ describe('interpretUtterance', () => {
 
 describe('interpretUtterance: what a driver says at a measured check', () => {
   it('hears that there is no gauge only where a reading is asked for', () => {
-    for (const text of ['no gauge', "don't have a gauge", 'good, no gauge', 'I do not have a gauge'])
+    for (const text of ['no gauge', "don't have a gauge", 'good, no gauge', 'I do not have a gauge', 'no gauge today'])
       expect(say(text, measure('tire_pressure'))).toMatchObject({ kind: 'no_gauge' });
     for (const text of ['no tengo manómetro', 'no tengo medidor', 'sin manómetro'])
       expect(say(text, measure('tread_depth'), 'es')).toMatchObject({ kind: 'no_gauge' });
     // On a check item the gauge itself may be what is missing.
     expect(say('no gauge')).toMatchObject({ kind: 'answer', answer: 'defect' });
     expect(say('no gauge but the sidewall is cut', measure('tread_depth'))).toMatchObject({ answer: 'defect' });
+    expect(say('no gauge, about a hundred', measure('tire_pressure'))).toMatchObject({ measurement: { value: 100 } });
   });
 
   it('takes the last value after a word that takes one back', () => {
@@ -262,6 +263,9 @@ describe('fixed on the spot', () => {
       action: 'le puse aire',
     });
     expect(say('cambié el foco', check, 'es')).toMatchObject({ kind: 'fixed', action: 'cambié el foco' });
+    // Praise after the fix is not what was done.
+    expect(say('fixed it, good now')).toMatchObject({ kind: 'fixed', action: '' });
+    expect(say('replaced the bulb, works now')).toMatchObject({ kind: 'fixed', action: 'replaced the bulb' });
   });
 
   it("reads the new reading in the item's quantity", () => {
@@ -272,6 +276,10 @@ describe('fixed on the spot', () => {
     });
     expect(say('le puse aire, ahora ciento diez', measure('tire_pressure'), 'es')).toMatchObject({
       action: 'le puse aire',
+      measurement: { value: 110 },
+    });
+    expect(say('aired it up to one ten', measure('tire_pressure'))).toMatchObject({
+      action: 'aired it up',
       measurement: { value: 110 },
     });
     expect(say('added air, one ten, no, one fifteen', measure('tire_pressure'))).toMatchObject({

@@ -85,7 +85,19 @@ export function saysNoGauge(text: NormalisedText, lx: CompiledLexicon): boolean 
     if (kind === 'filler' || kind === 'neutral' || kind === 'part') return true;
     return rest.tokens.slice(item.start, item.end).every((t) => lx.courtesyTokens.has(t));
   });
-  return quiet || classifyWords(rest, restItems, lx).kind === 'pass';
+  if (quiet) return true;
+  const verdict = classifyWords(rest, restItems, lx);
+  if (verdict.kind === 'pass') return true;
+  // "No gauge today": a word or two nobody taught us, but no value and no problem.
+  const unknown = restItems.filter((item) => item.category === undefined).length;
+  return (
+    verdict.kind === 'unclear' &&
+    unknown <= 2 &&
+    restItems.every(
+      (item) => item.category === undefined || ['filler', 'neutral', 'part'].includes(item.category.kind),
+    ) &&
+    readMeasurement(rest.tokens, 'air_pressure', lx.locale, lx).kind === 'none'
+  );
 }
 
 // What is said after the last word that takes a value back ("one ten, no, one twelve").

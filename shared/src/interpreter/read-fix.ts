@@ -76,6 +76,20 @@ export function readFix(
       }
     }
   }
+  // "Fixed it, good now": praise after the fix is not what was done.
+  for (;;) {
+    const last = allItems.filter((item) => item.start >= start && item.end <= end).pop();
+    const kind = last?.category?.kind;
+    const quiet =
+      last !== undefined &&
+      (kind === 'pass' ||
+        kind === 'filler' ||
+        text.tokens
+          .slice(last.start, last.end)
+          .every((t) => lx.courtesyTokens.has(t) || lx.readingLeadInTokens.has(t)));
+    if (!last || !quiet) break;
+    end = last.start;
+  }
   const action = originalWords(transcript, lx.locale, start, end) ?? text.surface.slice(start, end).join(' ');
   return measurement ? { kind: 'fixed', action, measurement } : { kind: 'fixed', action };
 }
