@@ -31,6 +31,8 @@ interface Walk {
   kind: string;
   startedAt: number;
   gapMs?: number;
+  // Answer stop by stop: the items of a stop share one time, gapMs after the stop before.
+  byStop?: boolean;
   defects?: (items: ChecklistItem[]) => ChecklistItem[];
   // Answer the first item again at the end: the driver went back.
   goBack?: boolean;
@@ -53,10 +55,11 @@ describe('the supervisor list: filters, sorts, keyset pages, CSV, and the detail
     });
     const gap = w.gapMs ?? 6000;
     const bad = new Set((w.defects?.(started.checklist.items) ?? []).map((i) => i.key));
+    const stopIndex = new Map(started.checklist.stops.map((stop, index) => [stop.key, index]));
     const results: ResultUpsert[] = started.checklist.items.map((item, index) => ({
       itemKey: item.key,
       answer: bad.has(item.key) ? 'defect' : 'pass',
-      answeredAt: new Date(w.startedAt + (index + 1) * gap).toISOString(),
+      answeredAt: new Date(w.startedAt + ((w.byStop ? stopIndex.get(item.stopKey)! : index) + 1) * gap).toISOString(),
       clientId: randomUUID(),
     }));
     if (w.goBack) {
@@ -87,8 +90,21 @@ describe('the supervisor list: filters, sorts, keyset pages, CSV, and the detail
     vehicleId = (await createVehicle(t.url, tokens.admin, tractorRequest(unit('LS')))).id;
     base = Date.now() - 60 * MINUTE;
     // Submitted in the order rushed, late, first, recurring; started in another order.
-    byName.rushed = await walk(vehicleId, { token: second, kind: 'post_trip', startedAt: base + MINUTE, gapMs: 1000 });
-    byName.late = await walk(vehicleId, { token: second, kind: 'pre_trip', startedAt: base + 5 * MINUTE });
+    // Both answered stop by stop: the rushed one at 3 s a stop, the late one at a quick but fair 10 s.
+    byName.rushed = await walk(vehicleId, {
+      token: second,
+      kind: 'post_trip',
+      startedAt: base + MINUTE,
+      gapMs: 3000,
+      byStop: true,
+    });
+    byName.late = await walk(vehicleId, {
+      token: second,
+      kind: 'pre_trip',
+      startedAt: base + 5 * MINUTE,
+      gapMs: 10_000,
+      byStop: true,
+    });
     byName.first = await walk(vehicleId, {
       token: tokens.driver,
       kind: 'pre_trip',
@@ -337,14 +353,23 @@ describe('the supervisor list: filters, sorts, keyset pages, CSV, and the detail
       bodyOf<InspectionResponse>(
         await request(t.url).get(`/api/inspections/${byName[name]!.id}`).set(bearer(tokens.supervisor)),
       );
+    // Judged per stop (our own practice): at least 7.5 s a stop and a median gap of 5 s.
     const rushed = await get('rushed');
-    expect(rushed.flags.rushed).toMatchObject({
+    expect(rushed.flags.rushed).toEqual({
       reasons: ['median_gap', 'total_duration'],
-      secondsPerItem: 1,
-      medianGapSeconds: 1,
-      minimumSecondsPerItem: 3,
+      answeredCount: rushed.checklist.items.length,
+      answeredStopCount: rushed.checklist.stops.length,
+      secondsPerStop: 3,
+      medianGapSeconds: 3,
+      minimumSecondsPerStop: 7.5,
+      minimumMedianGapSeconds: 5,
     });
+    expect(rushed.checklist.stops.length).toBeLessThan(rushed.checklist.items.length);
     expect(rushed.flags.recurring).toEqual([]);
+    // 10 s a stop is well under 3 s an item, and not rushed.
+    const late = await get('late');
+    expect(late.durationSeconds! / late.checklist.items.length).toBeLessThan(3);
+    expect(late.flags.rushed).toBeNull();
     const first = await get('first');
     expect(first.flags).toEqual({ rushed: null, recurring: [] });
     const recurring = await get('recurring');

@@ -24,8 +24,9 @@ const DEMO_REPORT = {
   driverEmail: 'aiyana.brooks@yardcall.test',
   mechanicEmail: 'mechanic@yardcall.test',
   startedAt: '2026-11-30T05:40:00.000Z',
-  // A driver's pace of about 6 s an item (common practice is about 15 minutes for a whole walk-around).
-  secondsPerItem: 6,
+  // Each stop answered at once at about 15 s a stop, the common pace (about 15 minutes for a tractor
+  // and trailer's 60 stops; common practice, no published source).
+  secondsPerStop: 15,
   // Below the 4/32 in a steer tire needs (49 CFR 393.75(b)).
   treadThirtySeconds: 3,
   repairNote: 'Replaced the left steer tire; new tread 18/32 in.',
@@ -42,6 +43,12 @@ export async function seedDemoInspection(manager: EntityManager, organizationId:
   const snapshot = [{ id: vehicle.id, unitNumber: vehicle.unitNumber, kind: vehicle.kind, config: vehicle.config }];
   const checklist = buildChecklist(snapshot, 'pre_trip', 'en');
   const startMs = Date.parse(DEMO_REPORT.startedAt);
+  // The items of one stop share the time of its answer.
+  const answeredAt = new Map(
+    checklist.stops.flatMap((stop, n) =>
+      stop.itemKeys.map((key) => [key, new Date(startMs + (n + 1) * DEMO_REPORT.secondsPerStop * 1000)] as const),
+    ),
+  );
   const tread = checklist.items.find(
     (i) => i.expects.type === 'measure' && i.expects.quantity === 'tread_depth' && i.limitContext?.axle === 'steer',
   );
@@ -57,7 +64,7 @@ export async function seedDemoInspection(manager: EntityManager, organizationId:
       locale: 'en',
       clientId: DEMO_REPORT.clientId,
       startedAt: new Date(startMs),
-      submittedAt: new Date(startMs + (checklist.items.length + 1) * DEMO_REPORT.secondsPerItem * 1000),
+      submittedAt: new Date(startMs + (checklist.stops.length + 1) * DEMO_REPORT.secondsPerStop * 1000),
       odometer: 388_214,
       location: 'Kestrel Valley yard, bay 2',
       vehicles: snapshot,
@@ -66,8 +73,10 @@ export async function seedDemoInspection(manager: EntityManager, organizationId:
     }),
   );
   await manager.insert(InspectionVehicle, { inspectionId: inspection.id, position: 0, vehicleId: vehicle.id });
-  const rows = checklist.items.map((item, index) => {
+  const rows = checklist.items.map((item) => {
     const measured = item.key === tread.key;
+    const at = answeredAt.get(item.key);
+    if (!at) throw new Error(`The demo checklist's item ${item.key} is at no stop.`);
     return manager.create(ItemResult, {
       inspectionId: inspection.id,
       itemKey: item.key,
@@ -83,7 +92,7 @@ export async function seedDemoInspection(manager: EntityManager, organizationId:
       detail: null,
       heard: measured ? 'three thirty-seconds' : 'good',
       confidence: 0.9,
-      answeredAt: new Date(startMs + (index + 1) * DEMO_REPORT.secondsPerItem * 1000),
+      answeredAt: at,
     });
   });
   await manager.save(ItemResult, rows, { chunk: 100 });

@@ -1,5 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { stopPerItem, type Checklist, type ChecklistItem, type ItemResult } from '../checklist/index.js';
+import {
+  buildChecklist,
+  sampleCombination,
+  stopPerItem,
+  type Checklist,
+  type ChecklistItem,
+  type ItemResult,
+} from '../checklist/index.js';
 import { RUSHED_RULE, summarizeInspection } from '../summary/index.js';
 import {
   RECURRING_RULE,
@@ -108,24 +115,25 @@ describe('walkedRoute: the route as zones in the order walked', () => {
 });
 
 describe('rushedFlag: why the summary flagged a walk-around (rule in ../summary, our own practice)', () => {
-  const twelve = Array.from({ length: 12 }, (_, i) => item(`u0.front.i${i}`, 'front'));
-  const manyItems: Checklist = { ...checklist, stops: stopPerItem(twelve), items: twelve };
+  // The invented tractor and 2-axle trailer: 281 items at 60 stops, each stop answered at once.
+  const combination = buildChecklist(sampleCombination(), 'pre_trip', 'en');
+  const byStop = (secondsPerStop: number): ItemResult[] =>
+    combination.stops.flatMap((stop, n) => stop.itemKeys.map((key) => answer(key, (n + 1) * secondsPerStop)));
 
-  it('says nothing when the walk-around was not rushed', () => {
-    const results = manyItems.items.map((it, i) => answer(it.key, (i + 1) * 6));
-    const summary = summarizeInspection(manyItems, results, { startedAt: START });
+  it('says nothing for a walk-around answered stop by stop at the common pace of about 15 s a stop', () => {
+    const summary = summarizeInspection(combination, byStop(15), { startedAt: START });
     expect(rushedFlag(summary.rushed, summary.answeredCount)).toBeNull();
   });
 
-  it('gives seconds per item and the median gap against the thresholds', () => {
-    const results = manyItems.items.map((it, i) => answer(it.key, (i + 1) * 1));
-    const summary = summarizeInspection(manyItems, results, { startedAt: START });
+  it('gives seconds per stop over the answered stops and the median gap against the thresholds', () => {
+    const summary = summarizeInspection(combination, byStop(3), { startedAt: START });
     expect(rushedFlag(summary.rushed, summary.answeredCount)).toEqual({
       reasons: ['median_gap', 'total_duration'],
-      answeredCount: 12,
-      secondsPerItem: 1,
-      medianGapSeconds: 1,
-      minimumSecondsPerItem: RUSHED_RULE.minMsPerItem / 1000,
+      answeredCount: 281,
+      answeredStopCount: 60,
+      secondsPerStop: 3,
+      medianGapSeconds: 3,
+      minimumSecondsPerStop: RUSHED_RULE.minMsPerStop / 1000,
       minimumMedianGapSeconds: RUSHED_RULE.minMedianGapMs / 1000,
     });
   });

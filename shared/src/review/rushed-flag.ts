@@ -7,15 +7,17 @@ function seconds(ms: number): number {
   return Math.round(ms / 100) / 10;
 }
 
+// answeredCount is the items answered, shown beside the stops the pace is judged over.
 export function rushedFlag(check: RushedCheck, answeredCount: number): RushedFlag | null {
   if (!check.rushed) return null;
+  const stops = check.answeredStopCount;
   return {
     reasons: [...check.reasons],
     answeredCount,
-    secondsPerItem:
-      check.totalDurationMs !== null && answeredCount > 0 ? seconds(check.totalDurationMs / answeredCount) : null,
+    answeredStopCount: stops,
+    secondsPerStop: check.totalDurationMs !== null && stops > 0 ? seconds(check.totalDurationMs / stops) : null,
     medianGapSeconds: check.medianGapMs !== null ? seconds(check.medianGapMs) : null,
-    minimumSecondsPerItem: seconds(check.rule.minMsPerItem),
+    minimumSecondsPerStop: seconds(check.rule.minMsPerStop),
     minimumMedianGapSeconds: seconds(check.rule.minMedianGapMs),
   };
 }

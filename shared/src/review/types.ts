@@ -14,12 +14,15 @@ export interface ZoneVisit {
 }
 
 // Why a walk-around was flagged as rushed (the rule itself lives in ../summary: RUSHED_RULE).
+// Pace is judged per stop: one answer covers a stop's items.
 export interface RushedFlag {
   reasons: RushedReason[];
+  // Items answered, and the stops they belong to.
   answeredCount: number;
-  secondsPerItem: number | null;
+  answeredStopCount: number;
+  secondsPerStop: number | null;
   medianGapSeconds: number | null;
-  minimumSecondsPerItem: number;
+  minimumSecondsPerStop: number;
   minimumMedianGapSeconds: number;
 }
 

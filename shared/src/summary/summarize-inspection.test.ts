@@ -1,5 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { stopPerItem, type Checklist, type ChecklistItem, type ItemResult } from '../checklist/index.js';
+import {
+  buildChecklist,
+  sampleCombination,
+  stopPerItem,
+  type Checklist,
+  type ChecklistItem,
+  type ItemResult,
+} from '../checklist/index.js';
 import { RUSHED_RULE, summarizeInspection } from './summarize-inspection.js';
 
 function item(key: string, zone: string, overrides: Partial<ChecklistItem> = {}): ChecklistItem {
@@ -272,49 +279,104 @@ describe('summarizeInspection: rushed walk-around (our own practice)', () => {
   }
 
   it('flags answers coming faster than the median-gap threshold', () => {
-    const { list, results } = evenlyPaced(2.9);
+    const { list, results } = evenlyPaced(4.9);
     const summary = summarizeInspection(list, results, { startedAt: at(0) });
     expect(summary.rushed.rushed).toBe(true);
     expect(summary.rushed.reasons).toContain('median_gap');
-    expect(summary.rushed.medianGapMs).toBeCloseTo(2900, 0);
+    expect(summary.rushed.medianGapMs).toBeCloseTo(4900, 0);
   });
 
-  it('does not flag answers at the median-gap threshold', () => {
+  it('does not flag a median gap exactly at the threshold', () => {
     const { list, results } = evenlyPaced(RUSHED_RULE.minMedianGapMs / 1000);
     const summary = summarizeInspection(list, results, { startedAt: at(0) });
-    expect(summary.rushed.rushed).toBe(false);
-    expect(summary.rushed.reasons).toEqual([]);
+    expect(summary.rushed.medianGapMs).toBe(RUSHED_RULE.minMedianGapMs);
+    expect(summary.rushed.reasons).not.toContain('median_gap');
   });
 
-  it('flags a walk-around shorter than the minimum for its item count even with a long pause', () => {
-    // Nineteen answers 1.5 s apart then a long pause: the median is fine, the whole is too short.
+  it('flags a walk-around shorter than the minimum for its answered stops though its median gap is fine', () => {
+    // Nine answers 1.5 s apart, then eleven at the median-gap threshold: the median is fine, the whole is too short.
     const list = oneZone(20);
     const { items } = list;
-    const gaps = [...Array.from({ length: 9 }, () => 1.5), ...Array.from({ length: 11 }, () => 3.5)];
+    const gaps = [...Array.from({ length: 9 }, () => 1.5), ...Array.from({ length: 11 }, () => 5)];
     let t = 0;
     const results = items.map((it, i) => answered(it.key, (t += gaps[i]!)));
     const summary = summarizeInspection(list, results, { startedAt: at(0) });
-    expect(summary.rushed.medianGapMs).toBe(3500);
-    expect(summary.totalDurationMs).toBeLessThan(20 * RUSHED_RULE.minMsPerItem);
+    expect(summary.rushed.medianGapMs).toBe(5000);
+    expect(summary.rushed.answeredStopCount).toBe(20);
+    expect(summary.totalDurationMs).toBeLessThan(20 * RUSHED_RULE.minMsPerStop);
     expect(summary.rushed.reasons).toEqual(['total_duration']);
   });
 
-  it('does not flag a walk-around just over the minimum duration', () => {
-    const { list, results } = evenlyPaced(3.05);
+  it('does not flag a walk-around that took exactly the minimum for its answered stops', () => {
+    const { list, results } = evenlyPaced(RUSHED_RULE.minMsPerStop / 1000);
     const summary = summarizeInspection(list, results, { startedAt: at(0) });
-    expect(summary.totalDurationMs).toBeGreaterThan(summary.rushed.minimumDurationMs);
+    expect(summary.rushed.minimumDurationMs).toBe(20 * RUSHED_RULE.minMsPerStop);
+    expect(summary.totalDurationMs).toBe(summary.rushed.minimumDurationMs);
     expect(summary.rushed.rushed).toBe(false);
   });
 
-  it('does not judge pace on fewer answers than the rule needs', () => {
+  it('does not judge pace on fewer answered stops than the rule needs', () => {
     const { list, results } = evenlyPaced(1, RUSHED_RULE.minAnswers - 1);
-    expect(summarizeInspection(list, results, { startedAt: at(0) }).rushed.rushed).toBe(false);
+    const summary = summarizeInspection(list, results, { startedAt: at(0) });
+    expect(summary.rushed.answeredStopCount).toBe(RUSHED_RULE.minAnswers - 1);
+    expect(summary.rushed.rushed).toBe(false);
+    expect(
+      summarizeInspection(oneZone(RUSHED_RULE.minAnswers), evenlyPaced(1, RUSHED_RULE.minAnswers).results, {
+        startedAt: at(0),
+      }).rushed.rushed,
+    ).toBe(true);
   });
 
   it('accepts a stricter rule from the caller', () => {
-    const { list, results } = evenlyPaced(4);
-    const summary = summarizeInspection(list, results, { startedAt: at(0), rushedRule: { minMedianGapMs: 5000 } });
+    const { list, results } = evenlyPaced(8);
+    const summary = summarizeInspection(list, results, { startedAt: at(0), rushedRule: { minMedianGapMs: 9000 } });
     expect(summary.rushed.reasons).toEqual(['median_gap']);
+  });
+});
+
+describe('summarizeInspection: rushed, judged per stop on a tractor and 2-axle trailer (our own practice)', () => {
+  // The invented demo combination: 281 items at 60 stops.
+  const combination = buildChecklist(sampleCombination(), 'pre_trip', 'en');
+  // Every stop answered at once, secondsPerStop after the one before.
+  const byStop = (secondsPerStop: number, stops = combination.stops): ItemResult[] =>
+    stops.flatMap((stop, n) => stop.itemKeys.map((key) => answered(key, (n + 1) * secondsPerStop)));
+
+  it('does not flag a walk-around answered stop by stop at the common pace of about 15 s a stop', () => {
+    expect([combination.items.length, combination.stops.length]).toEqual([281, 60]);
+    const summary = summarizeInspection(combination, byStop(15), { startedAt: at(0) });
+    expect(summary.totalDurationMs).toBe(15 * 60_000);
+    expect(summary.rushed).toMatchObject({ rushed: false, reasons: [], medianGapMs: 15_000, answeredStopCount: 60 });
+  });
+
+  it('does not flag a quick but careful pace of 8 s a stop', () => {
+    const summary = summarizeInspection(combination, byStop(8), { startedAt: at(0) });
+    // 8 minutes is under 1.8 s an item: judged per item, this walk-around would look rushed.
+    expect(summary.totalDurationMs).toBe(8 * 60_000);
+    expect(summary.rushed.rushed).toBe(false);
+  });
+
+  it('flags a walk-around at 3 s a stop on both counts', () => {
+    const summary = summarizeInspection(combination, byStop(3), { startedAt: at(0) });
+    expect(summary.rushed).toMatchObject({
+      rushed: true,
+      reasons: ['median_gap', 'total_duration'],
+      medianGapMs: 3000,
+      totalDurationMs: 180_000,
+      answeredStopCount: 60,
+      minimumDurationMs: 60 * RUSHED_RULE.minMsPerStop,
+    });
+  });
+
+  it('counts only the stops with an answer, and a stop answered in two parts once', () => {
+    // The first 20 stops at 6 s a stop; then a reading at the fifth stop 5 s later.
+    const partial = byStop(6, combination.stops.slice(0, 20));
+    const reading = combination.stops[4]!.itemKeys[0]!;
+    const results = [...partial, answered(reading, 125)];
+    const summary = summarizeInspection(combination, results, { startedAt: at(0) });
+    expect(summary.rushed.answeredStopCount).toBe(20);
+    expect(summary.rushed.minimumDurationMs).toBe(20 * RUSHED_RULE.minMsPerStop);
+    // 125 s over 20 stops is under the minimum of 150 s.
+    expect(summary.rushed.reasons).toEqual(['total_duration']);
   });
 });
 
@@ -415,6 +477,12 @@ describe('summarizeInspection: fixed on the spot', () => {
     expect(summary.drivingBlockedBy).toEqual([pressureItem.key]);
   });
 
+  it('does not take "fixed" without a new reading on a value found out of limit', () => {
+    const summary = summarizeInspection(list, [lowDefect({ action: 'added air', at: at(30) }), ...rest]);
+    expect(summary.fixedOnTheSpot).toEqual([]);
+    expect(summary.drivingBlockedBy).toEqual([pressureItem.key]);
+  });
+
   it('ignores a fix on an item that was passed', () => {
     const summary = summarizeInspection(list, [
       answered(pressureItem.key, 10, { fixed: { action: 'added air', at: at(20) } }),
@@ -484,7 +552,8 @@ describe('summarizeInspection: one answer for a whole stop', () => {
     const results = items.map((entry, i) => answered(entry.key, (Math.floor(i / 5) + 1) * 10));
     const summary = summarizeInspection(list, results, { startedAt: at(0) });
     expect(summary.rushed.medianGapMs).toBe(10_000);
-    expect(summary.rushed.reasons).not.toContain('median_gap');
+    expect(summary.rushed.answeredStopCount).toBe(12);
+    expect(summary.rushed.rushed).toBe(false);
     expect(summary.zones[0]?.durationMs).toBe(120_000);
   });
 });

@@ -84,18 +84,25 @@ export interface ZoneTiming {
 
 // Our own practice, not a regulation: no rule sets how long a walk-around takes (49 CFR 395.2 only
 // makes it on-duty time); logging about 15 minutes for a tractor and trailer is common practice.
-// A tractor-trailer checklist has roughly 150 to 200 items, so 15 minutes is 4.5 to 6 s an item.
-// The app speaks each short prompt in about 2 s, so a median gap under 3 s leaves under about 1 s
-// to look at the item; and a whole walk-around under 3 s an item is about half the common pace.
+// The walk-around is asked stop by stop (a wheel end, a brake, the rear lamps), and a tractor and a
+// 2-axle trailer have about 60 stops, so the common pace is about 15 s a stop. Pace is judged per
+// stop, not per item: one answer covers a stop's 1 to 6 items, so an item count would call every
+// normal walk-around rushed.
+// - minMsPerStop 7.5 s, over the stops with an answer: half the common pace. A practised driver may
+//   well be quicker than common, but not twice as quick over a whole walk-around.
+// - minMedianGapMs 5 s: the app's short prompt ("Axle 1, left wheel?") takes about 2 s to say and a
+//   driver's answer ("all good", or a reading) 1 to 3 s (our own estimates), so a typical gap under
+//   5 s leaves about no time to look at the stop.
+// - minAnswers 10 answered stops: fewer is too little to judge.
 // The flag asks a supervisor to look; it is not a finding against the driver.
 export interface RushedRule {
   minMedianGapMs: number;
-  minMsPerItem: number;
-  // Below this many answers there is too little to judge.
+  minMsPerStop: number;
+  // Below this many answered stops there is too little to judge.
   minAnswers: number;
 }
 
-export const RUSHED_RULE: RushedRule = { minMedianGapMs: 3000, minMsPerItem: 3000, minAnswers: 10 };
+export const RUSHED_RULE: RushedRule = { minMedianGapMs: 5000, minMsPerStop: 7500, minAnswers: 10 };
 
 export type RushedReason = 'median_gap' | 'total_duration';
 
@@ -104,7 +111,9 @@ export interface RushedCheck {
   reasons: RushedReason[];
   medianGapMs: number | null;
   totalDurationMs: number | null;
-  // What the whole walk-around should at least have taken for its answered items.
+  // Stops with at least one timed answer: what the pace is judged over.
+  answeredStopCount: number;
+  // What the whole walk-around should at least have taken for its answered stops.
   minimumDurationMs: number;
   rule: RushedRule;
 }
@@ -223,23 +232,37 @@ function attributeGaps(
 function checkRushed(
   gapsMs: readonly number[],
   totalDurationMs: number | null,
-  answeredCount: number,
+  answeredStopCount: number,
   rule: RushedRule,
 ): RushedCheck {
   const medianGapMs = median(gapsMs);
-  const minimumDurationMs = answeredCount * rule.minMsPerItem;
+  const minimumDurationMs = answeredStopCount * rule.minMsPerStop;
   const reasons: RushedReason[] = [];
-  if (answeredCount >= rule.minAnswers) {
+  if (answeredStopCount >= rule.minAnswers) {
     if (medianGapMs !== null && medianGapMs < rule.minMedianGapMs) reasons.push('median_gap');
     if (totalDurationMs !== null && totalDurationMs < minimumDurationMs) reasons.push('total_duration');
   }
-  return { rushed: reasons.length > 0, reasons, medianGapMs, totalDurationMs, minimumDurationMs, rule };
+  return {
+    rushed: reasons.length > 0,
+    reasons,
+    medianGapMs,
+    totalDurationMs,
+    answeredStopCount,
+    minimumDurationMs,
+    rule,
+  };
 }
 
-// A fix counts when its new reading, if it has one, was judged and is not out of limit; a new
-// reading without a verdict is not trusted to clear a defect.
-function fixCounts(fix: SpotFix): boolean {
-  if (fix.measurement === undefined) return true;
+// A value found out of limit is fixed only by a new value within it ("added air, now one ten"); a
+// defect the driver described (a bulb out, a loose cap) is fixed on their word.
+export function fixNeedsReading(result: Pick<ItemResult, 'verdict'>): boolean {
+  return result.verdict === 'out_of_limit';
+}
+
+// A fix counts when its new reading, if it has or needs one, was judged and is not out of limit; a
+// new reading without a verdict is not trusted to clear a defect.
+function fixCounts(result: ItemResult, fix: SpotFix): boolean {
+  if (fix.measurement === undefined) return !fixNeedsReading(result);
   return fix.verdict !== undefined && fix.verdict !== 'out_of_limit';
 }
 
@@ -324,7 +347,7 @@ export function summarizeInspection(
     }
     const reasons = defectReasons(result);
     if (reasons.length > 0) {
-      if (result.fixed !== undefined && fixCounts(result.fixed)) {
+      if (result.fixed !== undefined && fixCounts(result, result.fixed)) {
         fixedOnTheSpot.push(toSpotFixed(item, result, reasons, result.fixed));
       } else {
         defects.push(toDefect(item, result, reasons, certifications.get(item.key)));
@@ -379,8 +402,8 @@ export function summarizeInspection(
     unansweredSafetyCount: unanswered.filter((item) => item.safety).length,
     zones,
     totalDurationMs,
-    // Only answers with a readable time can be timed.
-    rushed: checkRushed(gapsMs, totalDurationMs, timed.length, rule),
+    // Only answers with a readable time can be timed; a stop counts once however many answers it took.
+    rushed: checkRushed(gapsMs, totalDurationMs, new Set(timed.map((entry) => entry.item.stopKey)).size, rule),
     unknownItemKeys,
   };
   if (options.startedAt !== undefined) summary.startedAt = options.startedAt;

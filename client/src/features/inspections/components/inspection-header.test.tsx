@@ -16,11 +16,12 @@ describe('InspectionFlags', () => {
         inspection={withFlags({
           rushed: {
             reasons: ['median_gap', 'total_duration'],
-            answeredCount: 40,
-            secondsPerItem: 1.2,
-            medianGapSeconds: 0.9,
-            minimumSecondsPerItem: 3,
-            minimumMedianGapSeconds: 2,
+            answeredCount: 88,
+            answeredStopCount: 21,
+            secondsPerStop: 3.2,
+            medianGapSeconds: 2.9,
+            minimumSecondsPerStop: 7.5,
+            minimumMedianGapSeconds: 5,
           },
           recurring: [],
         })}
@@ -28,8 +29,10 @@ describe('InspectionFlags', () => {
     );
     const flag = screen.getByTestId('flag-rushed-detail');
     expect(flag).toHaveTextContent('Rushed walk-around');
-    expect(flag).toHaveTextContent('Typical time between answers: 0.9 s; at least 2 s is expected.');
-    expect(flag).toHaveTextContent('1.2 s per item over 40 answered items; at least 3 s per item is expected.');
+    expect(flag).toHaveTextContent('Typical time between answers: 2.9 s; at least 5 s is expected.');
+    expect(flag).toHaveTextContent(
+      '3.2 s per stop over 21 answered stops (88 items); at least 7.5 s per stop is expected.',
+    );
   });
 
   it('links a recurring defect to the earlier inspection that reported it', () => {

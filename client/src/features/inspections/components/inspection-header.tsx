@@ -76,9 +76,10 @@ export function InspectionFlags({ inspection }: { inspection: InspectionResponse
                       minimum: rushed.minimumMedianGapSeconds,
                     })
                   : t('inspections.detail.rushedTotal', {
-                      seconds: rushed.secondsPerItem?.toFixed(1) ?? '?',
-                      minimum: rushed.minimumSecondsPerItem,
-                      count: rushed.answeredCount,
+                      seconds: rushed.secondsPerStop?.toFixed(1) ?? '?',
+                      minimum: rushed.minimumSecondsPerStop,
+                      count: rushed.answeredStopCount,
+                      items: rushed.answeredCount,
                     })}
               </li>
             ))}
