@@ -343,6 +343,29 @@ describe('interpretStopAnswer on every stop of the demo tractor and trailer pre-
       }
     });
 
+    it(`tells a tread depth from a tire pressure at every wheel end in ${locale}`, () => {
+      const wheels = stops.filter((items) =>
+        ['tread_depth', 'tire_pressure'].every((q) =>
+          items.some((i) => i.expects.type === 'measure' && i.expects.quantity === q),
+        ),
+      );
+      expect(wheels.length).toBeGreaterThan(0);
+      const treads = Array.from({ length: 20 }, (_, i) => measurementToWords(i + 1, 'in/32', locale));
+      const pressures = [80, 95, 100, 105, 110, 120].map((psi) => measurementToWords(psi, 'psi', locale));
+      const gaugeStyle =
+        locale === 'en' ? ['one ten', 'one oh five', 'ninety five'] : ['ciento diez', 'noventa y cinco'];
+      for (const items of wheels) {
+        for (const said of treads)
+          expect(at(items, said, locale), said).toMatchObject({
+            marks: [{ measurement: { quantity: 'tread_depth' } }],
+          });
+        for (const said of [...pressures, ...gaugeStyle])
+          expect(at(items, said, locale), said).toMatchObject({
+            marks: [{ measurement: { quantity: 'tire_pressure' } }],
+          });
+      }
+    });
+
     it(`puts a typical reading on an item of its quantity in ${locale}`, () => {
       for (const items of stops) {
         const quantities = new Set(items.flatMap((i) => (i.expects.type === 'measure' ? [i.expects.quantity] : [])));

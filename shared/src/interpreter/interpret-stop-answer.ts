@@ -207,7 +207,7 @@ function readingIn(reader: Reader, segment: Segment, candidates: readonly number
   if (quantities.size === 0) return { kind: 'none' };
   const segmentText = sliceText(text, segment.start, segment.end);
   const segmentItems = withoutFillers(itemsIn(reader, segment));
-  const fits: { measurement: SpokenMeasurement; quantity: Quantity }[] = [];
+  const fits: { measurement: SpokenMeasurement; quantity: Quantity; strength: number }[] = [];
   let unclear: UnclearReason | undefined;
   for (const quantity of QUANTITIES.filter((q) => quantities.has(q))) {
     const from = correctedFrom(segmentText, quantity, lx);
@@ -224,12 +224,19 @@ function readingIn(reader: Reader, segment: Segment, candidates: readonly number
       const fraction = reading.form === 'fraction' || reading.form === 'mixed';
       if (fraction || reading.measurement.value < LOWEST_BARE_PRESSURE_PSI) continue;
     }
-    fits.push({ measurement: reading.measurement, quantity });
+    // A unit said is surest; a fraction of an inch ("one thirty-second") beats a bare gauge
+    // reading the same words could make ("one thirty" psi).
+    const fraction = reading.form === 'fraction' || reading.form === 'mixed';
+    const strength = reading.unitSaid ? 3 : fraction && !PRESSURES.has(quantity) ? 2 : 1;
+    fits.push({ measurement: reading.measurement, quantity, strength });
   }
   // Where two lengths fit ("a quarter inch" at a brake), the one the value is usual for.
-  const usual = fits.length > 1 ? fits.filter((fit) => isUsual(fit.quantity, fit.measurement.value)) : fits;
-  const [only, ...others] = usual.length > 0 ? usual : fits;
-  if (only && others.length === 0) return { kind: 'measurement', ...only };
+  const strongest = fits.filter((fit) => fit.strength === Math.max(...fits.map((f) => f.strength)));
+  const usual =
+    strongest.length > 1 ? strongest.filter((fit) => isUsual(fit.quantity, fit.measurement.value)) : strongest;
+  const [only, ...others] = usual.length > 0 ? usual : strongest;
+  if (only && others.length === 0)
+    return { kind: 'measurement', measurement: only.measurement, quantity: only.quantity };
   // "Two" at a brake could be a stroke or a lining: ask for the item.
   if (only) return { kind: 'unclear', reason: 'item_needed' };
   return unclear === undefined ? { kind: 'none' } : { kind: 'unclear', reason: unclear };
