@@ -122,9 +122,15 @@ describe('interpretStopAnswer', () => {
         { itemKey: 'lugs', detail: 'tuerca está floja' },
       ],
     });
-    // More words about the item just named stay with it.
+    // More words about the item just named stay with it, a value among them.
     expect(at(wheel, 'the hub is leaking and it is loose')).toMatchObject({
       marks: [{ itemKey: 'hub', detail: 'hub is leaking and it is loose' }],
+    });
+    expect(at(duals, 'the outer tire is cut, five thirty-seconds')).toMatchObject({
+      marks: [
+        { itemKey: 'outer.condition', answer: 'defect' },
+        { itemKey: 'outer.tread', answer: 'measurement' },
+      ],
     });
   });
 

@@ -290,6 +290,8 @@ function interpretStopTranscript(
   // A problem said before the item it is about ("defect, the air line"); `start` only if it had words.
   let carryProblem: { start?: number; end: number } | undefined;
   let lastDefect: Pending | undefined;
+  let lastDefectSegment = -1;
+  let currentSegment = 0;
   let unknownTokens = 0;
 
   const segments = segmentsOf(reader);
@@ -301,6 +303,7 @@ function interpretStopTranscript(
       if (item) mark(index, { itemKey: item.key, answer: 'defect', detail });
     }
     lastDefect = { indices: [...indices], start, end };
+    lastDefectSegment = currentSegment;
   };
   const which = (start: number, end: number, candidates: readonly number[]): StopInterpretation => ({
     kind: 'which',
@@ -311,6 +314,7 @@ function interpretStopTranscript(
 
   for (let s = 0; s < segments.length; s += 1) {
     const segment = segments[s];
+    currentSegment = s;
     if (!segment || dropped.has(s)) continue;
     const segmentItems = itemsIn(reader, segment);
     const segmentText = sliceText(text, segment.start, segment.end);
@@ -350,7 +354,7 @@ function interpretStopTranscript(
       if (targets.length > 0) {
         markDefects(targets, start, end);
         carryProblem = undefined;
-      } else if (lastDefect && s > 0 && span) {
+      } else if (lastDefect && lastDefectSegment === s - 1 && span) {
         // "the hub is leaking and it's loose": more about the item just named.
         markDefects(lastDefect.indices, lastDefect.start, span.end);
       } else {
@@ -374,6 +378,19 @@ function interpretStopTranscript(
     const reading = readingIn(reader, segment, scope.length > 0 ? scope : items.map((_, index) => index));
     if (reading.kind === 'measurement') {
       carryItems = undefined;
+      const aboutLastDefect =
+        scope.length === 0 &&
+        lastDefect !== undefined &&
+        lastDefectSegment === s - 1 &&
+        lastDefect.indices.some((index) => {
+          const expects = items[index]?.expects;
+          return expects?.type === 'measure' && expects.quantity === reading.quantity;
+        });
+      if (aboutLastDefect && lastDefect) {
+        // "The outer tire is low, ninety psi": the value is part of what is wrong, not another tire's.
+        markDefects(lastDefect.indices, lastDefect.start, segment.end);
+        continue;
+      }
       const outcome = markReading(reader, reading, scope, marks, mark);
       if (outcome) return { ...outcome, ...heard };
       continue;
