@@ -126,6 +126,12 @@ describe('interpretStopAnswer', () => {
     expect(at(wheel, 'the hub is leaking and it is loose')).toMatchObject({
       marks: [{ itemKey: 'hub', detail: 'hub is leaking and it is loose' }],
     });
+    expect(at(duals, 'the inner tire is cut, five thirty-seconds')).toMatchObject({
+      marks: [
+        { itemKey: 'inner.condition', answer: 'defect' },
+        { itemKey: 'inner.tread', answer: 'measurement' },
+      ],
+    });
     expect(at(duals, 'the outer tire is cut, five thirty-seconds')).toMatchObject({
       marks: [
         { itemKey: 'outer.condition', answer: 'defect' },

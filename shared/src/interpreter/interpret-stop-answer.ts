@@ -391,7 +391,8 @@ function interpretStopTranscript(
         markDefects(lastDefect.indices, lastDefect.start, segment.end);
         continue;
       }
-      const outcome = markReading(reader, reading, scope, marks, mark);
+      const before = scope.length === 0 && s > 0 ? namesIn(reader, segments[s - 1] ?? segment) : [];
+      const outcome = markReading(reader, reading, scope, marks, mark, before);
       if (outcome) return { ...outcome, ...heard };
       continue;
     }
@@ -564,12 +565,17 @@ function markReading(
   scope: readonly number[],
   marks: ReadonlyMap<number, StopMark>,
   mark: (index: number, value: StopMark) => void,
+  // Words named just before ("the inner tire is low, ninety psi"): the item they fit best goes first.
+  context: readonly PhraseMatch<number[]>[] = [],
 ): { kind: 'unclear'; reason: UnclearReason } | undefined {
   const fitting = reader.items.flatMap((item, index) =>
     item.expects.type === 'measure' && item.expects.quantity === reading.quantity ? [index] : [],
   );
   const inScope = scope.length > 0 ? fitting.filter((index) => scope.includes(index)) : fitting;
-  const target = inScope.find((index) => !marks.has(index));
+  const said = new Set(context.flatMap((name) => reader.text.stems.slice(name.start, name.end)));
+  const fit = (index: number): number => [...said].filter((stem) => reader.itemStems[index]?.has(stem)).length;
+  const ordered = said.size === 0 ? inScope : [...inScope].sort((a, b) => fit(b) - fit(a));
+  const target = ordered.find((index) => !marks.has(index));
   const item = target === undefined ? undefined : reader.items[target];
   if (target === undefined || !item) return { kind: 'unclear', reason: 'several_values' };
   mark(target, { itemKey: item.key, answer: 'measurement', measurement: reading.measurement });
