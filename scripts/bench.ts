@@ -9,6 +9,7 @@ import { projectRoot, run } from './lib/run.js';
 import { freshDatabase, startSeededServer } from './lib/stack.js';
 import { measureFirstLoadJs } from './lib/first-load.js';
 import { measureVoiceLoop } from './lib/voice-loop-latency.js';
+import { measureTalkTime } from './lib/talk-time.js';
 
 export interface BenchFigure {
   name: string;
@@ -78,6 +79,16 @@ try {
     figures.push(...(await measureFirstLoadJs(server.url)));
     say('bench: a walk-around by voice in Chromium (answer-to-prompt latency, voice-note size)');
     figures.push(...(await measureVoiceLoop(server.url)));
+    say('bench: the modelled talk time of a tractor + trailer pre-trip by voice in Chromium');
+    const talk = await measureTalkTime(server.url);
+    figures.push({
+      name: `modelled talk time, demo tractor + 2-axle trailer pre-trip by voice: ${talk.prompts} prompts, ${talk.words} words at 2.8 a second, ${talk.answers} answers at 2.0 s; ${talk.itemsOnServer} of ${talk.items} items on the server`,
+      unit: 'min',
+      p50: talk.minutes,
+      p95: talk.minutes,
+      p99: talk.minutes,
+      goal: 8,
+    });
   } finally {
     await server.stop();
   }

@@ -1,26 +1,39 @@
 import type { Page } from '@playwright/test';
 
-// The plan the fake recogniser follows, read by the init script.
+// The plan the fake recogniser follows, read by the init script. By default it answers as a
+// competent driver does: "good" at every stop, a value only where one is asked, "yes" to a read-back.
 export interface SpeechPlan {
   // Answer this many turns, then stay silent (for the reload test); null answers to the end.
   answerTurns: number | null;
   skipAt: number | null;
   noteAt: number | null;
-  // A steer-tire tread depth said below its limit, then confirmed.
+  // A steer-tire tread depth said below its limit at its stop, then confirmed.
   lowTreadKey: string | null;
-  // How long a note is talked for before "end note" (default 2.5 s).
+  // How long a note is talked for before it ends (default 2.5 s).
   noteMs?: number;
-  // A note on this item (said before its answer) instead of at turn `noteAt`, and its words.
+  // A note on this item's stop (said before its answer) instead of at turn `noteAt`, and its words.
   noteKey?: string;
   noteWords?: string;
+  // The note's words end with "end note" in the same sentence, as people talk.
+  noteEndsInSentence?: boolean;
+  // Answers said in order where their key matches, before the defaults: `stop:<stopKey>` while a
+  // stop is asked as a whole, `item:<itemKey>` while one item is asked, `phase:<phase>` in that
+  // phase (confirming, choosing, offering, paused, noting). null is a silent turn.
+  script?: Record<string, (string | null)[]>;
+  // Now and then an "um" or a "say again" before the answer, as drivers do.
+  chatter?: boolean;
+  // How long after listening starts an answer comes (default 40 ms).
+  answerMs?: number;
 }
 
 // Headless Chromium cannot speak or listen: both are replaced before the app loads. The fake
-// recogniser answers each turn from what the screen shows (item, what it expects, the loop's phase).
+// recogniser answers each turn from what the screen shows (stop, item, what it expects, the phase).
 function fakeSpeech(p: SpeechPlan): void {
   interface Turn {
     phase: string;
+    stop: string;
     key: string;
+    mode: string;
     expects: string;
     answer: string | null;
   }
@@ -35,9 +48,14 @@ function fakeSpeech(p: SpeechPlan): void {
   const promptedAt: number[] = [];
   w.__answeredAt = answeredAt;
   w.__promptedAt = promptedAt;
+  const script: Record<string, (string | null)[]> = JSON.parse(JSON.stringify(p.script ?? {})) as Record<
+    string,
+    (string | null)[]
+  >;
   let asked = 0;
   let skipped = false;
   let noted = 0;
+  let chatty = 0;
   const air: Record<string, string> = {
     low_air_warning: 'sixty five psi',
     spring_brakes: 'thirty psi',
@@ -65,31 +83,49 @@ function fakeSpeech(p: SpeechPlan): void {
         return 'good';
     }
   };
+  const fromScript = (key: string): string | null | undefined => {
+    const queue = script[key];
+    if (!queue || queue.length === 0) return undefined;
+    return queue.shift() ?? null;
+  };
   const decide = (): string | null => {
     const card = document.querySelector<HTMLElement>('[data-testid="walkaround-item"]');
     const phase = card?.dataset.phase ?? '';
+    const stop = card?.dataset.stopKey ?? '';
     const key = card?.dataset.itemKey ?? '';
+    const mode = card?.dataset.mode ?? 'stop';
     const expects = card?.dataset.expects ?? 'check';
-    let answer: string | null;
-    if (phase === 'confirming' || phase === 'offering') answer = 'yes';
-    else if (phase === 'noting')
-      answer = noted++ === 0 ? (p.noteWords ?? 'the marker lens is cracked on the left side') : 'end note';
-    else if (p.answerTurns !== null && asked >= p.answerTurns) answer = null;
-    else {
-      asked += 1;
-      if (p.skipAt !== null && asked === p.skipAt && !skipped) {
-        skipped = true;
-        answer = 'skip';
-      } else if (
-        noted === 0 &&
-        ((p.noteAt !== null && asked === p.noteAt) || (p.noteKey !== undefined && key === p.noteKey))
-      )
-        answer = 'note';
-      else if (key === p.lowTreadKey) answer = 'one thirty-second';
-      else answer = expects === 'check' ? 'good' : measure(expects, key);
+    const record = (answer: string | null) => {
+      turns.push({ phase, stop, key, mode, expects, answer });
+      return answer;
+    };
+    const scriptKey = phase === 'asking' ? (mode === 'stop' ? `stop:${stop}` : `item:${key}`) : `phase:${phase}`;
+    const scripted = fromScript(scriptKey);
+    if (scripted !== undefined) return record(scripted);
+    if (phase === 'confirming' || phase === 'offering') return record('yes');
+    if (phase === 'paused') return record('resume');
+    if (phase === 'choosing') return record('one by one');
+    if (phase === 'noting') {
+      const words = p.noteWords ?? 'the marker lens is cracked on the left side';
+      if (noted++ > 0) return record('end note');
+      return record(p.noteEndsInSentence ? `${words}, end note` : words);
     }
-    turns.push({ phase, key, expects, answer });
-    return answer;
+    if (p.answerTurns !== null && asked >= p.answerTurns) return record(null);
+    asked += 1;
+    if (p.chatter && phase === 'asking' && chatty++ % 9 === 4) return record(chatty % 2 === 0 ? 'um' : 'say again');
+    if (p.skipAt !== null && asked === p.skipAt && !skipped) {
+      skipped = true;
+      return record('skip');
+    }
+    const noteHere =
+      p.noteKey !== undefined &&
+      (key === p.noteKey || (mode === 'stop' && card?.dataset.stopItems?.split(' ').includes(p.noteKey)));
+    if (noted === 0 && ((p.noteAt !== null && asked === p.noteAt) || noteHere)) return record('note');
+    const lowHere = p.lowTreadKey !== null && card?.dataset.stopItems?.split(' ').includes(p.lowTreadKey);
+    if (mode === 'stop' && lowHere) return record('good, one thirty-second');
+    if (mode === 'stop') return record('good');
+    if (key === p.lowTreadKey) return record('one thirty-second');
+    return record(expects === 'check' ? 'good' : measure(expects, key));
   };
 
   class FakeRecognition {
@@ -116,7 +152,7 @@ function fakeSpeech(p: SpeechPlan): void {
           this.onresult?.({ resultIndex: 0, results: [result] });
           this.onend?.();
         },
-        noting ? (p.noteMs ?? 2500) : 40,
+        noting ? (p.noteMs ?? 2500) : (p.answerMs ?? 40),
       );
     }
     stop(): void {

@@ -34,30 +34,28 @@ async function renderScreen(createEngine: () => SpeechEngine) {
 }
 
 describe('the glove screen', () => {
-  it('answers three items by voice, shows the progress and saves each answer and the resume point', async () => {
-    // The first items of the walk-around are plain checks, so "good" answers them.
-    expect(checklist.items.slice(0, 3).map((item) => item.expects.type)).toEqual(['check', 'check', 'check']);
-    const clientId = await renderScreen(() => new ScriptedEngine(['good', 'good', 'good']));
-    expect(screen.getByTestId('walkaround-item')).toHaveAttribute('data-item-key', checklist.items[0]?.key);
+  it('answers two stops by voice, shows the progress and saves each item and the resume point', async () => {
+    const [first, second, third] = checklist.stops;
+    const answered = [...(first?.itemKeys ?? []), ...(second?.itemKeys ?? [])];
+    const clientId = await renderScreen(() => new ScriptedEngine(['good', 'good']));
+    expect(screen.getByTestId('walkaround-item')).toHaveAttribute('data-stop-key', first?.key);
+    expect(screen.getByTestId('stop-items')).toBeInTheDocument();
     await userEvent.click(screen.getByTestId('start-walkaround'));
 
     await waitFor(() =>
-      expect(screen.getByTestId('walkaround-progress')).toHaveTextContent(`3 of ${checklist.items.length} done`),
+      expect(screen.getByTestId('walkaround-progress')).toHaveTextContent(
+        `${answered.length} of ${checklist.items.length} done`,
+      ),
     );
-    expect(screen.getByTestId('walkaround-item')).toHaveAttribute('data-item-key', checklist.items[3]?.key);
+    expect(screen.getByTestId('walkaround-item')).toHaveAttribute('data-stop-key', third?.key);
     expect(screen.getByTestId('heard')).toHaveTextContent('Heard: “good”');
     const { store } = getOfflineRuntime();
     await waitFor(async () => {
       const results = await store.getResults(clientId);
-      expect(results.map((r) => r.itemKey).sort()).toEqual(
-        checklist.items
-          .slice(0, 3)
-          .map((i) => i.key)
-          .sort(),
-      );
+      expect(results.map((r) => r.itemKey).sort()).toEqual([...answered].sort());
       expect(results.every((r) => r.upsert.answer === 'pass')).toBe(true);
       const stored = await store.getInspection(clientId);
-      expect(stored?.voiceState).toMatchObject({ itemKey: checklist.items[3]?.key });
+      expect(stored?.voiceState).toMatchObject({ stopKey: third?.key });
     });
   });
 
@@ -66,7 +64,7 @@ describe('the glove screen', () => {
     const engine = new TypedInputEngine();
     await renderScreen(() => engine);
     await userEvent.click(screen.getByTestId('start-walkaround'));
-    const targets = await screen.findAllByRole('button', { name: /^(Good|Defect|Repeat)$/ });
+    const targets = await screen.findAllByRole('button', { name: /^(All good|Defect|One by one)$/ });
     expect(targets).toHaveLength(3);
     for (const target of targets) {
       // 76 CSS px is 20 mm at 96 px per inch; glove mode raises it to at least 112 px.
@@ -75,12 +73,21 @@ describe('the glove screen', () => {
     }
     expect(TARGET_CLASS).toContain('min-h-[max(76px');
 
+    const first = checklist.stops[0]?.itemKeys.length ?? 0;
     await userEvent.type(screen.getByLabelText('Type your answer'), 'good');
     await userEvent.click(screen.getByRole('button', { name: 'Send' }));
-    await waitFor(() => expect(screen.getByTestId('walkaround-progress')).toHaveTextContent('1 of'));
+    await waitFor(() => expect(screen.getByTestId('walkaround-progress')).toHaveTextContent(`${first} of`));
 
+    // "Defect" at a stop asks which item; its button names it.
+    const second = checklist.stops[1];
+    const named = checklist.items.find((item) => item.key === second?.itemKeys[0]);
     await userEvent.click(screen.getByRole('button', { name: 'Defect' }));
-    await waitFor(() => expect(screen.getByTestId('walkaround-progress')).toHaveTextContent('2 of'));
+    await userEvent.click(await screen.findByRole('button', { name: named?.name ?? 'missing' }));
+    await waitFor(() =>
+      expect(screen.getByTestId('walkaround-progress')).toHaveTextContent(
+        `${first + (second?.itemKeys.length ?? 0)} of`,
+      ),
+    );
     expect(screen.getByText(/Add a photo of the defect/)).toBeInTheDocument();
   });
 
@@ -88,7 +95,7 @@ describe('the glove screen', () => {
     const engine = new TypedInputEngine();
     await renderScreen(() => engine);
     await userEvent.click(screen.getByTestId('start-walkaround'));
-    await screen.findByRole('button', { name: 'Good' });
+    await screen.findByRole('button', { name: 'All good' });
     const titles = checklist.items.map((item) => item.title);
     const target = checklist.items.find(
       (item, index) => index > 10 && titles.indexOf(item.title) === titles.lastIndexOf(item.title),

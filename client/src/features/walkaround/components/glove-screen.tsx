@@ -1,6 +1,6 @@
 import { Suspense, lazy, useEffect, useMemo, useRef, useState, type ChangeEvent } from 'react';
 import { useTranslation } from 'react-i18next';
-import type { ItemResult, Locale } from '@yardcall/shared';
+import type { ChecklistStop, ItemResult, Locale } from '@yardcall/shared';
 import { ErrorAlert, Notice } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { describeError } from '@/lib/errors';
@@ -8,7 +8,7 @@ import { getOfflineRuntime, useSyncStatus, type JsonValue } from '@/lib/offline'
 import { resizePhoto, startRecording, type NoteRecording } from '@/lib/recorder';
 import { TypedInputEngine, chooseSpeechEngine, type SpeechEngine } from '@/lib/speech';
 import type { LocalWalkaround } from '@/lib/offline';
-import { VOICE_LOOP_WORDS, restoreVoiceLoop, serializeVoiceLoop, useVoiceLoop } from '../voice-loop';
+import { NOTE_MAX_MS, VOICE_LOOP_WORDS, restoreVoiceLoop, useVoiceLoop } from '../voice-loop';
 import { observeEngine } from './observed-engine';
 import { SafetyCaution } from '@/components/ui/safety-caution';
 import { useMediaSession } from './use-media-session';
@@ -19,18 +19,20 @@ import { TypedInputForm } from '@/components/ui/typed-input-form';
 // The list and its dialog code load on first opening, off the run screen's first load.
 const ItemListDialog = lazy(async () => ({ default: (await import('./item-list-dialog')).ItemListDialog }));
 
-// Our own practice: a note longer than two minutes is a conversation, not a note.
-export const NOTE_MAX_MS = 120_000;
+// The voice loop ends a note at its longest length and says so; the recorder stops a little later
+// only if the loop could not.
+const RECORDER_BACKSTOP_MS = NOTE_MAX_MS + 5_000;
 
 // At least 20 mm (about 76 CSS px) high and 8 mm (about 31 px) apart; bigger in glove mode. Marked
 // important: the button's own minimum heights would otherwise win by their place in the stylesheet.
 export const TARGET_CLASS = 'min-h-[max(76px,4.75rem)]! [.glove_&]:min-h-[max(112px,5.5rem)]! w-full text-3xl';
 export const TARGET_GAP_CLASS = 'gap-[max(31px,2rem)]';
 
-// The prompt begins with where the item is, which the card already shows.
-function withoutPosition(prompt: string, position: string | undefined): string {
-  const prefix = position ? `${position}. ` : '';
-  return prefix && prompt.startsWith(prefix) ? prompt.slice(prefix.length) : prompt;
+// The stop's own prompt is what the card already shows; anything else said with it (a value said
+// back, a defect noted, a question) is shown under it.
+function saysOnlyTheStop(prompt: string, stop: ChecklistStop | undefined, zoneTitle: string): boolean {
+  if (!stop) return false;
+  return [stop.prompt, stop.shortPrompt, `${zoneTitle}. ${stop.prompt}`].includes(prompt);
 }
 
 // The words a button stands for, from the same list the recogniser is biased towards.
@@ -74,13 +76,11 @@ export function GloveScreen({ walkaround, onFinished, createEngine }: GloveScree
   const engine = useMemo(() => observeEngine(baseEngine, { onSpoken: setPrompt, onHeard: setHeard }), [baseEngine]);
   // Resume at the stored item after a reload; a state that no longer fits the checklist starts afresh.
   const [initialState] = useState(() =>
-    inspection.voiceState === undefined
-      ? undefined
-      : (restoreVoiceLoop(JSON.stringify(inspection.voiceState), checklist) ?? undefined),
+    inspection.voiceState === undefined ? undefined : (restoreVoiceLoop(inspection.voiceState, checklist) ?? undefined),
   );
 
   const startNote = (itemKey: string) => {
-    const pending = startRecording({ maxMs: NOTE_MAX_MS })
+    const pending = startRecording({ maxMs: RECORDER_BACKSTOP_MS })
       .then((rec) => {
         // Stopped by silence or its length: end the note in the loop too, which saves it.
         void rec.finished.then((note) => {
@@ -119,6 +119,7 @@ export function GloveScreen({ walkaround, onFinished, createEngine }: GloveScree
     checklist,
     initialState,
     locale: initialState?.locale ?? checklist.locale,
+    requiredReadings: inspection.requiredReadings,
     host: {
       onResult: async (result) => {
         let id = resultIds.current.get(result.itemKey);
@@ -126,13 +127,15 @@ export function GloveScreen({ walkaround, onFinished, createEngine }: GloveScree
           id = crypto.randomUUID();
           resultIds.current.set(result.itemKey, id);
         }
-        setLastDefect(result.answer === 'defect' ? result : null);
+        // The photo button stays with the last defect named, whatever passes the same stop saved after it.
+        if (result.answer === 'defect' && !result.fixed) setLastDefect(result);
         await store.saveResults(clientId, [{ ...result, clientId: id }]);
       },
       onState: (state) => {
-        // The loop's state is plain JSON: stored as is, read back on reload.
-        const stored = JSON.parse(serializeVoiceLoop(state)) as JsonValue;
-        store.saveVoiceState(clientId, stored).catch((error: unknown) => setProblem(describeError(error)));
+        // The loop's state is plain JSON: stored as it is, read back on reload.
+        store
+          .saveVoiceState(clientId, state as unknown as JsonValue)
+          .catch((error: unknown) => setProblem(describeError(error)));
       },
       onStartNote: (itemKey) => startNote(itemKey),
       onStopNote: (_itemKey, words) => finishNote(words),
@@ -152,13 +155,22 @@ export function GloveScreen({ walkaround, onFinished, createEngine }: GloveScree
     start();
   }, [start]);
 
-  const { state, item } = voice;
+  const { state, item, currentStop: stop } = voice;
   const phase = state.phase;
   const words = buttonWords(state.locale);
   const done = Object.keys(state.results).length;
   const total = checklist.items.length;
-  const zoneTitle = checklist.zones.find((zone) => zone.key === item?.zone)?.title ?? '';
+  const zoneTitle = checklist.zones.find((zone) => zone.key === stop?.zone)?.title ?? '';
   const started = voice.running || !['idle', 'stalled'].includes(phase);
+  // The stop is asked as a whole until the driver goes one by one or one item is asked on its own.
+  const atStop = state.current === null;
+  const stopItems = stop ? checklist.items.filter((i) => i.stopKey === stop.key) : [];
+  const whichItems =
+    phase === 'choosing' && state.which
+      ? state.which.candidates.flatMap((key) => checklist.items.filter((i) => i.key === key))
+      : [];
+  const mode = atStop ? 'stop' : state.current?.reading ? 'reading' : 'item';
+  const safetyHere = atStop ? stopItems.some((i) => i.safety) : item?.safety;
 
   const act = (direction: SwipeDirection | 'note') => {
     if (!voice.running) return;
@@ -212,21 +224,38 @@ export function GloveScreen({ walkaround, onFinished, createEngine }: GloveScree
         aria-live="polite"
         aria-label={t('walkaround.run.current')}
         data-testid="walkaround-item"
-        data-item-key={item?.key ?? ''}
-        data-expects={item?.expects.type === 'measure' ? item.expects.quantity : 'check'}
+        data-stop-key={stop?.key ?? ''}
+        data-stop-items={stop?.itemKeys.join(' ') ?? ''}
+        data-item-key={atStop ? '' : (item?.key ?? '')}
+        data-mode={mode}
+        data-expects={!atStop && item?.expects.type === 'measure' ? item.expects.quantity : atStop ? 'stop' : 'check'}
         data-phase={phase}
         className="touch-pan-y select-none rounded-xl border-4 border-line bg-surface p-4"
         {...swipe}
       >
-        <p className="text-lg font-bold">{item?.positionLabel}</p>
-        <p className="text-3xl leading-tight font-bold hyphens-auto [overflow-wrap:break-word]">{item?.title}</p>
+        {atStop ? null : <p className="text-lg font-bold">{item?.positionLabel}</p>}
+        <p className="text-3xl leading-tight font-bold hyphens-auto [overflow-wrap:break-word]">
+          {atStop ? stop?.label : item?.title}
+        </p>
+        {atStop && !['confirming', 'choosing', 'offering', 'finished'].includes(phase) ? (
+          <ul className="mt-2 flex flex-wrap gap-x-4 text-xl" data-testid="stop-items">
+            {stopItems.map((i) => (
+              <li key={i.key}>{i.name}</li>
+            ))}
+          </ul>
+        ) : null}
         {phase === 'confirming' && state.pending ? (
           <p className="mt-2 text-2xl font-bold">{state.pending.question}</p>
+        ) : null}
+        {phase === 'choosing' && state.which ? (
+          <p className="mt-2 text-2xl font-bold">{t('walkaround.run.which', { detail: state.which.detail })}</p>
         ) : null}
         {phase === 'offering' || phase === 'paused' || phase === 'noting' ? (
           <p className="mt-2 text-2xl font-bold">{t(`walkaround.run.phase.${phase}`)}</p>
         ) : null}
-        {prompt && started ? <p className="mt-2 text-base">{withoutPosition(prompt, item?.positionLabel)}</p> : null}
+        {prompt && started && !(atStop && phase === 'asking' && saysOnlyTheStop(prompt, stop, zoneTitle)) ? (
+          <p className="mt-2 text-base">{prompt}</p>
+        ) : null}
         <p className="mt-2 text-lg" data-testid="heard">
           {heard ? t('walkaround.run.heard', { heard }) : t('walkaround.run.heardNothing')}
         </p>
@@ -259,17 +288,47 @@ export function GloveScreen({ walkaround, onFinished, createEngine }: GloveScree
         </Button>
       ) : null}
 
+      {voice.running && phase === 'choosing' ? (
+        <div className={`flex flex-col ${TARGET_GAP_CLASS}`} data-testid="targets">
+          {whichItems.map((i) => (
+            <Button
+              key={i.key}
+              size="large"
+              variant="danger"
+              className={TARGET_CLASS}
+              onClick={() => voice.answer(i.name)}
+            >
+              {i.name}
+            </Button>
+          ))}
+          <Button size="large" variant="secondary" className={TARGET_CLASS} onClick={() => voice.command('one_by_one')}>
+            {t('walkaround.run.oneByOne')}
+          </Button>
+        </div>
+      ) : null}
+
       {voice.running && (phase === 'asking' || choosing) ? (
         <div className={`flex flex-col ${TARGET_GAP_CLASS}`} data-testid="targets">
           <Button size="large" className={TARGET_CLASS} onClick={() => act('right')}>
-            {choosing ? t('walkaround.run.yes') : t('walkaround.run.good')}
+            {choosing ? t('walkaround.run.yes') : atStop ? t('walkaround.run.allGood') : t('walkaround.run.good')}
           </Button>
           <Button size="large" variant="danger" className={TARGET_CLASS} onClick={() => act('left')}>
             {choosing ? t('walkaround.run.no') : t('walkaround.run.defect')}
           </Button>
-          <Button size="large" variant="secondary" className={TARGET_CLASS} onClick={() => act('down')}>
-            {t('walkaround.run.repeat')}
-          </Button>
+          {phase === 'asking' && atStop ? (
+            <Button
+              size="large"
+              variant="secondary"
+              className={TARGET_CLASS}
+              onClick={() => voice.command('one_by_one')}
+            >
+              {t('walkaround.run.oneByOne')}
+            </Button>
+          ) : (
+            <Button size="large" variant="secondary" className={TARGET_CLASS} onClick={() => act('down')}>
+              {t('walkaround.run.repeat')}
+            </Button>
+          )}
         </div>
       ) : null}
 
@@ -282,7 +341,7 @@ export function GloveScreen({ walkaround, onFinished, createEngine }: GloveScree
         />
       ) : null}
 
-      {item?.safety && started ? <SafetyCaution /> : null}
+      {safetyHere && started ? <SafetyCaution /> : null}
       {problem ? <ErrorAlert>{problem}</ErrorAlert> : null}
       {notice ? <Notice>{notice}</Notice> : null}
       {voice.speechFailure ? (

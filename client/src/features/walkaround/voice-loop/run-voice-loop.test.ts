@@ -3,7 +3,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { ScriptedEngine, type ScriptedReply, type ScriptedTurn } from '@/lib/speech';
 import { runVoiceLoop, summarizeTimings, type VoiceLoopRunner } from './run-voice-loop';
 import { passingAnswer } from './voice-loop.testing';
-import { restoreVoiceLoop, serializeVoiceLoop } from './voice-loop';
+import { restoreVoiceLoop } from './voice-loop';
 
 let en: Checklist;
 let es: Checklist;
@@ -13,7 +13,7 @@ beforeAll(() => {
   es = buildChecklist(sampleCombination(), 'pre_trip', 'es');
 });
 
-// Answers like a careful driver, reading the loop's own state to know the item.
+// Answers like a careful driver, reading the loop's own state to know the stop or the item.
 function carefulDriver(getRunner: () => VoiceLoopRunner | undefined, checklist: () => Checklist) {
   return (turn: ScriptedTurn): ScriptedReply => {
     const state = getRunner()?.getState();
@@ -21,6 +21,7 @@ function carefulDriver(getRunner: () => VoiceLoopRunner | undefined, checklist: 
     const yes = turn.locale === 'es' ? 'sí' : 'yes';
     if (state.phase === 'confirming') return yes;
     if (state.phase === 'offering') return 'finish';
+    if (state.current === null) return turn.locale === 'es' ? 'bien' : 'good';
     const item = checklist().items[state.index];
     return item ? passingAnswer(item, turn.locale) : 'finish';
   };
@@ -62,8 +63,8 @@ describe('runVoiceLoop', () => {
     expect(finished).toBe(true);
     expect(new Set(saved.map((r) => r.itemKey)).size).toBe(en.items.length);
     expect(engine.listenedWhileSpeaking).toBe(false);
-    // One timing per answer that led to a prompt.
-    expect(runner.timings.length).toBeGreaterThanOrEqual(en.items.length);
+    // One timing per answer that led to a prompt: one a stop.
+    expect(runner.timings.length).toBeGreaterThanOrEqual(en.stops.length - 1);
     const latencies = runner.timings.map((t) => t.latencyMs);
     expect(latencies.every((ms) => ms >= 0)).toBe(true);
     const summary = summarizeTimings(runner.timings);
@@ -79,26 +80,40 @@ describe('runVoiceLoop', () => {
     const states: string[] = [];
     const runner = runVoiceLoop(engine, en, { onResult: () => undefined, onState: (s) => states.push(s.itemKey) });
     runner.send({ type: 'command', command: 'skip', at: '2026-12-01T06:00:00.000Z' });
-    expect(runner.getState().skipped).toEqual([en.items[0]?.key]);
-    expect(runner.getState().index).toBe(1);
+    expect(runner.getState().skipped).toEqual(en.stops[0]?.itemKeys);
+    expect(runner.getState().stop).toBe(1);
     runner.stop();
     await runner.whenIdle();
     expect(engine.prompts.at(-1)).toContain('Skipped.');
   });
 
-  it('stops when the engine aborts (end of script), and resumes a stored state at the same item', async () => {
+  it('stops when the engine aborts (end of script), and resumes a stored state at the same stop', async () => {
     const engine = new ScriptedEngine(['good', 'good', 'good']);
     const runner = runVoiceLoop(engine, en, { onResult: () => undefined });
     const state = await runner.whenIdle();
-    expect(state.index).toBe(3);
-    const stored = serializeVoiceLoop(state);
-    const restored = restoreVoiceLoop(stored, en);
+    expect(state.stop).toBe(3);
+    const restored = restoreVoiceLoop(JSON.parse(JSON.stringify(state)), en);
     if (!restored) throw new Error('not restored');
     const second = new ScriptedEngine(['good']);
     const resumed = runVoiceLoop(second, en, { onResult: () => undefined }, { initialState: restored });
     await resumed.whenIdle();
-    expect(second.prompts[0]).toBe(`Picking up where you left off. ${en.items[3]?.prompt}`);
-    expect(resumed.getState().index).toBe(4);
+    expect(second.prompts[0]).toBe(`Picking up where you left off. ${en.stops[3]?.prompt}`);
+    expect(resumed.getState().stop).toBe(4);
+  });
+
+  it('ends a note at its longest length and says so', async () => {
+    const engine = new ScriptedEngine(['note'], { answerMs: 5 });
+    const stops: string[] = [];
+    const runner = runVoiceLoop(engine, en, {
+      onResult: () => undefined,
+      onStopNote: (_key, heard) => void stops.push(heard),
+    });
+    await new Promise((resolve) => setTimeout(resolve, 50));
+    expect(runner.getState().phase).toBe('noting');
+    runner.send({ type: 'note_limit' });
+    await runner.whenIdle();
+    expect(stops).toEqual(['']);
+    expect(engine.prompts.some((p) => p.startsWith('Two minutes.'))).toBe(true);
   });
 
   it('tells the host about notes and a fatal speech failure', async () => {
@@ -115,7 +130,7 @@ describe('runVoiceLoop', () => {
       onSpeechFailed: ({ code }) => events.push(`failed ${code}`),
     });
     const state = await runner.whenIdle();
-    const key = en.items[0]?.key ?? '';
+    const key = en.stops[0]?.itemKeys[0] ?? '';
     expect(events).toEqual([`start ${key} note`, `stop ${key} brake line rubbing`, 'failed not-allowed']);
     expect(state.phase).toBe('stalled');
   });
@@ -130,6 +145,6 @@ describe('runVoiceLoop', () => {
     await runner.whenIdle();
     expect(locales).toEqual(['es']);
     expect(engine.spoken[1]?.locale).toBe('es');
-    expect(engine.prompts[1]).toContain(es.items[0]?.prompt);
+    expect(engine.prompts[1]).toContain(es.stops[0]?.prompt);
   });
 });

@@ -1,6 +1,6 @@
 // Runs the voice loop's effects against a SpeechEngine: say, listen, feed what was heard back in.
 // The glove screen drives the walk-around through this; tests drive it with the scripted engine.
-import type { Checklist, ItemResult, Locale } from '@yardcall/shared';
+import type { Checklist, ItemResult, Locale, ReadingRule } from '@yardcall/shared';
 import type { ListenResult, SpeechEngine } from '@/lib/speech';
 import {
   initialVoiceLoopState,
@@ -64,6 +64,8 @@ export interface RunVoiceLoopOptions {
   now?: () => number;
   // When answers were given, for the results.
   wallClock?: () => Date;
+  // Readings the organisation requires; by default none.
+  requiredReadings?: readonly ReadingRule[];
 }
 
 export interface VoiceLoopRunner {
@@ -79,9 +81,9 @@ export interface VoiceLoopRunner {
 
 export type ChecklistSource = Checklist | ((locale: Locale) => Checklist);
 
-function contextOf(source: ChecklistSource): VoiceLoopContext {
+function contextOf(source: ChecklistSource, requiredReadings: readonly ReadingRule[]): VoiceLoopContext {
   // A single checklist keeps its own prompts whatever the language; the loop's words still switch.
-  return { checklistFor: typeof source === 'function' ? source : () => source };
+  return { checklistFor: typeof source === 'function' ? source : () => source, requiredReadings };
 }
 
 function eventOf(result: ListenResult, at: string): VoiceLoopEvent | 'aborted' {
@@ -98,7 +100,7 @@ export function runVoiceLoop(
   host: VoiceLoopHost,
   options: RunVoiceLoopOptions = {},
 ): VoiceLoopRunner {
-  const ctx = contextOf(checklist);
+  const ctx = contextOf(checklist, options.requiredReadings ?? []);
   const now = options.now ?? (() => performance.now());
   const wallClock = options.wallClock ?? (() => new Date());
   const startLocale = options.locale ?? (typeof checklist === 'function' ? 'en' : checklist.locale);
@@ -109,6 +111,12 @@ export function runVoiceLoop(
   let running = false;
   let answerEndedAt: number | null = null;
   let idleWaiters: ((state: VoiceLoopState) => void)[] = [];
+  // Ends a note that reached its longest length; the loop says so.
+  let noteTimer: ReturnType<typeof setTimeout> | undefined;
+  const clearNoteTimer = () => {
+    clearTimeout(noteTimer);
+    noteTimer = undefined;
+  };
   const warmed = new Set<Locale>();
 
   const hostCall = (call: () => void | Promise<void>) => {
@@ -168,9 +176,12 @@ export function runVoiceLoop(
           hostCall(() => host.onResult(effect.result));
           break;
         case 'startNote':
+          clearNoteTimer();
+          noteTimer = setTimeout(() => send({ type: 'note_limit' }), effect.maxMs);
           hostCall(() => host.onStartNote?.(effect.itemKey, effect.heard));
           break;
         case 'stopNote':
+          clearNoteTimer();
           hostCall(() => host.onStopNote?.(effect.itemKey, effect.heard));
           break;
         case 'setLocale':
@@ -225,6 +236,7 @@ export function runVoiceLoop(
       if (stopped) return;
       stopped = true;
       generation += 1;
+      clearNoteTimer();
       engine.cancel();
       engine.abort();
       becomeIdle();

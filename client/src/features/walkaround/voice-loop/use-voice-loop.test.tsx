@@ -7,30 +7,32 @@ import { useVoiceLoop } from './use-voice-loop';
 const checklist = buildChecklist(sampleCombination(), 'pre_trip', 'en');
 
 describe('useVoiceLoop', () => {
-  it('runs the loop on a tap and exposes the current item and each saved answer', async () => {
-    const engine = new ScriptedEngine(['good', 'defect, coolant leaking']);
+  it('runs the loop on a tap and exposes the current stop and each saved answer', async () => {
+    const engine = new ScriptedEngine(['good', 'good except the box is leaking']);
     const saved: ItemResult[] = [];
     const { result } = renderHook(() =>
       useVoiceLoop({ engine, checklist, host: { onResult: (r) => void saved.push(r) } }),
     );
+    const [first, second, third] = checklist.stops;
     expect(result.current.state.phase).toBe('idle');
-    expect(result.current.item?.key).toBe(checklist.items[0]?.key);
+    expect(result.current.currentStop?.key).toBe(first?.key);
     act(() => result.current.start());
     await waitFor(() => expect(result.current.running).toBe(false));
-    expect(saved.map((r) => r.answer)).toEqual(['pass', 'defect']);
-    expect(result.current.state.index).toBe(2);
-    expect(result.current.item?.key).toBe(checklist.items[2]?.key);
+    expect(saved).toHaveLength((first?.itemKeys.length ?? 0) + (second?.itemKeys.length ?? 0));
+    expect(saved.filter((r) => r.answer === 'defect').map((r) => r.itemKey)).toEqual(['u1.steering.box']);
+    expect(result.current.currentStop?.key).toBe(third?.key);
+    expect(result.current.item?.key).toBe(third?.itemKeys[0]);
     expect(result.current.lastTiming?.latencyMs).toBeGreaterThanOrEqual(0);
   });
 
-  it('shows a speech failure and resumes at the same item on the next start', async () => {
+  it('shows a speech failure and resumes at the same stop on the next start', async () => {
     const engine = new ScriptedEngine([{ error: 'audio-capture' }, 'good']);
     const { result } = renderHook(() => useVoiceLoop({ engine, checklist, host: { onResult: () => undefined } }));
     act(() => result.current.start());
     await waitFor(() => expect(result.current.speechFailure?.code).toBe('audio-capture'));
     expect(result.current.state.phase).toBe('stalled');
     act(() => result.current.start());
-    await waitFor(() => expect(result.current.state.index).toBe(1));
+    await waitFor(() => expect(result.current.state.stop).toBe(1));
     expect(result.current.speechFailure).toBeNull();
   });
 
@@ -41,7 +43,7 @@ describe('useVoiceLoop', () => {
     );
     act(() => result.current.start());
     act(() => result.current.command('skip'));
-    expect(result.current.state.skipped).toEqual([checklist.items[0]?.key]);
+    expect(result.current.state.skipped).toEqual(checklist.stops[0]?.itemKeys);
     unmount();
   });
 });

@@ -1,6 +1,6 @@
 // Wires the runner, a speech engine and React state, so the glove screen only renders.
 import { useCallback, useEffect, useRef, useState } from 'react';
-import type { ChecklistItem, Command, Locale } from '@yardcall/shared';
+import type { ChecklistItem, ChecklistStop, Command, Locale, ReadingRule } from '@yardcall/shared';
 import type { SpeechEngine } from '@/lib/speech';
 import {
   runVoiceLoop,
@@ -20,10 +20,14 @@ export interface UseVoiceLoopOptions {
   // A stored state to resume from.
   initialState?: VoiceLoopState;
   locale?: Locale;
+  // Readings the organisation requires, kept with the walk-around when it started.
+  requiredReadings?: readonly ReadingRule[];
 }
 
 export interface VoiceLoopView {
   state: VoiceLoopState;
+  currentStop: ChecklistStop | undefined;
+  // The item asked on its own, or the stop's first item while the stop is asked as a whole.
   item: ChecklistItem | undefined;
   running: boolean;
   // What the screen shows when listening cannot work.
@@ -47,7 +51,7 @@ function checklistFor(source: ChecklistSource, locale: Locale) {
 }
 
 export function useVoiceLoop(options: UseVoiceLoopOptions): VoiceLoopView {
-  const { engine, checklist, initialState, locale } = options;
+  const { engine, checklist, initialState, locale, requiredReadings } = options;
   const hostRef = useRef(options.host);
   const runnerRef = useRef<VoiceLoopRunner | null>(null);
   const [state, setState] = useState<VoiceLoopState>(
@@ -110,10 +114,11 @@ export function useVoiceLoop(options: UseVoiceLoopOptions): VoiceLoopView {
     const runner = runVoiceLoop(engine, checklist, host, {
       initialState: stateRef.current,
       ...(locale ? { locale } : {}),
+      ...(requiredReadings ? { requiredReadings } : {}),
     });
     runnerRef.current = runner;
     watch(runner);
-  }, [engine, checklist, locale, watch]);
+  }, [engine, checklist, locale, requiredReadings, watch]);
 
   // A button may wake a loop that had stopped (stalled, paused by the system): watch it again.
   const sendEvent = useCallback(
@@ -147,6 +152,21 @@ export function useVoiceLoop(options: UseVoiceLoopOptions): VoiceLoopView {
     setRunning(false);
   }, []);
 
-  const item = checklistFor(checklist, state.locale).items[state.index];
-  return { state, item, running, speechFailure, lastTiming, start, command, setLocale, answer, jump, stop };
+  const current = checklistFor(checklist, state.locale);
+  const item = current.items[state.index];
+  const stopView = current.stops[state.stop];
+  return {
+    state,
+    currentStop: stopView,
+    item,
+    running,
+    speechFailure,
+    lastTiming,
+    start,
+    command,
+    setLocale,
+    answer,
+    jump,
+    stop,
+  };
 }

@@ -15,18 +15,24 @@ function started(): VoiceLoopState {
 }
 
 describe('jumping to an item from the list', () => {
-  it('asks the chosen item in full and carries on in order after it', () => {
+  it('asks the chosen item in full and carries on at the stop the driver left', () => {
     const ctx = contextFor(checklist);
     const target = checklist.items[10]!;
-    const jumped = reduceVoiceLoop(started(), { type: 'jump', itemKey: target.key }, ctx);
-    expect(jumped.state).toMatchObject({ phase: 'asking', index: 10, itemKey: target.key });
+    const before = started();
+    const jumped = reduceVoiceLoop(before, { type: 'jump', itemKey: target.key }, ctx);
+    expect(jumped.state).toMatchObject({
+      phase: 'asking',
+      index: 10,
+      itemKey: target.key,
+      current: { key: target.key },
+    });
     expect(jumped.effects).toContainEqual({ type: 'speak', text: target.prompt, locale: 'en' });
     const answered = reduceVoiceLoop(
       jumped.state,
       { type: 'heard', alternatives: [{ transcript: 'good', confidence: 1 }], at },
       ctx,
     );
-    expect(answered.state.index).toBe(11);
+    expect(answered.state).toMatchObject({ stopKey: before.stopKey, current: null });
   });
 
   it('ignores an unknown key and a jump during a note', () => {

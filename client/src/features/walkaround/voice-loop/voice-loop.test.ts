@@ -1,18 +1,20 @@
-import { buildChecklist, readBackMeasurement, sampleCombination, type Checklist } from '@yardcall/shared';
+import { buildChecklist, sampleCombination, verdictWords, type Checklist, type ChecklistStop } from '@yardcall/shared';
 import { beforeAll, describe, expect, it } from 'vitest';
 import {
+  MAX_UNCLEAR,
   initialVoiceLoopState,
   reduceVoiceLoop,
   restoreVoiceLoop,
-  serializeVoiceLoop,
   type VoiceLoopState,
 } from './voice-loop';
 import {
   contextFor,
+  contextRequiring,
   latestResults,
   passEverything,
-  passingAnswer,
   simulateVoiceLoop,
+  wordCount,
+  type SimulatedReply,
   type SimulatedTurn,
 } from './voice-loop.testing';
 import { VOICE_LOOP_WORDS } from './voice-loop-words';
@@ -20,386 +22,360 @@ import { VOICE_LOOP_WORDS } from './voice-loop-words';
 let en: Checklist;
 let es: Checklist;
 const at = '2026-12-01T06:00:00.000Z';
+const EN = VOICE_LOOP_WORDS.en;
 
 beforeAll(() => {
   en = buildChecklist(sampleCombination(), 'pre_trip', 'en');
   es = buildChecklist(sampleCombination(), 'pre_trip', 'es');
 });
 
-function indexOf(checklist: Checklist, key: string): number {
-  const index = checklist.items.findIndex((item) => item.key === key);
-  if (index < 0) throw new Error(`no item ${key}`);
-  return index;
+function stopOf(checklist: Checklist, itemKey: string): ChecklistStop {
+  const item = checklist.items.find((i) => i.key === itemKey);
+  const stop = checklist.stops.find((s) => s.key === item?.stopKey);
+  if (!stop) throw new Error(`no stop for ${itemKey}`);
+  return stop;
 }
 
-// A state parked on an item, as if the driver had walked there.
-function stateAt(checklist: Checklist, key: string): VoiceLoopState {
-  const index = indexOf(checklist, key);
-  return { ...initialVoiceLoopState(checklist), phase: 'asking', index, itemKey: key };
+// A state parked at the stop of an item, as if the driver had walked there.
+function stateAtStop(checklist: Checklist, itemKey: string): VoiceLoopState {
+  const stop = stopOf(checklist, itemKey);
+  const first = stop.itemKeys[0] ?? '';
+  return {
+    ...initialVoiceLoopState(checklist),
+    phase: 'asking',
+    stop: checklist.stops.indexOf(stop),
+    stopKey: stop.key,
+    index: checklist.items.findIndex((i) => i.key === first),
+    itemKey: first,
+  };
 }
 
-// Answers from a list, one per turn, then stops.
-function scripted(...replies: (string | { silence: true })[]) {
+// Answers from a list, one per turn, then the competent driver's answers (or stop with `null`).
+function scripted(...replies: SimulatedReply[]) {
   let i = 0;
-  return () => replies[i++] ?? null;
+  return (turn: SimulatedTurn): SimulatedReply => (i < replies.length ? (replies[i++] ?? null) : passEverything(turn));
 }
 
-const STEER_TREAD = 'u1.axle1.left.tire.tread';
+function only(...replies: SimulatedReply[]) {
+  let i = 0;
+  return (): SimulatedReply => replies[i++] ?? null;
+}
 
-describe('the voice loop reducer', () => {
-  it('walks a whole tractor-and-trailer pre-trip by voice alone, saving every item', () => {
+const STEER_LEFT_HUB = 'u1.axle1.left.hub';
+const STEER_LEFT_TREAD = 'u1.axle1.left.tire.tread';
+const STEER_LEFT_PRESSURE = 'u1.axle1.left.tire.inflation';
+const STEER_LEFT_HOSES = 'u1.axle1.left.brake.hoses';
+
+describe('the voice loop, stop by stop', () => {
+  it('walks a whole tractor-and-trailer pre-trip with one "good" per stop, saving every item', () => {
     const run = simulateVoiceLoop(contextFor(en), passEverything);
     const results = latestResults(run.saved);
     expect(run.state.phase).toBe('finished');
     expect(results.size).toBe(en.items.length);
-    expect(en.items.length).toBeGreaterThan(200);
     for (const item of en.items) {
       const result = results.get(item.key);
       expect(result?.answer, item.key).toBe('pass');
-      if (item.expects.type === 'measure') expect(result?.measurement?.quantity, item.key).toBe(item.expects.quantity);
+      // A measured check passed by eye is recorded as checked without a reading.
+      if (item.expects.type === 'measure') expect(result?.noReading, item.key).toBe('visual');
+      else expect(result?.noReading, item.key).toBeUndefined();
     }
-    const finish = run.effects.find((e) => e.type === 'finish');
-    expect(finish).toMatchObject({ type: 'finish', notDone: [] });
-    expect(finish?.type === 'finish' && finish.results).toHaveLength(en.items.length);
-    // Every measurement was read back before it was kept.
-    const readBacks = run.spoken.filter((s) => s.endsWith('Is that right?'));
-    expect(readBacks.length).toBe(en.items.filter((i) => i.expects.type === 'measure').length);
+    // One answer per stop, and the talk stays short: at 2.8 words a second plus 2 s an answer.
+    expect(run.turns).toBe(en.stops.length);
+    const seconds = wordCount(run.spoken) / 2.8 + 2 * run.turns;
+    expect(seconds).toBeLessThan(8 * 60);
   });
 
-  it('reads a measurement back and keeps it only after the driver confirms', () => {
-    const ctx = contextFor(en);
-    const run = simulateVoiceLoop(ctx, scripted('twelve thirty seconds', 'yes'), { state: stateAt(en, STEER_TREAD) });
-    expect(run.spoken[1]).toBe('Twelve thirty-seconds. Is that right?');
-    expect(run.saved).toHaveLength(1);
-    expect(run.saved[0]).toMatchObject({
-      itemKey: STEER_TREAD,
-      answer: 'pass',
-      verdict: 'ok',
-      measurement: { quantity: 'tread_depth', value: 12, unit: 'in/32' },
-      heard: 'twelve thirty seconds',
+  it('says each stop once, position once, without asking "Is that right?" anywhere', () => {
+    const run = simulateVoiceLoop(contextFor(en), passEverything);
+    expect(run.spoken.join(' ')).not.toContain('Is that right');
+    const wheel = stopOf(en, STEER_LEFT_HUB);
+    expect(run.spoken.filter((s) => s.includes(wheel.prompt))).toHaveLength(1);
+  });
+
+  it('"good except the hub is leaking" marks the hub with the driver\'s words and passes the rest of the stop', () => {
+    const stop = stopOf(en, STEER_LEFT_HUB);
+    const run = simulateVoiceLoop(contextFor(en), only('good except the hub is leaking'), {
+      state: stateAtStop(en, STEER_LEFT_HUB),
+      first: { type: 'start' },
     });
-    expect(run.state.index).toBe(indexOf(en, STEER_TREAD) + 1);
+    const results = latestResults(run.saved);
+    expect(results.get(STEER_LEFT_HUB)).toMatchObject({ answer: 'defect' });
+    expect(results.get(STEER_LEFT_HUB)?.detail).toContain('leaking');
+    for (const key of stop.itemKeys.filter((k) => k !== STEER_LEFT_HUB))
+      expect(results.get(key)?.answer, key).toBe('pass');
+    expect(run.spoken.join(' ')).toContain(
+      EN.defectNoted.replace('{item}', en.items.find((i) => i.key === STEER_LEFT_HUB)?.name ?? ''),
+    );
+  });
+
+  it('"defect, chafed air line" at a brake marks the air lines and passes the rest', () => {
+    const stop = stopOf(en, STEER_LEFT_HOSES);
+    const run = simulateVoiceLoop(contextFor(en), only('defect, chafed air line'), {
+      state: stateAtStop(en, STEER_LEFT_HOSES),
+    });
+    const results = latestResults(run.saved);
+    expect(results.get(STEER_LEFT_HOSES)?.answer).toBe('defect');
+    expect(stop.itemKeys.filter((k) => results.get(k)?.answer === 'pass')).toHaveLength(stop.itemKeys.length - 1);
+  });
+
+  it('asks which item a problem belongs to when the answer does not say, and keeps the named one', () => {
+    const run = simulateVoiceLoop(contextFor(en), only('defect, it is leaking', 'the hub'), {
+      state: stateAtStop(en, STEER_LEFT_HUB),
+    });
+    expect(run.effects.some((e) => e.type === 'speak' && e.text.includes('which one'))).toBe(true);
+    const results = latestResults(run.saved);
+    expect(results.get(STEER_LEFT_HUB)?.answer).toBe('defect');
+    expect(results.get(STEER_LEFT_HUB)?.detail).toContain('leaking');
+  });
+
+  it('"one by one" walks the stop item by item, each with its own answer', () => {
+    const stop = stopOf(en, STEER_LEFT_HUB);
+    const replies = [
+      'one by one',
+      ...stop.itemKeys.map((key) => (key === STEER_LEFT_HUB ? 'defect, seal leaking' : 'good')),
+    ];
+    const run = simulateVoiceLoop(contextFor(en), only(...replies), { state: stateAtStop(en, STEER_LEFT_HUB) });
+    const results = latestResults(run.saved);
+    expect(stop.itemKeys.every((key) => results.has(key))).toBe(true);
+    expect(results.get(STEER_LEFT_HUB)?.answer).toBe('defect');
+    expect(run.saved).toHaveLength(stop.itemKeys.length);
+    expect(run.state.stop).toBe(en.stops.indexOf(stop) + 1);
+  });
+});
+
+describe('readings', () => {
+  it('says an in-limit value back at the start of the next prompt, without asking to confirm', () => {
+    const stop = stopOf(en, STEER_LEFT_TREAD);
+    const next = en.stops[en.stops.indexOf(stop) + 1] as ChecklistStop;
+    const run = simulateVoiceLoop(contextFor(en), only('good, eight thirty-seconds'), {
+      state: stateAtStop(en, STEER_LEFT_TREAD),
+    });
+    const results = latestResults(run.saved);
+    expect(results.get(STEER_LEFT_TREAD)).toMatchObject({ answer: 'pass', measurement: { value: 8 }, verdict: 'ok' });
+    const said = run.spoken.at(-1) ?? '';
+    expect(said.startsWith('Eight thirty-seconds.')).toBe(true);
+    expect([next.prompt, next.shortPrompt].some((prompt) => said.includes(prompt))).toBe(true);
+    expect(said).not.toContain('Is that right');
+  });
+
+  it('"no" right after a value was said back asks that value again', () => {
+    const run = simulateVoiceLoop(contextFor(en), only('good, eight thirty-seconds', 'no', 'six thirty-seconds'), {
+      state: stateAtStop(en, STEER_LEFT_TREAD),
+    });
+    const results = latestResults(run.saved);
+    expect(results.get(STEER_LEFT_TREAD)?.measurement?.value).toBe(6);
   });
 
   it('confirms a tread depth of 1/32 on a steer tire and keeps it as an out-of-limit defect', () => {
-    // 49 CFR 393.75(b): steer tires need at least 4/32 in.
-    const run = simulateVoiceLoop(contextFor(en), scripted('one thirty second', 'yes'), {
-      state: stateAt(en, STEER_TREAD),
+    const run = simulateVoiceLoop(contextFor(en), only('good, one thirty-second', 'yes'), {
+      state: stateAtStop(en, STEER_LEFT_TREAD),
     });
-    const question = run.spoken[1] ?? '';
-    expect(question).toContain('I heard one thirty-second.');
-    expect(question).toContain('below the minimum of 4 thirty-seconds');
-    expect(question).toContain('Is that right?');
-    expect(run.saved[0]).toMatchObject({ answer: 'defect', verdict: 'out_of_limit', measurement: { value: 1 } });
-    expect(run.saved[0]?.detail).toContain('below the minimum');
-    const after = run.spoken[2] ?? '';
-    expect(after).toContain('Kept at one thirty-second.');
-    expect(after).toContain('Marked as a defect.');
-    // The safety caution rides with every tire verdict.
-    expect(after).toMatch(/judgement/i);
+    const results = latestResults(run.saved);
+    expect(results.get(STEER_LEFT_TREAD)).toMatchObject({ answer: 'defect', verdict: 'out_of_limit' });
+    // 49 CFR 393.75(b): steer tires at least 4/32 in.
+    expect(run.spoken.some((s) => s.includes('Is that right'))).toBe(true);
   });
 
-  it('takes a correction after the read-back ("no, six") and reads the new value back', () => {
-    const run = simulateVoiceLoop(contextFor(en), scripted('five thirty seconds', 'no, six', 'yes'), {
-      state: stateAt(en, STEER_TREAD),
-    });
-    expect(run.spoken[1]).toBe('Five thirty-seconds. Is that right?');
-    expect(run.spoken[2]).toBe('Six thirty-seconds. Is that right?');
-    expect(run.saved).toHaveLength(1);
-    expect(run.saved[0]).toMatchObject({ answer: 'pass', measurement: { value: 6 } });
+  it('a required reading answered "good" is asked for; "no gauge" passes it and says so', () => {
+    const ctx = contextRequiring(['steer_tread_depth'], en);
+    const run = simulateVoiceLoop(ctx, only('good', 'good', 'no gauge'), { state: stateAtStop(en, STEER_LEFT_TREAD) });
+    const results = latestResults(run.saved);
+    expect(results.get(STEER_LEFT_TREAD)).toMatchObject({ answer: 'pass', noReading: 'no_gauge' });
+    expect(results.get(STEER_LEFT_PRESSURE)).toMatchObject({ answer: 'pass', noReading: 'visual' });
+    expect(run.spoken.filter((s) => s.includes('a reading is required')).length).toBeGreaterThanOrEqual(1);
   });
 
-  it('asks for the value again after a plain "no" to the read-back, without saving', () => {
-    const run = simulateVoiceLoop(contextFor(en), scripted('five thirty seconds', 'no'), {
-      state: stateAt(en, STEER_TREAD),
-    });
-    expect(run.spoken[2]).toBe('Say the value again.');
+  it('a tire under its spec, fixed on the spot with a new reading, opens no defect', () => {
+    const spec = en.items.find((i) => i.key === STEER_LEFT_PRESSURE)?.limitContext?.specPsi ?? 110;
+    const run = simulateVoiceLoop(
+      contextFor(en),
+      only(`good, ${spec - 20} psi`, 'yes', `corrected, added air, now ${spec} psi`),
+      { state: stateAtStop(en, STEER_LEFT_PRESSURE) },
+    );
+    const result = latestResults(run.saved).get(STEER_LEFT_PRESSURE);
+    expect(result?.answer).toBe('defect');
+    expect(result?.fixed?.action).toContain('added air');
+    expect(result?.fixed?.measurement?.value).toBe(spec);
+    expect(run.spoken.join(' ')).toContain('Fixed on the spot');
+  });
+
+  it('"fixed" with nothing to fix says so and asks again; never a pass', () => {
+    const run = simulateVoiceLoop(contextFor(en), only('fixed'), { state: stateAtStop(en, STEER_LEFT_HUB) });
     expect(run.saved).toHaveLength(0);
+    expect(run.spoken.join(' ')).toContain(EN.nothingToFix);
+  });
+});
+
+describe('never a loop', () => {
+  it('after three unclear answers says once that it waits, stops prompting, and goes on at "resume"', () => {
+    const run = simulateVoiceLoop(
+      contextFor(en),
+      only('um', 'banana', 'let me see', 'blah', 'more talk', 'resume', 'good'),
+      { state: stateAtStop(en, STEER_LEFT_HUB) },
+    );
+    const waits = run.spoken.filter((s) => s.includes(EN.waiting));
+    expect(waits).toHaveLength(1);
+    // Nothing said while waiting, until "resume".
+    const waitAt = run.spoken.indexOf(waits[0] as string);
+    expect(run.spoken[waitAt + 1]).toContain(EN.resuming);
+    expect(latestResults(run.saved).get(STEER_LEFT_HUB)?.answer).toBe('pass');
+    expect(MAX_UNCLEAR).toBe(3);
+  });
+
+  it('never takes hedged praise as a pass', () => {
+    const run = simulateVoiceLoop(contextFor(en), only("I wouldn't say it's good"), {
+      state: stateAtStop(en, STEER_LEFT_HUB),
+    });
+    expect(run.saved.filter((r) => r.answer === 'pass' && r.itemKey === STEER_LEFT_HUB)).toHaveLength(0);
+  });
+
+  it('reminds twice through silence, then waits quietly', () => {
+    const silence = { silence: true as const };
+    const run = simulateVoiceLoop(contextFor(en), only(...Array.from({ length: 12 }, () => silence)), {
+      state: stateAtStop(en, STEER_LEFT_HUB),
+    });
+    expect(run.spoken.filter((s) => s.includes(EN.waiting))).toHaveLength(1);
+    expect(run.spoken.length).toBeLessThanOrEqual(4);
+    expect(run.state.phase).toBe('paused');
+  });
+
+  it('the offer of what is not done waits after three unclear answers too', () => {
+    const last = en.stops.at(-1)?.itemKeys[0] ?? '';
+    const run = simulateVoiceLoop(contextFor(en), only('skip', 'hmm', 'what', 'banana', 'hmm', 'hmm'), {
+      state: stateAtStop(en, last),
+    });
+    expect(run.spoken.filter((s) => s.includes(EN.waiting))).toHaveLength(1);
+    expect(run.state.phase).toBe('paused');
+  });
+
+  it('says the safety caution once per walk-around', () => {
+    const caution = verdictWords('en').verdicts.caution;
+    const replies: SimulatedReply[] = [];
+    const run = simulateVoiceLoop(contextFor(en), (turn) => {
+      // Every tread said near its limit: each is a near-limit verdict.
+      if (turn.atStop && turn.stop?.itemKeys.some((k) => k.endsWith('tire.tread'))) return 'good, four thirty-seconds';
+      return replies.shift() ?? passEverything(turn);
+    });
+    expect(run.spoken.filter((s) => s.includes(caution))).toHaveLength(1);
+  });
+});
+
+describe('notes', () => {
+  it('"... end note" at the end of a sentence ends the note, and is left out of its words', () => {
+    const run = simulateVoiceLoop(contextFor(en), only('note', 'the marker lens is cracked, end note'), {
+      state: stateAtStop(en, STEER_LEFT_HUB),
+    });
+    const stopNote = run.effects.find((e) => e.type === 'stopNote');
+    expect(stopNote).toMatchObject({ heard: 'the marker lens is cracked' });
     expect(run.state.phase).toBe('asking');
   });
 
-  it('asks again when unclear, offers the choices after the second time, and never saves a pass', () => {
-    const start = stateAt(en, 'u1.lights.headlamps');
-    const run = simulateVoiceLoop(contextFor(en), scripted('the thing', 'maybe', 'um'), { state: start });
-    expect(run.spoken[1]).toBe("Sorry, I didn't understand. Say good, or say defect and what is wrong.");
-    expect(run.spoken[2]).toBe('Say good, defect, or skip.');
-    expect(run.spoken[3]).toBe('Say good, defect, or skip.');
-    expect(run.saved).toHaveLength(0);
-    expect(run.state.itemKey).toBe('u1.lights.headlamps');
+  it('a note ends by itself at its longest length, with a spoken word', () => {
+    const start = simulateVoiceLoop(contextFor(en), only('note'), { state: stateAtStop(en, STEER_LEFT_HUB) });
+    expect(start.effects.find((e) => e.type === 'startNote')).toMatchObject({ maxMs: 120_000 });
+    const step = reduceVoiceLoop(start.state, { type: 'note_limit' }, contextFor(en));
+    expect(step.effects.find((e) => e.type === 'stopNote')).toBeTruthy();
+    const said = step.effects.find((e) => e.type === 'speak');
+    expect(said?.type === 'speak' ? said.text : '').toContain(EN.noteLimit);
   });
 
-  it('asks again when the recogniser hypotheses disagree between good and a defect', () => {
-    const run = simulateVoiceLoop(
-      contextFor(en),
-      (() => {
-        let i = 0;
-        return () =>
-          i++ === 0
-            ? [
-                { transcript: 'good', confidence: 0.6 },
-                { transcript: 'broken', confidence: 0.55 },
-              ]
-            : null;
-      })(),
-      { state: stateAt(en, 'u1.lights.headlamps') },
-    );
-    expect(run.spoken[1]).toBe('I heard that two ways. Please say it again.');
-    expect(run.saved).toHaveLength(0);
-  });
-
-  it('says a retryable speech error once, then keeps listening quietly', () => {
-    const ctx = contextFor(en);
-    const error = {
-      type: 'speech_error',
-      code: 'network',
-      fatal: false,
-      spoken: 'Lost it.',
-      shown: 'Offline.',
-    } as const;
-    const first = reduceVoiceLoop(stateAt(en, 'u1.mirrors'), error, ctx);
-    expect(first.effects.map((e) => e.type)).toEqual(['speak', 'listen']);
-    const second = reduceVoiceLoop(first.state, error, ctx);
-    expect(second.effects.map((e) => e.type)).toEqual(['listen']);
-    expect(second.state.phase).toBe('asking');
-  });
-
-  it('does not take "good" as a value on a measurement item', () => {
-    const run = simulateVoiceLoop(contextFor(en), scripted('good', 'good'), { state: stateAt(en, STEER_TREAD) });
-    expect(run.spoken[1]).toMatch(/I need the value/);
-    expect(run.spoken[2]).toBe('Say the value, defect, or skip.');
-    expect(run.saved).toHaveLength(0);
-  });
-
-  it('saves a defect with what the driver said is wrong', () => {
-    const run = simulateVoiceLoop(contextFor(en), scripted('defect, cracked lens'), {
-      state: stateAt(en, 'u1.lights.headlamps'),
+  it('a note after a defect at a stop belongs to that defect', () => {
+    const run = simulateVoiceLoop(contextFor(en), only('good except the hub is leaking', 'back', 'note'), {
+      state: stateAtStop(en, STEER_LEFT_HUB),
     });
-    expect(run.saved[0]).toMatchObject({ answer: 'defect', detail: 'cracked lens' });
-    expect(run.spoken[1]).toMatch(/^Defect noted\./);
+    expect(run.effects.find((e) => e.type === 'startNote')).toMatchObject({ itemKey: STEER_LEFT_HUB });
+  });
+});
+
+describe('moving about', () => {
+  it('"back" goes to the previous stop and says it in full', () => {
+    const state = stateAtStop(en, STEER_LEFT_HUB);
+    const previous = en.stops[state.stop - 1] as ChecklistStop;
+    const run = simulateVoiceLoop(contextFor(en), only('back up one'), { state });
+    expect(run.state.stopKey).toBe(previous.key);
+    expect(run.spoken.at(-1)).toContain(previous.prompt);
   });
 
-  it('remembers skipped items and offers them again before finishing', () => {
-    const skippedKeys = ['u1.engine.coolant', 'u1.cab.horn', STEER_TREAD];
-    let offered = false;
-    const reply = (turn: SimulatedTurn) => {
-      if (turn.mode === 'offer') {
-        if (offered) return 'finish';
-        offered = true;
-        return 'yes';
-      }
-      if (turn.item && skippedKeys.includes(turn.item.key) && !turn.state.review) return 'skip';
+  it('skips a stop and offers its items again before finishing; "yes" walks them', () => {
+    const skippedStop = en.stops[3] as ChecklistStop;
+    const run = simulateVoiceLoop(contextFor(en), (turn) => {
+      if (turn.atStop && turn.stop?.key === skippedStop.key && !turn.state.review) return 'skip';
+      if (turn.mode === 'offer') return 'yes';
       return passEverything(turn);
-    };
-    const run = simulateVoiceLoop(contextFor(en), reply);
-    const offer = run.spoken.find((s) => s.includes('skipped:'));
-    expect(offer).toMatch(
-      /^3 checks skipped: Coolant level, Tractor, engine compartment; Horn, Tractor, cab; Tread depth/,
-    );
-    expect(run.state.phase).toBe('finished');
+    });
     const results = latestResults(run.saved);
-    for (const key of skippedKeys) expect(results.get(key)?.answer).toBe('pass');
-    expect(run.effects.find((e) => e.type === 'finish')).toMatchObject({ notDone: [] });
-    expect(run.state.skipped).toEqual([]);
+    expect(run.state.phase).toBe('finished');
+    expect(skippedStop.itemKeys.every((key) => results.get(key)?.answer === 'pass')).toBe(true);
   });
 
-  it('finishes with the skipped items listed as not done when the driver says finish at the offer', () => {
-    const reply = (turn: SimulatedTurn) => {
-      if (turn.mode === 'offer') return 'finish';
-      if (turn.item?.key === 'u1.cab.horn' && turn.state.results['u1.cab.horn'] === undefined) return 'skip';
-      return passEverything(turn);
-    };
-    const run = simulateVoiceLoop(contextFor(en), reply);
-    expect(run.spoken.some((s) => s.startsWith('1 check skipped: Horn, Tractor, cab.'))).toBe(true);
-    expect(run.effects.find((e) => e.type === 'finish')).toMatchObject({ notDone: ['u1.cab.horn'] });
-    expect(run.spoken.at(-1)).toMatch(/Finishing with 1 not done/);
-  });
-
-  it('goes back to the previous item and lets the driver answer it again', () => {
-    const run = simulateVoiceLoop(contextFor(en), scripted('good', 'good', 'back', 'defect, low oil'));
-    const first = en.items[1];
-    expect(run.saved.map((r) => `${r.itemKey}:${r.answer}`)).toEqual([
-      `${en.items[0]?.key}:pass`,
-      `${first?.key}:pass`,
-      `${first?.key}:defect`,
-    ]);
-    expect(run.spoken[3]).toBe(first?.prompt);
-  });
-
-  it('says an item gone back to in full, even one of a kind heard many times', () => {
-    const key = 'u1.axle2.left.outer.tire.tread';
-    const previous = en.items[indexOf(en, key) - 1];
-    if (!previous) throw new Error('no previous item');
-    const state = { ...stateAt(en, key), titleCounts: { [previous.title]: 10 } };
-    const run = simulateVoiceLoop(contextFor(en), scripted('back'), { state, first: { type: 'silence' } });
-    expect(run.spoken).toEqual([previous.prompt]);
-  });
-
-  it('says the first item again when "back" is said on it', () => {
-    const run = simulateVoiceLoop(contextFor(en), scripted('back'));
-    expect(run.spoken[1]).toBe(`This is the first check. ${en.items[0]?.prompt}`);
-    expect(run.state.index).toBe(0);
-  });
-
-  it('repeats the prompt in full, and the read-back while confirming', () => {
-    const run = simulateVoiceLoop(contextFor(en), scripted('repeat', 'five thirty seconds', 'repeat'), {
-      state: stateAt(en, STEER_TREAD),
-    });
-    const item = en.items[indexOf(en, STEER_TREAD)];
-    expect(run.spoken[1]).toBe(item?.prompt);
-    expect(run.spoken[3]).toBe(run.spoken[2]);
-    expect(run.saved).toHaveLength(0);
-  });
-
-  it('records a note at the item with the words heard and returns to the item', () => {
-    const run = simulateVoiceLoop(
-      contextFor(en),
-      scripted('note', 'the lens is cracked at the top', 'good', 'end note', 'defect'),
-      { state: stateAt(en, 'u1.lights.headlamps') },
-    );
-    const noteEffects = run.effects.filter((e) => e.type === 'startNote' || e.type === 'stopNote');
-    expect(noteEffects).toEqual([
-      { type: 'startNote', itemKey: 'u1.lights.headlamps', heard: 'note' },
-      { type: 'stopNote', itemKey: 'u1.lights.headlamps', heard: 'the lens is cracked at the top good' },
-    ]);
-    // "good" inside the note is part of the note, not an answer.
-    expect(run.saved).toHaveLength(1);
-    expect(run.saved[0]).toMatchObject({ itemKey: 'u1.lights.headlamps', answer: 'defect' });
-    // The prompt is said before recording starts, so the note does not open with our voice.
-    const startIndex = run.effects.findIndex((e) => e.type === 'startNote');
-    expect(run.effects[startIndex - 1]).toMatchObject({ type: 'speak', text: VOICE_LOOP_WORDS.en.noteStarted });
-    expect(run.spoken).toContain(`Note saved. ${en.items[indexOf(en, 'u1.lights.headlamps')]?.prompt}`);
-  });
-
-  it('pauses, ignores talk while paused, and resumes at the same item', () => {
-    const run = simulateVoiceLoop(contextFor(en), scripted('pause', 'good', { silence: true }, 'resume', 'good'), {
-      state: stateAt(en, 'u1.mirrors'),
-    });
-    expect(run.spoken[1]).toBe(VOICE_LOOP_WORDS.en.paused);
-    expect(run.spoken[2]).toBe(`Resuming. ${en.items[indexOf(en, 'u1.mirrors')]?.prompt}`);
-    expect(run.saved.map((r) => r.itemKey)).toEqual(['u1.mirrors']);
-  });
-
-  it('says where the driver is: zone, position and progress', () => {
-    const state = {
-      ...stateAt(en, STEER_TREAD),
-      results: { a: { itemKey: 'a', answer: 'pass' as const, answeredAt: at } },
-    };
-    const run = simulateVoiceLoop(contextFor(en), scripted('where am i'), { state, first: { type: 'silence' } });
-    const n = indexOf(en, STEER_TREAD) + 1;
-    expect(run.spoken[0]).toBe(
-      `Left side, front to back. Tractor, axle 1, left tire, Tread depth. Check ${n} of ${en.items.length}, 1 done.`,
-    );
-  });
-
-  it('answers help with the commands and the choices for the item', () => {
-    const run = simulateVoiceLoop(contextFor(en), scripted('help'), {
-      state: stateAt(en, STEER_TREAD),
-      first: { type: 'silence' },
-    });
-    expect(run.spoken[0]).toContain('where am I');
-    expect(run.spoken[0]).toContain('Say the value, defect, or skip.');
-  });
-
-  it('uses the short prompt once three items of a kind have been asked', () => {
-    const run = simulateVoiceLoop(contextFor(en), passEverything);
-    const inflation = en.items.filter((i) => i.title === 'Tire inflation');
-    const said = (key: string) => run.spoken.find((s) => s.endsWith(en.items[indexOf(en, key)]?.shortPrompt ?? '#'));
-    expect(inflation.length).toBeGreaterThan(4);
-    // The first three are said in full, the fourth on is short.
-    for (const item of inflation.slice(0, 3)) expect(run.spoken.some((s) => s.endsWith(item.prompt))).toBe(true);
-    for (const item of inflation.slice(3)) expect(said(item.key), item.key).toBeDefined();
-    expect(run.spoken.some((s) => s.endsWith(inflation[3]?.prompt ?? '#'))).toBe(false);
-  });
-
-  it('stays quiet through two silent turns, then says the short prompt again', () => {
-    const item = en.items[indexOf(en, 'u1.mirrors')];
-    const run = simulateVoiceLoop(contextFor(en), scripted({ silence: true }, { silence: true }, { silence: true }), {
-      state: stateAt(en, 'u1.mirrors'),
-    });
-    expect(run.spoken.slice(1)).toEqual([item?.shortPrompt]);
-  });
-
-  it('stalls on a fatal speech error, tells the host, and resumes on start', () => {
-    const state = stateAt(en, 'u1.mirrors');
-    const ctx = contextFor(en);
-    const failed = reduceVoiceLoop(
-      state,
-      { type: 'speech_error', code: 'not-allowed', fatal: true, spoken: 'No microphone.', shown: 'Blocked.' },
-      ctx,
-    );
-    expect(failed.state.phase).toBe('stalled');
-    expect(failed.effects).toEqual([
-      { type: 'speak', text: 'No microphone.', locale: 'en' },
-      { type: 'speechFailed', code: 'not-allowed', shown: 'Blocked.' },
-    ]);
-    const resumed = reduceVoiceLoop(failed.state, { type: 'start' }, ctx);
-    expect(resumed.state.phase).toBe('asking');
-    expect(resumed.effects.map((e) => e.type)).toEqual(['speak', 'listen']);
-  });
-
-  it('finishing early offers every check not done yet', () => {
-    const run = simulateVoiceLoop(contextFor(en), scripted('good', 'finish', 'finish'));
-    const open = en.items.length - 1;
-    expect(run.spoken[2]).toMatch(new RegExp(`^${open} checks not done: `));
-    expect(run.spoken[2]).toContain(`and ${open - 3} more`);
-    const finish = run.effects.find((e) => e.type === 'finish');
-    expect(finish?.type === 'finish' && finish.notDone.length).toBe(open);
-  });
-
-  it('serialises to plain JSON and resumes at the same item, saying its prompt again', () => {
-    const ctx = contextFor(en);
-    const firstPart = simulateVoiceLoop(ctx, (turn) => (turn.state.index >= 40 ? null : passEverything(turn)));
-    const stored = serializeVoiceLoop(firstPart.state);
-    expect(JSON.parse(stored)).toEqual(firstPart.state);
-    const restored = restoreVoiceLoop(stored, en);
-    expect(restored).toEqual(firstPart.state);
-    if (!restored) return;
-    const step = reduceVoiceLoop(restored, { type: 'start' }, ctx);
-    const item = en.items[40];
-    expect(step.effects[0]).toEqual({
-      type: 'speak',
-      text: `Picking up where you left off. ${item?.prompt}`,
-      locale: 'en',
-    });
-    // And the rest of the walk-around finishes from there.
-    const rest = simulateVoiceLoop(ctx, passEverything, { state: restored });
-    expect(rest.state.phase).toBe('finished');
-    expect(Object.keys(rest.state.results)).toHaveLength(en.items.length);
+  it('resumes from the stored state at the same stop, saying it again', () => {
+    const first = simulateVoiceLoop(contextFor(en), scripted('good', 'good', 'good', null));
+    const restored = restoreVoiceLoop(JSON.parse(JSON.stringify(first.state)), en);
+    expect(restored?.stopKey).toBe(first.state.stopKey);
+    const step = reduceVoiceLoop(restored as VoiceLoopState, { type: 'start' }, contextFor(en));
+    const said = step.effects.find((e) => e.type === 'speak');
+    expect(said?.type === 'speak' ? said.text : '').toContain(EN.resumed);
   });
 
   it('refuses a stored state that does not belong to the checklist', () => {
-    expect(restoreVoiceLoop('not json', en)).toBeNull();
-    expect(restoreVoiceLoop(JSON.stringify({ version: 99 }), en)).toBeNull();
-    const foreign = { ...initialVoiceLoopState(en), itemKey: 'u9.nothing' };
-    expect(restoreVoiceLoop(serializeVoiceLoop(foreign), en)).toBeNull();
+    expect(restoreVoiceLoop('not a state', en)).toBeNull();
+    expect(restoreVoiceLoop({ version: 1 }, en)).toBeNull();
+    const foreign = { ...initialVoiceLoopState(en), stopKey: 'nowhere' };
+    expect(restoreVoiceLoop(foreign, en)).toBeNull();
   });
 
-  it('runs a walk-around in Spanish with Spanish read-backs', () => {
-    const ctx = contextFor(es);
-    const run = simulateVoiceLoop(ctx, passEverything, { state: initialVoiceLoopState(es) });
+  it('asks for the reading of a low-confidence answer before keeping it', () => {
+    const run = simulateVoiceLoop(contextFor(en), only([{ transcript: 'good', confidence: 0.3 }], 'yes'), {
+      state: stateAtStop(en, STEER_LEFT_HUB),
+      first: { type: 'start' },
+    });
+    expect(run.spoken.some((s) => s.includes('I heard: good'))).toBe(true);
+    expect(latestResults(run.saved).get(STEER_LEFT_HUB)?.answer).toBe('pass');
+  });
+
+  it('a jump from the list asks the item in full, then carries on at the stop it left', () => {
+    const state = stateAtStop(en, STEER_LEFT_HUB);
+    const step = reduceVoiceLoop(state, { type: 'jump', itemKey: en.items[2]?.key ?? '' }, contextFor(en));
+    expect(step.state.current?.key).toBe(en.items[2]?.key);
+    const after = reduceVoiceLoop(
+      step.state,
+      { type: 'heard', alternatives: [{ transcript: 'good', confidence: 0.9 }], at },
+      contextFor(en),
+    );
+    expect(after.state.stopKey).toBe(state.stopKey);
+  });
+});
+
+describe('in Spanish', () => {
+  it('runs a whole walk-around with "bien" at every stop', () => {
+    const run = simulateVoiceLoop(contextFor(es), passEverything, { state: initialVoiceLoopState(es) });
     expect(run.state.phase).toBe('finished');
     expect(latestResults(run.saved).size).toBe(es.items.length);
-    const tread = run.spoken.find((s) => s.startsWith('Doce treintaidosavos'));
-    expect(tread).toBe(
-      readBackMeasurement(
-        { quantity: 'tread_depth', value: 12, unit: 'in/32', said: { value: 12, unit: 'in/32' } },
-        'es',
-      ),
-    );
-    expect(run.spoken.at(-1)).toMatch(/revisiones están hechas/);
   });
 
-  it('switches language by voice and says the same item in the new language', () => {
-    const ctx = contextFor(en, es);
-    const run = simulateVoiceLoop(ctx, scripted('good', 'español', 'bien'));
-    expect(run.effects).toContainEqual({ type: 'setLocale', locale: 'es' });
-    expect(run.spoken[2]).toContain(es.items[1]?.prompt);
+  it('"bien excepto la maza tiene fuga" marks the hub', () => {
+    const run = simulateVoiceLoop(contextFor(es), only('bien excepto la maza tiene fuga'), {
+      state: stateAtStop(es, STEER_LEFT_HUB),
+    });
+    expect(latestResults(run.saved).get(STEER_LEFT_HUB)?.answer).toBe('defect');
+  });
+
+  it('switches language by voice and says the same stop in the new language', () => {
+    const run = simulateVoiceLoop(contextFor(en, es), only('español'), { state: stateAtStop(en, STEER_LEFT_HUB) });
     expect(run.state.locale).toBe('es');
-    expect(run.saved.map((r) => r.itemKey)).toEqual([en.items[0]?.key, en.items[1]?.key]);
+    expect(run.spoken.at(-1)).toContain(stopOf(es, STEER_LEFT_HUB).prompt);
   });
+});
 
-  it('gives every sample measurement item a passing answer', () => {
-    // Guards the helpers the other tests rely on.
-    for (const item of en.items) expect(passingAnswer(item, 'en')).not.toBe('');
+describe('fixed on the spot, readings', () => {
+  it('a value out of limit is fixed only with a new value within it', () => {
+    const spec = en.items.find((i) => i.key === STEER_LEFT_PRESSURE)?.limitContext?.specPsi ?? 110;
+    const run = simulateVoiceLoop(contextFor(en), only(`good, ${spec - 20} psi`, 'yes', 'fixed, added air'), {
+      state: stateAtStop(en, STEER_LEFT_PRESSURE),
+    });
+    const result = latestResults(run.saved).get(STEER_LEFT_PRESSURE);
+    expect(result?.answer).toBe('defect');
+    expect(result?.fixed).toBeUndefined();
+    expect(run.spoken.at(-1)).toContain(EN.fixNeedsReading);
   });
 });

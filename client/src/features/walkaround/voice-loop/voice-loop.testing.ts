@@ -1,5 +1,13 @@
 // Test helpers: answers a driver would give, and a synchronous driver of the reducer (no engine, no timers).
-import type { Alternative, Checklist, ChecklistItem, ItemResult, Locale } from '@yardcall/shared';
+import type {
+  Alternative,
+  Checklist,
+  ChecklistItem,
+  ChecklistStop,
+  ItemResult,
+  Locale,
+  ReadingRule,
+} from '@yardcall/shared';
 import {
   initialVoiceLoopState,
   reduceVoiceLoop,
@@ -46,8 +54,15 @@ export function contextFor(...checklists: Checklist[]): VoiceLoopContext {
   };
 }
 
+export function contextRequiring(requiredReadings: ReadingRule[], ...checklists: Checklist[]): VoiceLoopContext {
+  return { ...contextFor(...checklists), requiredReadings };
+}
+
 export interface SimulatedTurn {
   state: VoiceLoopState;
+  stop: ChecklistStop | undefined;
+  // True while the stop is asked as a whole; `item` is then the stop's first item.
+  atStop: boolean;
   item: ChecklistItem | undefined;
   // Everything said since the previous turn.
   prompts: string[];
@@ -91,8 +106,10 @@ export function simulateVoiceLoop(
       if (effect.type === 'save') saved.push(effect.result);
       if (effect.type === 'listen') {
         turns += 1;
-        const item = ctx.checklistFor(state.locale).items[state.index];
-        const answer = reply({ state, item, prompts: since, mode: effect.mode });
+        const checklist = ctx.checklistFor(state.locale);
+        const item = checklist.items[state.index];
+        const stop = checklist.stops[state.stop];
+        const answer = reply({ state, stop, atStop: state.current === null, item, prompts: since, mode: effect.mode });
         since = [];
         if (answer === null) break;
         const at = new Date(Date.UTC(2026, 11, 1, 6, 0, turns)).toISOString();
@@ -114,11 +131,22 @@ export function latestResults(saved: readonly ItemResult[]): Map<string, ItemRes
   return map;
 }
 
-// The reply of a careful driver: pass everything, confirm every read-back.
+// The reply of a competent driver: "good" at every stop, a passing value where one is asked on its
+// own, "yes" to a read-back, "finish" at the end.
 export function passEverything(turn: SimulatedTurn): SimulatedReply {
   const locale = turn.state.locale;
   if (turn.mode === 'confirm') return locale === 'es' ? 'sí' : 'yes';
   if (turn.mode === 'offer') return locale === 'es' ? 'terminar' : 'finish';
+  if (turn.mode === 'paused') return locale === 'es' ? 'continuar' : 'resume';
   if (!turn.item) return null;
+  if (turn.atStop) return locale === 'es' ? 'bien' : 'good';
   return passingAnswer(turn.item, locale);
+}
+
+// Words spoken, counted the way the talk-time model counts them.
+export function wordCount(sentences: readonly string[]): number {
+  return sentences.reduce(
+    (sum, sentence) => sum + sentence.split(/\s+/).filter((w) => /[\p{L}\p{N}]/u.test(w)).length,
+    0,
+  );
 }

@@ -7,39 +7,57 @@
 // timer, and adds nothing to the driver's bundle. Effects (speak, listen, save, notes, finish) are
 // returned as data; the runner executes them against a SpeechEngine.
 //
-// Safety: an unclear answer is never a pass. It is asked again, then the choices are offered; a
-// value past its limit is confirmed before it is kept, and is kept as a defect. The app supports and
-// does not replace the driver's judgement; the limits are minimums and local rules, the maker's
-// specifications and licensed practice govern.
+// The walk-around goes stop by stop (a wheel end, a brake, the rear lamps): one prompt names what to
+// check there and one answer covers it, while every item still gets its own result. "One by one"
+// walks a stop item by item; a reading the organisation requires, an item named without being sure
+// which, and an out-of-limit value are asked about on their own.
+//
+// Safety: an unclear answer is never a pass. It is asked again, then the choices are offered, then
+// the loop waits quietly for "resume"; a value past its limit is confirmed before it is kept, and is
+// kept as a defect. The app supports and does not replace the driver's judgement; the limits are
+// minimums and local rules, the maker's specifications and licensed practice govern.
 import {
   LimitError,
   confirmKeptPrompt,
   confirmOutOfLimitPrompt,
   evaluateMeasurement,
+  fixNeedsReading,
   interpretConfirmation,
+  interpretFix,
+  interpretStopAnswer,
   interpretUtterance,
+  isReadingRequired,
   languageSwitchedPrompt,
+  measurementToWords,
   readBackMeasurement,
+  splitEndNote,
   unclearPrompt,
+  verdictWords,
   type Alternative,
   type Checklist,
   type ChecklistItem,
+  type ChecklistStop,
   type Command,
   type ItemResult,
   type Locale,
   type MeasurementVerdict,
+  type ReadingRule,
+  type SpokenFix,
   type SpokenMeasurement,
+  type StopMark,
   type UnclearReason,
   type Verdict,
 } from '@yardcall/shared';
 import { VOICE_LOOP_WORDS, fillWords } from './voice-loop-words';
+import { namedItemKeys } from './named-items';
 
-export const VOICE_LOOP_VERSION = 1;
+export const VOICE_LOOP_VERSION = 2;
 
 export const VOICE_LOOP_PHASES = [
   'idle',
   'asking',
   'confirming',
+  'choosing',
   'paused',
   'noting',
   'offering',
@@ -48,19 +66,38 @@ export const VOICE_LOOP_PHASES = [
 ] as const;
 export type VoiceLoopPhase = (typeof VOICE_LOOP_PHASES)[number];
 
-// Where to return after a pause, a note or a speech failure.
-type ReturnPhase = 'asking' | 'confirming' | 'offering';
+// Where to return after a pause, a wait, a note or a speech failure.
+type ReturnPhase = 'asking' | 'confirming' | 'choosing' | 'offering';
 
-// A value heard and awaiting the driver's yes.
-export interface PendingMeasurement {
-  measurement: SpokenMeasurement;
+// What a "yes" keeps: one value past its limit or heard with low confidence, or a whole stop's answer
+// heard with low confidence.
+export interface PendingKeep {
+  // The item a value belongs to; null for a whole stop's answer.
+  itemKey: string | null;
+  results: ItemResult[];
+  measurement: SpokenMeasurement | null;
   verdict: Verdict | null;
   say: string | null;
-  caution: string | null;
+  // True when the value is the new reading of a fix on the spot.
+  fix: SpokenFix | null;
   heard: string;
-  confidence: number | null;
   // What was said to confirm it, for "repeat".
   question: string;
+}
+
+// A problem named at a stop without saying which item it is.
+export interface PendingWhich {
+  detail: string;
+  candidates: string[];
+  heard: string;
+  at: string;
+}
+
+// An item asked on its own within a stop: `reading` when the driver passed it by eye and the
+// organisation requires the reading.
+export interface QueuedItem {
+  key: string;
+  reading: boolean;
 }
 
 export interface VoiceLoopState {
@@ -68,21 +105,40 @@ export interface VoiceLoopState {
   locale: Locale;
   phase: VoiceLoopPhase;
   returnTo: ReturnPhase;
-  // The current item, by position and by key (the key survives a rebuilt checklist).
+  // The current stop, by position and by key (the key survives a rebuilt checklist).
+  stop: number;
+  stopKey: string;
+  // The current item: the one asked on its own, or the stop's first item when the stop is asked.
   index: number;
   itemKey: string;
+  // Null while the stop is asked as a whole; else the item asked now and those still to ask.
+  current: QueuedItem | null;
+  queue: QueuedItem[];
+  // After items asked out of turn (a jump, a correction), the stop to carry on at.
+  resumeStop: number | null;
   results: Record<string, ItemResult>;
   // Skipped item keys in the order they were skipped.
   skipped: string[];
   // Keys being revisited at the end, in checklist order; null during the first pass.
   review: string[] | null;
+  // Unclear answers and silent turns in a row, and reminders said since the last answer.
   unclear: number;
   silent: number;
-  pending: PendingMeasurement | null;
+  reminders: number;
+  // The driver said "no gauge" for the current item: a pass now is a pass without a reading.
+  gaugeless: boolean;
+  pending: PendingKeep | null;
+  which: PendingWhich | null;
+  // The last defect recorded, which "fixed" applies to.
+  lastDefectKey: string | null;
+  // An in-limit value said back at the start of the current prompt: "no" or "back" corrects it.
+  saidBack: string | null;
+  noteItemKey: string | null;
   noteHeard: string[] | null;
-  // For short prompts: how often each title was asked, and the run of one category in one zone.
-  titleCounts: Record<string, number>;
-  streak: { category: string; zone: string; count: number };
+  cautionSpoken: boolean;
+  fixHintSpoken: boolean;
+  // How often each kind of stop was announced in full; short prompts after a few.
+  kindCounts: Record<string, number>;
   lastError: string | null;
 }
 
@@ -93,11 +149,13 @@ export type VoiceLoopEvent =
   // The turn ended with nothing heard (silence or the turn's time-out).
   | { type: 'silence' }
   | { type: 'speech_error'; code: string; fatal: boolean; spoken: string; shown: string }
-  // A button on the screen, said as if spoken.
+  // A button on the screen.
   | { type: 'command'; command: Exclude<Command, 'language'>; at: string }
   | { type: 'set_locale'; locale: Locale }
   // The screen's list: go to one item (a skipped one, or any to answer again) and ask it in full.
-  | { type: 'jump'; itemKey: string };
+  | { type: 'jump'; itemKey: string }
+  // The note reached its longest length.
+  | { type: 'note_limit' };
 
 export type ListenMode = 'answer' | 'confirm' | 'offer' | 'paused' | 'note';
 
@@ -105,15 +163,17 @@ export type VoiceLoopEffect =
   | { type: 'speak'; text: string; locale: Locale }
   | { type: 'listen'; locale: Locale; mode: ListenMode; timeoutMs: number; phrases: readonly string[] }
   | { type: 'save'; result: ItemResult }
-  | { type: 'startNote'; itemKey: string; heard: string }
+  | { type: 'startNote'; itemKey: string; heard: string; maxMs: number }
   | { type: 'stopNote'; itemKey: string; heard: string }
   | { type: 'setLocale'; locale: Locale }
   | { type: 'speechFailed'; code: string; shown: string }
   | { type: 'finish'; results: ItemResult[]; notDone: string[] };
 
 export interface VoiceLoopContext {
-  // The same walk-around in each language the driver may switch to (item keys are stable).
+  // The same walk-around in each language the driver may switch to (item and stop keys are stable).
   checklistFor: (locale: Locale) => Checklist;
+  // Readings the organisation requires; by default none.
+  requiredReadings?: readonly ReadingRule[];
 }
 
 export interface VoiceLoopStep {
@@ -130,30 +190,51 @@ export const LISTEN_TIMEOUT_MS: Record<ListenMode, number> = {
   paused: 30_000,
   note: 30_000,
 };
-// Short prompts once this many of a kind have been asked (the driver knows the drill by then).
-export const SHORT_PROMPT_AFTER = 3;
-// Silent turns before the prompt is said again.
-const SILENT_TURNS_BEFORE_REMINDER = 3;
-// Items named one by one in the offer of what is not done.
+// Our own practice: a note longer than two minutes is a conversation, not a note.
+export const NOTE_MAX_MS = 120_000;
+// Short prompts once this many stops of a kind have been announced (the driver knows the drill by then).
+export const SHORT_PROMPT_AFTER = 2;
+// Never ask the same thing more than three times running: the prompt, then two more, then wait.
+export const MAX_UNCLEAR = 3;
+const SILENT_TURNS_BEFORE_REMINDER = 2;
+const MAX_REMINDERS = 2;
+// A recogniser's confidence under this is confirmed before it is kept (our own choice; 0 means the
+// recogniser gave none).
+export const LOW_CONFIDENCE = 0.5;
+// Items named one by one in the offer of what is not done, and choices named when asking which.
 const OFFER_LIST_LENGTH = 3;
+const WHICH_LIST_LENGTH = 4;
 
 export function initialVoiceLoopState(checklist: Checklist): VoiceLoopState {
+  const stop = checklist.stops[0];
   return {
     version: VOICE_LOOP_VERSION,
     locale: checklist.locale,
     phase: 'idle',
     returnTo: 'asking',
+    stop: 0,
+    stopKey: stop?.key ?? '',
     index: 0,
     itemKey: checklist.items[0]?.key ?? '',
+    current: null,
+    queue: [],
+    resumeStop: null,
     results: {},
     skipped: [],
     review: null,
     unclear: 0,
     silent: 0,
+    reminders: 0,
+    gaugeless: false,
     pending: null,
+    which: null,
+    lastDefectKey: null,
+    saidBack: null,
+    noteItemKey: null,
     noteHeard: null,
-    titleCounts: {},
-    streak: { category: '', zone: '', count: 0 },
+    cautionSpoken: false,
+    fixHintSpoken: false,
+    kindCounts: {},
     lastError: null,
   };
 }
@@ -201,111 +282,264 @@ class Step {
   }
 }
 
+type Prefix = (string | null | undefined)[];
+
 function checklistOf(state: VoiceLoopState, ctx: VoiceLoopContext): Checklist {
   return ctx.checklistFor(state.locale);
-}
-
-function itemAt(checklist: Checklist, index: number): ChecklistItem | undefined {
-  return checklist.items[index];
-}
-
-function currentItem(state: VoiceLoopState, ctx: VoiceLoopContext): ChecklistItem | undefined {
-  return itemAt(checklistOf(state, ctx), state.index);
 }
 
 function words(state: VoiceLoopState) {
   return VOICE_LOOP_WORDS[state.locale];
 }
 
+function itemByKey(checklist: Checklist, key: string): ChecklistItem | undefined {
+  return checklist.items.find((item) => item.key === key);
+}
+
+function itemIndex(checklist: Checklist, key: string): number {
+  return checklist.items.findIndex((item) => item.key === key);
+}
+
+function stopIndexOfItem(checklist: Checklist, key: string): number {
+  const item = itemByKey(checklist, key);
+  return item ? checklist.stops.findIndex((stop) => stop.key === item.stopKey) : -1;
+}
+
+function itemsOf(checklist: Checklist, stop: ChecklistStop): ChecklistItem[] {
+  return stop.itemKeys.flatMap((key) => {
+    const item = itemByKey(checklist, key);
+    return item ? [item] : [];
+  });
+}
+
+function currentStop(state: VoiceLoopState, ctx: VoiceLoopContext): ChecklistStop | undefined {
+  return checklistOf(state, ctx).stops[state.stop];
+}
+
+function currentItem(state: VoiceLoopState, ctx: VoiceLoopContext): ChecklistItem | undefined {
+  return itemByKey(checklistOf(state, ctx), state.itemKey);
+}
+
 function notDone(state: VoiceLoopState, checklist: Checklist): ChecklistItem[] {
   return checklist.items.filter((item) => !state.results[item.key]);
 }
 
-function withoutKey(list: readonly string[], key: string): string[] {
-  return list.filter((k) => k !== key);
+function withoutKeys(list: readonly string[], keys: readonly string[]): string[] {
+  return list.filter((k) => !keys.includes(k));
 }
 
 function listenModeOf(phase: ReturnPhase): ListenMode {
-  return phase === 'asking' ? 'answer' : phase === 'confirming' ? 'confirm' : 'offer';
+  return phase === 'confirming' ? 'confirm' : phase === 'offering' ? 'offer' : 'answer';
+}
+
+function returnPhaseOf(phase: VoiceLoopPhase): ReturnPhase {
+  return phase === 'confirming' || phase === 'choosing' || phase === 'offering' ? phase : 'asking';
+}
+
+function capitalise(text: string): string {
+  return text.charAt(0).toLocaleUpperCase() + text.slice(1);
+}
+
+// "hub, lug nuts or rim"
+function spokenList(state: VoiceLoopState, names: readonly string[]): string {
+  if (names.length <= 1) return names.join('');
+  return `${names.slice(0, -1).join(', ')} ${words(state).or} ${names.at(-1) ?? ''}`;
+}
+
+function readingRequired(item: ChecklistItem, ctx: VoiceLoopContext): boolean {
+  return item.expects.type === 'measure' && isReadingRequired(item, ctx.requiredReadings ?? []);
+}
+
+// A stop's kind for short prompts: what it checks, whatever its side or axle. A trailer's side with its
+// reflective sheeting is a kind of its own; its wheel ends are the tractor's drill again.
+function stopKind(checklist: Checklist, stop: ChecklistStop): string {
+  return itemsOf(checklist, stop)
+    .map((item) => item.name)
+    .join('|');
+}
+
+function isLowConfidence(confidence: number | undefined): boolean {
+  return confidence !== undefined && confidence > 0 && confidence < LOW_CONFIDENCE;
+}
+
+// The caution is said once per walk-around and always shown on the screen.
+function caution(step: Step): string | null {
+  if (step.state.cautionSpoken) return null;
+  step.set({ cautionSpoken: true });
+  return verdictWords(step.state.locale).verdicts.caution;
 }
 
 // ---------------------------------------------------------------------------------------------------
-// Asking an item.
+// Arriving at a stop, or at one item.
 
-function isShort(state: VoiceLoopState, item: ChecklistItem): boolean {
-  const seenTitle = state.titleCounts[item.title] ?? 0;
-  const { streak } = state;
-  const inStreak = streak.category === item.category && streak.zone === item.zone;
-  return seenTitle >= SHORT_PROMPT_AFTER || (inStreak && streak.count >= SHORT_PROMPT_AFTER);
+function resetTurn(step: Step): Step {
+  return step.set({ unclear: 0, silent: 0, reminders: 0, pending: null, which: null, gaugeless: false });
 }
 
-// Moves to an item and asks it, counting it towards short prompts; `full` when going back to it.
-function arrive(step: Step, index: number, ctx: VoiceLoopContext, prefix: (string | null)[] = [], full = false): Step {
+// Moves to a stop and asks it as a whole; `full` says the whole prompt even when a short one would do.
+function arriveStop(step: Step, stopIndex: number, ctx: VoiceLoopContext, prefix: Prefix = [], full = false): Step {
   const checklist = checklistOf(step.state, ctx);
-  const item = itemAt(checklist, index);
-  if (!item) return goToEnd(step, ctx, ...prefix);
-  const previous = itemAt(checklist, step.state.index);
-  const newZone = step.state.phase === 'idle' || previous?.zone !== item.zone || index === 0;
-  const short = !full && !newZone && isShort(step.state, item);
-  const { streak } = step.state;
-  const sameRun = streak.category === item.category && streak.zone === item.zone;
-  const zoneTitle = newZone ? checklist.zones.find((z) => z.key === item.zone)?.title : undefined;
-  step.set({
+  const stop = checklist.stops[stopIndex];
+  if (!stop) return goToEnd(step, ctx, ...prefix);
+  const previous = checklist.stops[step.state.stop];
+  const newZone = step.state.phase === 'idle' || previous?.zone !== stop.zone || stopIndex === 0;
+  const kind = stopKind(checklist, stop);
+  const seen = step.state.kindCounts[kind] ?? 0;
+  const short = !full && !newZone && seen >= SHORT_PROMPT_AFTER;
+  const zoneTitle = newZone ? checklist.zones.find((z) => z.key === stop.zone)?.title : undefined;
+  const first = stop.itemKeys[0] ?? '';
+  resetTurn(step).set({
     phase: 'asking',
-    index,
-    itemKey: item.key,
-    unclear: 0,
-    silent: 0,
-    pending: null,
-    titleCounts: { ...step.state.titleCounts, [item.title]: (step.state.titleCounts[item.title] ?? 0) + 1 },
-    streak: { category: item.category, zone: item.zone, count: sameRun ? streak.count + 1 : 1 },
+    stop: stopIndex,
+    stopKey: stop.key,
+    index: Math.max(0, itemIndex(checklist, first)),
+    itemKey: first,
+    current: null,
+    queue: [],
+    resumeStop: null,
+    kindCounts: short ? step.state.kindCounts : { ...step.state.kindCounts, [kind]: seen + 1 },
   });
   return step
-    .say(...prefix, zoneTitle ? `${zoneTitle}.` : null, short ? item.shortPrompt : item.prompt)
+    .say(...prefix, zoneTitle ? `${zoneTitle}.` : null, short ? stop.shortPrompt : stop.prompt)
     .listen('answer');
 }
 
-// Says the current item again in full, without counting it again.
-function reAsk(step: Step, ctx: VoiceLoopContext, ...prefix: (string | null)[]): Step {
-  const item = currentItem(step.state, ctx);
-  if (!item) return goToEnd(step, ctx, ...prefix);
-  step.set({ phase: 'asking', pending: null, unclear: 0, silent: 0 });
-  return step.say(...prefix, item.prompt).listen('answer');
+// Asks one item on its own: briefly inside its stop, in full when arriving from elsewhere.
+function arriveItem(
+  step: Step,
+  entry: QueuedItem,
+  rest: QueuedItem[],
+  ctx: VoiceLoopContext,
+  prefix: Prefix = [],
+  full = false,
+): Step {
+  const checklist = checklistOf(step.state, ctx);
+  const item = itemByKey(checklist, entry.key);
+  if (!item) return advance(step, ctx, ...prefix);
+  const stopIndex = stopIndexOfItem(checklist, item.key);
+  resetTurn(step).set({
+    phase: 'asking',
+    stop: stopIndex < 0 ? step.state.stop : stopIndex,
+    stopKey: item.stopKey,
+    index: itemIndex(checklist, item.key),
+    itemKey: item.key,
+    current: entry,
+    queue: rest,
+  });
+  if (entry.reading)
+    return step
+      .say(...prefix, fillWords(words(step.state).readingRequired, { item: capitalise(item.name) }))
+      .listen('answer');
+  return step.say(...prefix, full ? item.prompt : item.shortPrompt).listen('answer');
 }
 
-// The item after the current one: the next in order, or the next one being revisited.
-function advance(step: Step, ctx: VoiceLoopContext, ...prefix: (string | null)[]): Step {
-  const { review, itemKey, index } = step.state;
+// Says the current question again, in full, without counting it again.
+function reAsk(step: Step, ctx: VoiceLoopContext, ...prefix: Prefix): Step {
+  const { current, queue, stop } = step.state;
+  if (current) return arriveItem(step, current, queue, ctx, prefix, true);
+  const resume = step.state.resumeStop;
+  arriveStop(step, stop, ctx, prefix, true);
+  return step.set({ resumeStop: resume });
+}
+
+// What comes after the current question: the next item asked on its own, the next revisited item,
+// the stop to carry on at, or the next stop.
+function advance(step: Step, ctx: VoiceLoopContext, ...prefix: Prefix): Step {
+  const { queue, review, itemKey, resumeStop, stop } = step.state;
+  const [next, ...rest] = queue;
+  if (next) return arriveItem(step, next, rest, ctx, prefix);
   if (review) {
-    const position = review.indexOf(itemKey);
-    const nextKey = review[position + 1];
+    const nextKey = review[review.indexOf(itemKey) + 1];
     if (nextKey === undefined) return goToEnd(step, ctx, ...prefix);
-    const nextIndex = checklistOf(step.state, ctx).items.findIndex((i) => i.key === nextKey);
-    return arrive(step, nextIndex, ctx, prefix);
+    return arriveItem(step, { key: nextKey, reading: false }, [], ctx, prefix, true);
   }
-  return arrive(step, index + 1, ctx, prefix);
+  if (resumeStop !== null) return arriveStop(step, nextOpenStop(step.state, ctx, resumeStop), ctx, prefix, true);
+  return arriveStop(step, nextOpenStop(step.state, ctx, stop + 1), ctx, prefix);
+}
+
+// The first stop from `from` on that still has an item without an answer.
+function nextOpenStop(state: VoiceLoopState, ctx: VoiceLoopContext, from: number): number {
+  const stops = checklistOf(state, ctx).stops;
+  for (let i = Math.max(0, from); i < stops.length; i += 1) {
+    if (stops[i]?.itemKeys.some((key) => !state.results[key])) return i;
+  }
+  return stops.length;
 }
 
 function goBack(step: Step, ctx: VoiceLoopContext): Step {
-  const { review, itemKey, index } = step.state;
+  const { review, itemKey, current, stop, saidBack } = step.state;
   const checklist = checklistOf(step.state, ctx);
-  let target = index - 1;
+  // A value just said back: "back" means that value was wrong.
+  if (saidBack) return correctSaidBack(step, ctx);
   if (review) {
     const previousKey = review[review.indexOf(itemKey) - 1];
-    target = previousKey === undefined ? -1 : checklist.items.findIndex((i) => i.key === previousKey);
+    if (previousKey === undefined) return reAsk(step, ctx, words(step.state).firstItem);
+    return arriveItem(step, { key: previousKey, reading: false }, [], ctx, [], true);
   }
-  if (step.state.phase === 'offering') target = checklist.items.length - 1;
-  if (target < 0) return reAsk(step, ctx, words(step.state).firstItem);
-  return arrive(step, target, ctx, [], true);
+  if (step.state.phase === 'offering') return arriveStop(step, checklist.stops.length - 1, ctx, [], true);
+  // Inside a stop walked item by item, back goes to the previous item of the stop.
+  const stopItems = checklist.stops[stop]?.itemKeys ?? [];
+  const position = current ? stopItems.indexOf(current.key) : -1;
+  if (position > 0) {
+    const previous = stopItems[position - 1] as string;
+    const rest = stopItems.slice(position).map((key) => ({ key, reading: false }));
+    return arriveItem(step, { key: previous, reading: false }, rest, ctx, [], true);
+  }
+  if (stop <= 0) return reAsk(step, ctx, words(step.state).firstItem);
+  return arriveStop(step, stop - 1, ctx, [], true);
 }
 
-function save(step: Step, result: ItemResult): Step {
-  const { state } = step;
-  step.set({
-    results: { ...state.results, [result.itemKey]: result },
-    skipped: withoutKey(state.skipped, result.itemKey),
-  });
-  return step.emit({ type: 'save', result });
+// "Back", or a lone "no", said right after a value was said back.
+function correctsSaidBack(meaning: { kind: string; command?: string; reason?: string }): boolean {
+  return (
+    (meaning.kind === 'command' && meaning.command === 'back') ||
+    (meaning.kind === 'unclear' && meaning.reason === 'ambiguous')
+  );
+}
+
+// "No" or "back" right after a value was said back: ask that item again, then carry on here.
+function correctSaidBack(step: Step, ctx: VoiceLoopContext): Step {
+  const key = step.state.saidBack as string;
+  const here = step.state.stop;
+  const pendingQueue = step.state.current ? [step.state.current, ...step.state.queue] : [];
+  arriveItem(step, { key, reading: false }, pendingQueue, ctx, [], true);
+  return step.set({ resumeStop: pendingQueue.length > 0 ? null : here, saidBack: null });
+}
+
+function save(step: Step, results: readonly ItemResult[]): Step {
+  if (results.length === 0) return step;
+  const keys = results.map((r) => r.itemKey);
+  const all = { ...step.state.results };
+  for (const result of results) all[result.itemKey] = result;
+  step.set({ results: all, skipped: withoutKeys(step.state.skipped, keys) });
+  for (const result of results) step.emit({ type: 'save', result });
+  return step;
+}
+
+function resultOf(
+  item: ChecklistItem,
+  answer: ItemResult['answer'],
+  heard: string,
+  confidence: number | undefined,
+  at: string,
+): ItemResult {
+  const result: ItemResult = { itemKey: item.key, answer, heard, answeredAt: at };
+  if (confidence !== undefined) result.confidence = confidence;
+  return result;
+}
+
+function defectSentence(step: Step, ctx: VoiceLoopContext, keys: readonly string[]): string | null {
+  if (keys.length === 0) return null;
+  const checklist = checklistOf(step.state, ctx);
+  const names = keys.map((key) => itemByKey(checklist, key)?.name ?? key);
+  const w = words(step.state);
+  const sentence =
+    names.length === 1
+      ? fillWords(w.defectNoted, { item: names[0] ?? '' })
+      : fillWords(w.defectsNoted, { items: spokenList(step.state, names) });
+  if (step.state.fixHintSpoken) return sentence;
+  step.set({ fixHintSpoken: true });
+  return `${sentence} ${w.fixHint}`;
 }
 
 // ---------------------------------------------------------------------------------------------------
@@ -322,16 +556,16 @@ function offerSentence(state: VoiceLoopState, open: readonly ChecklistItem[]): s
   return open.length === 1 ? fillWords(one, { list }) : fillWords(many, { count: open.length, list });
 }
 
-function goToEnd(step: Step, ctx: VoiceLoopContext, ...prefix: (string | null)[]): Step {
+function goToEnd(step: Step, ctx: VoiceLoopContext, ...prefix: Prefix): Step {
   const checklist = checklistOf(step.state, ctx);
   const open = notDone(step.state, checklist);
   if (open.length === 0) return finish(step, ctx, ...prefix);
   // A new offer starts a new round of revisiting.
-  step.set({ phase: 'offering', pending: null, unclear: 0, silent: 0, review: null });
+  resetTurn(step).set({ phase: 'offering', review: null, current: null, queue: [], resumeStop: null });
   return step.say(...prefix, offerSentence(step.state, open)).listen('offer');
 }
 
-function finish(step: Step, ctx: VoiceLoopContext, ...prefix: (string | null)[]): Step {
+function finish(step: Step, ctx: VoiceLoopContext, ...prefix: Prefix): Step {
   const checklist = checklistOf(step.state, ctx);
   const open = notDone(step.state, checklist);
   const w = words(step.state);
@@ -339,7 +573,7 @@ function finish(step: Step, ctx: VoiceLoopContext, ...prefix: (string | null)[])
     open.length === 0
       ? fillWords(w.allDone, { count: checklist.items.length })
       : fillWords(w.finishingOpen, { count: open.length });
-  step.set({ phase: 'finished', pending: null, review: null });
+  step.set({ phase: 'finished', pending: null, which: null, review: null, current: null, queue: [] });
   const results = checklist.items.flatMap((item) => {
     const result = step.state.results[item.key];
     return result ? [result] : [];
@@ -353,11 +587,11 @@ function startReview(step: Step, ctx: VoiceLoopContext): Step {
   const first = open[0];
   if (!first) return finish(step, ctx);
   step.set({ review: open.map((item) => item.key) });
-  return arrive(step, checklist.items.indexOf(first), ctx);
+  return arriveItem(step, { key: first.key, reading: false }, [], ctx, [], true);
 }
 
 // ---------------------------------------------------------------------------------------------------
-// Measurements: read back, confirm, judge.
+// Measurements: judge, keep or confirm, and say back.
 
 function judge(
   item: ChecklistItem,
@@ -374,99 +608,221 @@ function judge(
   }
 }
 
-function proposeMeasurement(
+function measuredResult(
+  item: ChecklistItem,
+  measurement: SpokenMeasurement,
+  verdict: MeasurementVerdict | null,
+  heard: string,
+  confidence: number | undefined,
+  at: string,
+): ItemResult {
+  const outOfLimit = verdict?.verdict === 'out_of_limit';
+  const result = resultOf(item, outOfLimit ? 'defect' : 'pass', heard, confidence, at);
+  result.measurement = { quantity: measurement.quantity, value: measurement.value, unit: measurement.unit };
+  if (verdict) result.verdict = verdict.verdict;
+  if (outOfLimit) result.detail = verdict.say;
+  return result;
+}
+
+// What is said back about a kept value at the start of the next prompt.
+function sayBack(step: Step, measurement: SpokenMeasurement, verdict: MeasurementVerdict | null): Prefix {
+  if (verdict?.verdict === 'near_limit') return [verdict.say, caution(step)];
+  return [`${capitalise(measurementToWords(measurement.said.value, measurement.said.unit, step.state.locale))}.`];
+}
+
+// A value for one item: a value past its limit or heard with low confidence is confirmed; an
+// in-limit value is kept and said back at the start of the next prompt.
+function takeMeasurement(
   step: Step,
+  ctx: VoiceLoopContext,
   item: ChecklistItem,
   measurement: SpokenMeasurement,
   heard: string,
   confidence: number | undefined,
+  at: string,
+  fix: SpokenFix | null = null,
 ): Step {
   const { locale } = step.state;
   const verdict = judge(item, measurement, locale);
-  if (verdict === 'implausible') return unclear(step, 'implausible', item);
+  if (verdict === 'implausible') return unclear(step, ctx, 'implausible');
+  const result = measuredResult(item, measurement, verdict, heard, confidence, at);
   const outOfLimit = verdict?.verdict === 'out_of_limit';
-  const question = outOfLimit
-    ? confirmOutOfLimitPrompt(measurement, verdict.say, locale)
-    : readBackMeasurement(measurement, locale);
-  step.set({
-    phase: 'confirming',
-    unclear: 0,
-    silent: 0,
-    pending: {
-      measurement,
-      verdict: verdict?.verdict ?? null,
-      say: verdict?.say ?? null,
-      caution: verdict?.caution ?? null,
-      heard,
-      confidence: confidence ?? null,
-      question,
-    },
-  });
-  return step.say(question).listen('confirm');
+  if (outOfLimit || isLowConfidence(confidence)) {
+    const question = outOfLimit
+      ? confirmOutOfLimitPrompt(measurement, verdict.say, locale)
+      : readBackMeasurement(measurement, locale);
+    step.set({
+      phase: 'confirming',
+      unclear: 0,
+      silent: 0,
+      reminders: 0,
+      pending: {
+        itemKey: item.key,
+        results: [result],
+        measurement,
+        verdict: verdict?.verdict ?? null,
+        say: verdict?.say ?? null,
+        fix,
+        heard,
+        question,
+      },
+    });
+    return step.say(question).listen('confirm');
+  }
+  if (fix) return recordFix(step, ctx, fix, heard, at, { measurement, verdict });
+  save(step, [result]);
+  const back = sayBack(step, measurement, verdict);
+  advance(step, ctx, ...back);
+  return step.set({ saidBack: item.key });
 }
 
-function keepMeasurement(step: Step, ctx: VoiceLoopContext, at: string): Step {
-  const { pending, itemKey, locale } = step.state;
+function keepPending(step: Step, ctx: VoiceLoopContext, at: string): Step {
+  const { pending, locale } = step.state;
   if (!pending) return reAsk(step, ctx);
-  const { measurement, verdict } = pending;
-  const outOfLimit = verdict === 'out_of_limit';
-  const result: ItemResult = {
-    itemKey,
-    answer: outOfLimit ? 'defect' : 'pass',
-    measurement: { quantity: measurement.quantity, value: measurement.value, unit: measurement.unit },
-    heard: pending.heard,
-    answeredAt: at,
-  };
-  if (verdict) result.verdict = verdict;
-  if (outOfLimit && pending.say) result.detail = pending.say;
-  if (pending.confidence !== null) result.confidence = pending.confidence;
-  save(step, result);
   step.set({ pending: null });
-  if (outOfLimit) {
-    return advance(step, ctx, confirmKeptPrompt(measurement, locale), words(step.state).markedDefect, pending.caution);
+  if (pending.fix && pending.measurement) {
+    return recordFix(step, ctx, pending.fix, pending.heard, at, {
+      measurement: pending.measurement,
+      verdict: pending.verdict ? { verdict: pending.verdict, say: pending.say ?? '' } : null,
+    });
   }
-  // A value close to its limit is worth saying; a plain pass is acknowledged by the next prompt.
-  if (verdict === 'near_limit') return advance(step, ctx, pending.say, pending.caution);
-  return advance(step, ctx);
+  save(step, pending.results);
+  const defects = pending.results.filter((r) => r.answer === 'defect').map((r) => r.itemKey);
+  if (defects.length > 0) step.set({ lastDefectKey: defects.at(-1) ?? null });
+  if (pending.verdict === 'out_of_limit' && pending.measurement) {
+    return advance(
+      step,
+      ctx,
+      confirmKeptPrompt(pending.measurement, locale),
+      defectSentence(step, ctx, defects),
+      caution(step),
+    );
+  }
+  if (pending.verdict === 'near_limit') return advance(step, ctx, pending.say, caution(step));
+  return advance(step, ctx, defectSentence(step, ctx, defects));
 }
 
 // ---------------------------------------------------------------------------------------------------
-// Unclear answers: ask again, then offer the choices. Never a pass.
+// Fixed on the spot.
 
-function unclear(step: Step, reason: UnclearReason, item: ChecklistItem | undefined): Step {
-  const count = step.state.unclear + 1;
-  step.set({ unclear: count, silent: 0 });
+function recordFix(
+  step: Step,
+  ctx: VoiceLoopContext,
+  fix: SpokenFix,
+  heard: string,
+  at: string,
+  reading: { measurement: SpokenMeasurement; verdict: Pick<MeasurementVerdict, 'verdict' | 'say'> | null } | null,
+): Step {
+  const checklist = checklistOf(step.state, ctx);
+  const key = step.state.lastDefectKey;
+  const item = key ? itemByKey(checklist, key) : undefined;
+  const defect = key ? step.state.results[key] : undefined;
   const w = words(step.state);
-  const phase = step.state.phase;
-  if (phase === 'confirming') return step.say(w.choicesConfirm).listen('confirm');
-  if (phase === 'offering') return step.say(w.choicesOffer).listen('offer');
-  if (count >= 2) {
-    return step.say(item?.expects.type === 'measure' ? w.choicesMeasure : w.choicesCheck).listen('answer');
+  if (!item || defect?.answer !== 'defect')
+    return backToWhereWeWere(step, ctx, returnPhaseOf(step.state.phase), w.nothingToFix);
+  if (reading?.verdict?.verdict === 'out_of_limit') {
+    return backToWhereWeWere(step, ctx, 'asking', fillWords(w.fixStillOut, { item: capitalise(item.name) }));
   }
-  return step.say(unclearPrompt(reason, step.state.locale)).listen('answer');
+  const fixed: NonNullable<ItemResult['fixed']> = { action: fix.action, heard, at };
+  if (reading) {
+    const { measurement, verdict } = reading;
+    fixed.measurement = { quantity: measurement.quantity, value: measurement.value, unit: measurement.unit };
+    if (verdict) fixed.verdict = verdict.verdict;
+  }
+  save(step, [{ ...defect, fixed }]);
+  step.set({ lastDefectKey: null });
+  return backToWhereWeWere(step, ctx, 'asking', fillWords(w.fixedNoted, { item: item.name }));
+}
+
+// "Fixed, added air, now one ten": applies to the last defect; a new reading is judged like any other.
+function applyFix(
+  step: Step,
+  ctx: VoiceLoopContext,
+  fix: SpokenFix,
+  heard: string,
+  confidence: number | undefined,
+  at: string,
+): Step {
+  const key = step.state.lastDefectKey;
+  const item = key ? itemByKey(checklistOf(step.state, ctx), key) : undefined;
+  if (item && fix.measurement) return takeMeasurement(step, ctx, item, fix.measurement, heard, confidence, at, fix);
+  const defect = key ? step.state.results[key] : undefined;
+  if (defect && fixNeedsReading(defect)) {
+    return backToWhereWeWere(step, ctx, 'asking', words(step.state).fixNeedsReading);
+  }
+  return recordFix(step, ctx, fix, heard, at, null);
+}
+
+function fixHeard(
+  step: Step,
+  ctx: VoiceLoopContext,
+  alternatives: readonly Alternative[],
+): { fix: SpokenFix; heard: string; confidence?: number } | null {
+  const key = step.state.lastDefectKey;
+  if (!key) return null;
+  const item = itemByKey(checklistOf(step.state, ctx), key);
+  const quantity = item?.expects.type === 'measure' ? item.expects.quantity : undefined;
+  const meaning = interpretFix(alternatives, quantity, step.state.locale);
+  if (meaning?.kind !== 'fixed') return null;
+  const fix: SpokenFix = { action: meaning.action };
+  if (meaning.measurement) fix.measurement = meaning.measurement;
+  return { fix, heard: meaning.heard, ...(meaning.confidence === undefined ? {} : { confidence: meaning.confidence }) };
+}
+
+// ---------------------------------------------------------------------------------------------------
+// Unclear answers: ask again, then offer the choices, then wait. Never a pass.
+
+function wait(step: Step, phase: ReturnPhase): Step {
+  step.set({ phase: 'paused', returnTo: phase, unclear: 0, silent: 0, reminders: 0 });
+  return step.say(words(step.state).waiting).listen('paused');
+}
+
+function choicesFor(state: VoiceLoopState, ctx: VoiceLoopContext, phase: ReturnPhase): string {
+  const w = words(state);
+  if (phase === 'confirming') return w.choicesConfirm;
+  if (phase === 'offering') return w.choicesOffer;
+  if (phase === 'choosing') return w.choicesWhich;
+  if (!state.current) return w.choicesStop;
+  return currentItem(state, ctx)?.expects.type === 'measure' ? w.choicesMeasure : w.choicesCheck;
+}
+
+function unclear(step: Step, ctx: VoiceLoopContext, reason: UnclearReason): Step {
+  const count = step.state.unclear + 1;
+  const phase = returnPhaseOf(step.state.phase);
+  if (count >= MAX_UNCLEAR) return wait(step, phase);
+  step.set({ unclear: count, silent: 0 });
+  const mode = listenModeOf(phase);
+  if (count >= 2 || phase !== 'asking') return step.say(choicesFor(step.state, ctx, phase)).listen(mode);
+  return step.say(unclearPrompt(reason, step.state.locale)).listen(mode);
 }
 
 // ---------------------------------------------------------------------------------------------------
 // Commands, the same at every point.
 
-function whereSentence(state: VoiceLoopState, checklist: Checklist, item: ChecklistItem | undefined): string {
-  const w = words(state);
-  if (!item) return '';
-  return fillWords(w.where, {
-    zone: checklist.zones.find((z) => z.key === item.zone)?.title ?? '',
-    position: item.positionLabel,
-    title: item.title,
-    n: state.index + 1,
-    total: checklist.items.length,
+function whereSentence(state: VoiceLoopState, checklist: Checklist): string {
+  const stop = checklist.stops[state.stop];
+  if (!stop) return '';
+  const item = itemByKey(checklist, state.itemKey);
+  return fillWords(words(state).where, {
+    zone: checklist.zones.find((z) => z.key === stop.zone)?.title ?? '',
+    position: state.current && item ? `${item.positionLabel}, ${item.title}` : stop.label,
+    n: state.stop + 1,
+    total: checklist.stops.length,
     done: Object.keys(state.results).length,
   });
 }
 
 // What the driver hears again when returning to where they were.
-function backToWhereWeWere(step: Step, ctx: VoiceLoopContext, phase: ReturnPhase, ...prefix: (string | null)[]): Step {
-  if (phase === 'confirming' && step.state.pending) {
-    step.set({ phase: 'confirming', silent: 0 });
-    return step.say(...prefix, step.state.pending.question).listen('confirm');
+function backToWhereWeWere(step: Step, ctx: VoiceLoopContext, phase: ReturnPhase, ...prefix: Prefix): Step {
+  const { pending, which } = step.state;
+  step.set({ silent: 0, reminders: 0 });
+  if (phase === 'confirming' && pending) {
+    step.set({ phase: 'confirming' });
+    return step.say(...prefix, pending.question).listen('confirm');
+  }
+  if (phase === 'choosing' && which) {
+    step.set({ phase: 'choosing' });
+    return step.say(...prefix, whichQuestion(step.state, ctx, which)).listen('answer');
   }
   if (phase === 'offering') return goToEnd(step, ctx, ...prefix);
   return reAsk(step, ctx, ...prefix);
@@ -475,114 +831,359 @@ function backToWhereWeWere(step: Step, ctx: VoiceLoopContext, phase: ReturnPhase
 function command(step: Step, ctx: VoiceLoopContext, cmd: Exclude<Command, 'language'>, heard: string): Step {
   const { state } = step;
   const w = words(state);
-  const phase: ReturnPhase =
-    state.phase === 'confirming' ? 'confirming' : state.phase === 'offering' ? 'offering' : 'asking';
-  const item = currentItem(state, ctx);
+  const phase = returnPhaseOf(state.phase);
+  const checklist = checklistOf(state, ctx);
   switch (cmd) {
     case 'repeat':
     case 'resume':
       return backToWhereWeWere(step, ctx, phase);
     case 'back':
-      // From a read-back, back means "ask me this one again".
-      if (phase === 'confirming') return reAsk(step, ctx);
+      // From a read-back or a question about one defect, back means "ask me this again".
+      if (phase === 'confirming' || phase === 'choosing') return reAsk(step, ctx);
       return goBack(step, ctx);
-    case 'skip':
+    case 'skip': {
       if (phase === 'offering') return finish(step, ctx);
-      if (item && !state.results[item.key] && !state.skipped.includes(item.key)) {
-        step.set({ skipped: [...state.skipped, item.key] });
-      }
+      const keys = state.current ? [state.current.key] : (checklist.stops[state.stop]?.itemKeys ?? []);
+      const open = keys.filter((key) => !state.results[key] && !state.skipped.includes(key));
+      step.set({ skipped: [...state.skipped, ...open] });
       return advance(step, ctx, w.skipped);
+    }
     case 'pause':
       step.set({ phase: 'paused', returnTo: phase, silent: 0 });
       return step.say(w.paused).listen('paused');
-    case 'note':
-      step.set({ phase: 'noting', returnTo: phase, noteHeard: [], silent: 0 });
+    case 'note': {
+      // At a stop, a note belongs to the defect just named there, else to the stop's first item.
+      const stopKeys = checklist.stops[state.stop]?.itemKeys ?? [];
+      const defectHere = state.lastDefectKey && stopKeys.includes(state.lastDefectKey) ? state.lastDefectKey : null;
+      const noteItemKey = state.current?.key ?? defectHere ?? state.itemKey;
+      step.set({ phase: 'noting', returnTo: phase, noteHeard: [], noteItemKey, silent: 0 });
       // Said before the recording starts, so the note does not begin with our own voice.
-      return step.say(w.noteStarted).emit({ type: 'startNote', itemKey: state.itemKey, heard }).listen('note');
+      return step
+        .say(w.noteStarted)
+        .emit({ type: 'startNote', itemKey: noteItemKey, heard, maxMs: NOTE_MAX_MS })
+        .listen('note');
+    }
     case 'end_note':
       // Not recording: nothing to end.
       return step.listen(listenModeOf(phase));
-    case 'help': {
-      const choices =
-        phase === 'confirming'
-          ? w.choicesConfirm
-          : phase === 'offering'
-            ? w.choicesOffer
-            : item?.expects.type === 'measure'
-              ? w.choicesMeasure
-              : w.choicesCheck;
-      return step.say(w.help, choices).listen(listenModeOf(phase));
-    }
+    case 'help':
+      return step.say(w.help, choicesFor(state, ctx, phase)).listen(listenModeOf(phase));
     case 'where':
-      return step.say(whereSentence(state, checklistOf(state, ctx), item)).listen(listenModeOf(phase));
+      return step.say(whereSentence(state, checklist)).listen(listenModeOf(phase));
     case 'finish':
       if (phase === 'offering') return finish(step, ctx);
       return goToEnd(step, ctx);
+    case 'one_by_one': {
+      const stop = checklist.stops[state.stop];
+      if (!stop || state.current) return backToWhereWeWere(step, ctx, phase);
+      const [first, ...rest] = stop.itemKeys.map((key) => ({ key, reading: false }));
+      if (!first) return advance(step, ctx);
+      return arriveItem(step, first, rest, ctx, [w.oneByOne]);
+    }
   }
 }
 
 function switchLocale(step: Step, ctx: VoiceLoopContext, locale: Locale): Step {
-  const returnPhase: ReturnPhase =
-    step.state.phase === 'confirming' ? 'confirming' : step.state.phase === 'offering' ? 'offering' : 'asking';
+  const returnPhase = returnPhaseOf(step.state.phase);
   step.set({ locale }).emit({ type: 'setLocale', locale });
-  // The pending read-back was said in the old language: ask the item again in the new one.
-  if (returnPhase === 'confirming') return reAsk(step, ctx, languageSwitchedPrompt(locale));
+  // A pending question was said in the old language: ask again in the new one.
+  if (returnPhase === 'confirming' || returnPhase === 'choosing')
+    return reAsk(step, ctx, languageSwitchedPrompt(locale));
   return backToWhereWeWere(step, ctx, returnPhase, languageSwitchedPrompt(locale));
+}
+
+function endNote(step: Step, ctx: VoiceLoopContext, lastWords: string | null, ...prefix: Prefix): Step {
+  const { noteHeard, noteItemKey, itemKey, returnTo } = step.state;
+  const all = [...(noteHeard ?? []), ...(lastWords ? [lastWords] : [])].join(' ').trim();
+  step
+    .set({ noteHeard: null, noteItemKey: null })
+    .emit({ type: 'stopNote', itemKey: noteItemKey ?? itemKey, heard: all });
+  return backToWhereWeWere(step, ctx, returnTo, ...prefix);
 }
 
 // ---------------------------------------------------------------------------------------------------
 // What was heard, by phase.
 
-function bestTranscript(alternatives: readonly Alternative[]): string {
-  const sorted = [...alternatives].sort((a, b) => (b.confidence ?? -1) - (a.confidence ?? -1));
-  return sorted[0]?.transcript ?? '';
+function bestAlternative(alternatives: readonly Alternative[]): Alternative | undefined {
+  return [...alternatives].sort((a, b) => (b.confidence ?? -1) - (a.confidence ?? -1))[0];
+}
+
+function commandOrLanguage(
+  step: Step,
+  ctx: VoiceLoopContext,
+  meaning: { kind: 'command'; command: Command; heard: string; locale?: Locale },
+): Step {
+  if (meaning.command === 'language') return meaning.locale ? switchLocale(step, ctx, meaning.locale) : step;
+  return command(step, ctx, meaning.command, meaning.heard);
+}
+
+function whichQuestion(state: VoiceLoopState, ctx: VoiceLoopContext, which: PendingWhich): string {
+  const checklist = checklistOf(state, ctx);
+  const names = which.candidates.slice(0, WHICH_LIST_LENGTH).map((key) => itemByKey(checklist, key)?.name ?? key);
+  // A bare "defect" names nothing: the question says the word itself.
+  const detail = which.detail.trim() === '' ? (words(state).phrases[1] ?? '') : which.detail;
+  return fillWords(words(state).whichOne, { detail: capitalise(detail), list: spokenList(state, names) });
+}
+
+function askWhich(step: Step, ctx: VoiceLoopContext, which: PendingWhich): Step {
+  resetTurn(step).set({ phase: 'choosing', which });
+  return step.say(whichQuestion(step.state, ctx, which)).listen('answer');
+}
+
+// One answer for a whole stop.
+function onStopAnswer(
+  step: Step,
+  ctx: VoiceLoopContext,
+  stop: ChecklistStop,
+  alternatives: Alternative[],
+  at: string,
+): Step {
+  const checklist = checklistOf(step.state, ctx);
+  const { locale } = step.state;
+  const items = itemsOf(checklist, stop);
+  const fix = fixHeard(step, ctx, alternatives);
+  if (fix) return applyFix(step, ctx, fix.fix, fix.heard, fix.confidence, at);
+  const meaning = interpretStopAnswer(
+    alternatives,
+    items.map((item) => ({ key: item.key, names: item.names, expects: item.expects })),
+    locale,
+  );
+  const saidBack = step.state.saidBack;
+  step.set({ saidBack: null });
+  if (saidBack && correctsSaidBack(meaning)) return correctSaidBack(step.set({ saidBack }), ctx);
+  switch (meaning.kind) {
+    case 'command':
+      return commandOrLanguage(step, ctx, meaning);
+    case 'unclear':
+      return unclear(step, ctx, meaning.reason);
+    case 'fixed':
+      return backToWhereWeWere(step, ctx, 'asking', words(step.state).nothingToFix);
+    case 'which': {
+      const candidates = meaning.candidates.length > 0 ? meaning.candidates : stop.itemKeys;
+      if (candidates.length === 1) {
+        const marks: StopMark[] = [{ itemKey: candidates[0] as string, answer: 'defect', detail: meaning.detail }];
+        return keepStopAnswer(step, ctx, stop, marks, meaning.heard, meaning.confidence, at);
+      }
+      return askWhich(step, ctx, { detail: meaning.detail, candidates, heard: meaning.heard, at });
+    }
+    case 'stop':
+      return keepStopAnswer(step, ctx, stop, meaning.marks, meaning.heard, meaning.confidence, at);
+  }
+}
+
+// Every item of the stop gets its result: named ones as named, the rest pass. Values past their
+// limit, readings the organisation requires and a low-confidence answer are asked about first.
+function keepStopAnswer(
+  step: Step,
+  ctx: VoiceLoopContext,
+  stop: ChecklistStop,
+  marks: readonly StopMark[],
+  heard: string,
+  confidence: number | undefined,
+  at: string,
+): Step {
+  const checklist = checklistOf(step.state, ctx);
+  const { locale } = step.state;
+  const results: ItemResult[] = [];
+  const later: QueuedItem[] = [];
+  const spoken: Prefix = [];
+  let risky: { item: ChecklistItem; measurement: SpokenMeasurement } | null = null;
+  for (const item of itemsOf(checklist, stop)) {
+    const mark = marks.find((m) => m.itemKey === item.key);
+    if (mark?.answer === 'defect') {
+      const defect = resultOf(item, 'defect', heard, confidence, at);
+      if (mark.detail.trim() !== '') defect.detail = mark.detail;
+      results.push(defect);
+    } else if (mark?.answer === 'not_applicable') {
+      results.push(resultOf(item, 'not_applicable', heard, confidence, at));
+    } else if (mark?.answer === 'measurement') {
+      const verdict = judge(item, mark.measurement, locale);
+      if (verdict === 'implausible') later.push({ key: item.key, reading: false });
+      else if (verdict?.verdict === 'out_of_limit' && !risky) risky = { item, measurement: mark.measurement };
+      else if (verdict?.verdict === 'out_of_limit') later.push({ key: item.key, reading: false });
+      else {
+        results.push(measuredResult(item, mark.measurement, verdict, heard, confidence, at));
+        spoken.push(...sayBack(step, mark.measurement, verdict));
+      }
+    } else if (readingRequired(item, ctx)) {
+      later.push({ key: item.key, reading: true });
+    } else {
+      const pass = resultOf(item, 'pass', heard, confidence, at);
+      if (item.expects.type === 'measure') pass.noReading = 'visual';
+      results.push(pass);
+    }
+  }
+  const defects = results.filter((r) => r.answer === 'defect').map((r) => r.itemKey);
+  if (isLowConfidence(confidence) && !risky) {
+    const question = fillWords(words(step.state).heardGroup, { heard });
+    resetTurn(step).set({
+      phase: 'confirming',
+      queue: later,
+      pending: { itemKey: null, results, measurement: null, verdict: null, say: null, fix: null, heard, question },
+    });
+    return step.say(question).listen('confirm');
+  }
+  save(step, results);
+  if (defects.length > 0) step.set({ lastDefectKey: defects.at(-1) ?? null });
+  const measured = results.filter((r) => r.measurement && r.answer === 'pass').at(-1)?.itemKey ?? null;
+  const prefix: Prefix = [...spoken, defectSentence(step, ctx, defects)];
+  if (risky) {
+    const rest = later;
+    step.set({ queue: rest, current: { key: risky.item.key, reading: false }, itemKey: risky.item.key });
+    if (prefix.some(Boolean)) step.say(...prefix);
+    return takeMeasurement(step, ctx, risky.item, risky.measurement, heard, confidence, at);
+  }
+  step.set({ queue: later, current: null });
+  advance(step, ctx, ...prefix);
+  return step.set({ saidBack: measured });
+}
+
+// One item asked on its own.
+function onItemAnswer(
+  step: Step,
+  ctx: VoiceLoopContext,
+  item: ChecklistItem,
+  alternatives: Alternative[],
+  at: string,
+): Step {
+  const { locale, current } = step.state;
+  const fix = fixHeard(step, ctx, alternatives);
+  if (fix) return applyFix(step, ctx, fix.fix, fix.heard, fix.confidence, at);
+  const meaning = interpretUtterance(alternatives, item.expects, locale);
+  const saidBack = step.state.saidBack;
+  step.set({ saidBack: null });
+  if (saidBack && correctsSaidBack(meaning)) return correctSaidBack(step.set({ saidBack }), ctx);
+  switch (meaning.kind) {
+    case 'command':
+      if (meaning.command === 'one_by_one') return backToWhereWeWere(step, ctx, 'asking');
+      return commandOrLanguage(step, ctx, meaning);
+    case 'unclear':
+      return unclear(step, ctx, meaning.reason);
+    case 'fixed':
+      return backToWhereWeWere(step, ctx, 'asking', words(step.state).nothingToFix);
+    case 'no_gauge':
+      if (item.expects.type !== 'measure') return unclear(step, ctx, 'not_understood');
+      // Already passed by eye: the required reading could not be taken.
+      if (current?.reading) return keepPass(step, ctx, item, 'no_gauge', meaning.heard, meaning.confidence, at);
+      step.set({ gaugeless: true, unclear: 0 });
+      return step.say(words(step.state).byEye).listen('answer');
+    case 'measurement':
+      return takeMeasurement(step, ctx, item, meaning.measurement, meaning.heard, meaning.confidence, at);
+    case 'answer': {
+      if (meaning.answer === 'pass' && item.expects.type === 'measure') {
+        if (step.state.gaugeless) return keepPass(step, ctx, item, 'no_gauge', meaning.heard, meaning.confidence, at);
+        if (readingRequired(item, ctx)) {
+          // Counted as unclear so "good" to a required reading cannot loop.
+          const count = step.state.unclear + 1;
+          if (count >= MAX_UNCLEAR) return wait(step, 'asking');
+          step.set({ unclear: count, current: { key: item.key, reading: true } });
+          return step
+            .say(fillWords(words(step.state).readingRequired, { item: capitalise(item.name) }))
+            .listen('answer');
+        }
+        return keepPass(step, ctx, item, 'visual', meaning.heard, meaning.confidence, at);
+      }
+      const result = resultOf(item, meaning.answer, meaning.heard, meaning.confidence, at);
+      if (meaning.answer === 'defect' && meaning.detail) result.detail = meaning.detail;
+      save(step, [result]);
+      if (meaning.answer !== 'defect') return advance(step, ctx);
+      step.set({ lastDefectKey: item.key });
+      return advance(step, ctx, defectSentence(step, ctx, [item.key]));
+    }
+  }
+}
+
+function keepPass(
+  step: Step,
+  ctx: VoiceLoopContext,
+  item: ChecklistItem,
+  noReading: 'visual' | 'no_gauge',
+  heard: string,
+  confidence: number | undefined,
+  at: string,
+): Step {
+  const result = resultOf(item, 'pass', heard, confidence, at);
+  if (item.expects.type === 'measure') result.noReading = noReading;
+  save(step, [result]);
+  return advance(step, ctx);
+}
+
+// The driver says which item a problem named at a stop belongs to.
+function onWhich(step: Step, ctx: VoiceLoopContext, which: PendingWhich, alternatives: Alternative[]): Step {
+  const checklist = checklistOf(step.state, ctx);
+  const stop = checklist.stops[step.state.stop];
+  const best = bestAlternative(alternatives);
+  const candidates = which.candidates.flatMap((key) => {
+    const item = itemByKey(checklist, key);
+    return item ? [item] : [];
+  });
+  const named = best ? namedItemKeys(best.transcript, candidates, step.state.locale) : [];
+  if (named.length === 1 && stop) {
+    const marks: StopMark[] = [{ itemKey: named[0] as string, answer: 'defect', detail: which.detail }];
+    step.set({ which: null });
+    return keepStopAnswer(step, ctx, stop, marks, which.heard, undefined, which.at);
+  }
+  const meaning = interpretUtterance(alternatives, { type: 'check' }, step.state.locale);
+  if (meaning.kind === 'command') return commandOrLanguage(step, ctx, meaning);
+  return unclear(step, ctx, named.length > 1 ? 'disagreement' : 'not_understood');
 }
 
 function onHeard(step: Step, ctx: VoiceLoopContext, alternatives: Alternative[], at: string): Step {
   const { state } = step;
-  const item = currentItem(state, ctx);
-  step.set({ silent: 0, lastError: null });
+  step.set({ silent: 0, reminders: 0, lastError: null });
+  const checklist = checklistOf(state, ctx);
   switch (state.phase) {
     case 'asking': {
-      if (!item) return goToEnd(step, ctx);
-      const meaning = interpretUtterance(alternatives, item.expects, state.locale);
-      if (meaning.kind === 'command') {
-        return meaning.command === 'language'
-          ? switchLocale(step, ctx, meaning.locale)
-          : command(step, ctx, meaning.command, meaning.heard);
+      if (state.current) {
+        const item = itemByKey(checklist, state.current.key);
+        if (!item) return advance(step, ctx);
+        return onItemAnswer(step, ctx, item, alternatives, at);
       }
-      if (meaning.kind === 'unclear') return unclear(step, meaning.reason, item);
-      if (meaning.kind === 'measurement') {
-        return proposeMeasurement(step, item, meaning.measurement, meaning.heard, meaning.confidence);
-      }
-      const result: ItemResult = { itemKey: item.key, answer: meaning.answer, heard: meaning.heard, answeredAt: at };
-      if (meaning.confidence !== undefined) result.confidence = meaning.confidence;
-      if (meaning.answer === 'defect' && meaning.detail) result.detail = meaning.detail;
-      save(step, result);
-      return advance(step, ctx, meaning.answer === 'defect' ? words(state).defectNoted : null);
+      const stop = checklist.stops[state.stop];
+      if (!stop) return goToEnd(step, ctx);
+      return onStopAnswer(step, ctx, stop, alternatives, at);
     }
+    case 'choosing':
+      if (!state.which) return reAsk(step, ctx);
+      return onWhich(step, ctx, state.which, alternatives);
     case 'confirming': {
       const pending = state.pending;
-      if (!item || !pending) return reAsk(step, ctx);
-      const answer = interpretConfirmation(alternatives, state.locale, pending.measurement);
+      if (!pending) return reAsk(step, ctx);
+      const answer = interpretConfirmation(alternatives, state.locale, pending.measurement ?? undefined);
       switch (answer.kind) {
         case 'confirm':
-          return keepMeasurement(step, ctx, at);
-        case 'correct':
-          if (answer.measurement) {
-            return proposeMeasurement(step, item, answer.measurement, answer.heard, answer.confidence);
+          return keepPending(step, ctx, at);
+        case 'correct': {
+          const item = pending.itemKey ? itemByKey(checklist, pending.itemKey) : undefined;
+          if (answer.measurement && item) {
+            step.set({ pending: null });
+            return takeMeasurement(
+              step,
+              ctx,
+              item,
+              answer.measurement,
+              answer.heard,
+              answer.confidence,
+              at,
+              pending.fix,
+            );
           }
-          step.set({ phase: 'asking', pending: null, unclear: 0 });
-          return step.say(words(state).sayValueAgain).listen('answer');
+          // "No" to a whole stop's answer, or to a value without a new one: ask again.
+          step.set({ pending: null });
+          if (item && !pending.fix) {
+            arriveItem(step, { key: item.key, reading: false }, step.state.queue, ctx, [], true);
+            return step;
+          }
+          return reAsk(step, ctx, item ? words(state).sayValueAgain : null);
+        }
         case 'command':
           return command(step, ctx, answer.command, answer.heard);
         case 'unclear': {
           // "Español" while confirming: the language switch is a command too.
-          const meaning = interpretUtterance(alternatives, item.expects, state.locale);
-          if (meaning.kind === 'command' && meaning.command === 'language') {
+          const meaning = interpretUtterance(alternatives, { type: 'check' }, state.locale);
+          if (meaning.kind === 'command' && meaning.command === 'language')
             return switchLocale(step, ctx, meaning.locale);
-          }
-          return unclear(step, answer.reason, item);
+          return unclear(step, ctx, answer.reason);
         }
       }
       break;
@@ -592,12 +1193,8 @@ function onHeard(step: Step, ctx: VoiceLoopContext, alternatives: Alternative[],
       if (answer.kind === 'confirm') return startReview(step, ctx);
       if (answer.kind === 'correct') return finish(step, ctx);
       const meaning = interpretUtterance(alternatives, { type: 'check' }, state.locale);
-      if (meaning.kind === 'command') {
-        return meaning.command === 'language'
-          ? switchLocale(step, ctx, meaning.locale)
-          : command(step, ctx, meaning.command, meaning.heard);
-      }
-      return unclear(step, 'not_understood', item);
+      if (meaning.kind === 'command') return commandOrLanguage(step, ctx, meaning);
+      return unclear(step, ctx, 'not_understood');
     }
     case 'paused': {
       const meaning = interpretUtterance(alternatives, { type: 'check' }, state.locale);
@@ -612,13 +1209,10 @@ function onHeard(step: Step, ctx: VoiceLoopContext, alternatives: Alternative[],
       return step.listen('paused');
     }
     case 'noting': {
-      const meaning = interpretUtterance(alternatives, { type: 'check' }, state.locale);
-      if (meaning.kind === 'command' && meaning.command === 'end_note') {
-        const heard = (state.noteHeard ?? []).join(' ');
-        step.set({ noteHeard: null }).emit({ type: 'stopNote', itemKey: state.itemKey, heard });
-        return backToWhereWeWere(step, ctx, state.returnTo, words(state).noteSaved);
-      }
-      step.set({ noteHeard: [...(state.noteHeard ?? []), bestTranscript(alternatives)] });
+      const best = bestAlternative(alternatives);
+      const { words: said, ended } = splitEndNote(best?.transcript ?? '', state.locale);
+      if (ended) return endNote(step, ctx, said === '' ? null : said, words(state).noteSaved);
+      step.set({ noteHeard: [...(state.noteHeard ?? []), said] });
       return step.listen('note');
     }
     case 'idle':
@@ -638,19 +1232,24 @@ function onSilence(step: Step, ctx: VoiceLoopContext): Step {
       return step.listen('note');
     case 'asking':
     case 'confirming':
+    case 'choosing':
     case 'offering': {
+      const phase = returnPhaseOf(state.phase);
       const silent = state.silent + 1;
-      // The driver is working: stay quiet, and only remind them now and then.
+      // The driver is working: stay quiet, and only remind them now and then, then wait.
       if (silent < SILENT_TURNS_BEFORE_REMINDER) {
         step.set({ silent });
-        return step.listen(listenModeOf(state.phase));
+        return step.listen(listenModeOf(phase));
       }
-      step.set({ silent: 0 });
-      if (state.phase === 'asking') {
-        const item = currentItem(state, ctx);
-        return step.say(item?.shortPrompt).listen('answer');
+      if (state.reminders >= MAX_REMINDERS) return wait(step, phase);
+      step.set({ silent: 0, reminders: state.reminders + 1 });
+      if (phase === 'asking') {
+        const reminder = state.current ? currentItem(state, ctx)?.shortPrompt : currentStop(state, ctx)?.shortPrompt;
+        return step.say(reminder).listen('answer');
       }
-      return backToWhereWeWere(step, ctx, state.phase);
+      const reminders = step.state.reminders;
+      backToWhereWeWere(step, ctx, phase);
+      return step.set({ reminders });
     }
     case 'idle':
     case 'stalled':
@@ -663,9 +1262,8 @@ function onSpeechError(step: Step, event: Extract<VoiceLoopEvent, { type: 'speec
   const { state } = step;
   if (state.phase === 'idle' || state.phase === 'finished' || state.phase === 'stalled') return step;
   if (event.fatal) {
-    const returnTo: ReturnPhase =
-      state.phase === 'confirming' || state.phase === 'offering' ? state.phase : state.returnTo;
-    step.set({ phase: 'stalled', returnTo: state.phase === 'asking' ? 'asking' : returnTo, lastError: event.code });
+    const returnTo = state.phase === 'paused' || state.phase === 'noting' ? state.returnTo : returnPhaseOf(state.phase);
+    step.set({ phase: 'stalled', returnTo, lastError: event.code });
     return step.say(event.spoken).emit({ type: 'speechFailed', code: event.code, shown: event.shown });
   }
   // Said once per kind of failure, then retried quietly.
@@ -673,7 +1271,7 @@ function onSpeechError(step: Step, event: Extract<VoiceLoopEvent, { type: 'speec
   step.set({ lastError: event.code });
   if (first) step.say(event.spoken);
   const mode: ListenMode =
-    state.phase === 'paused' ? 'paused' : state.phase === 'noting' ? 'note' : listenModeOf(state.phase);
+    state.phase === 'paused' ? 'paused' : state.phase === 'noting' ? 'note' : listenModeOf(returnPhaseOf(state.phase));
   return step.listen(mode);
 }
 
@@ -683,21 +1281,22 @@ function onStart(step: Step, ctx: VoiceLoopContext): Step {
   const checklist = checklistOf(state, ctx);
   switch (state.phase) {
     case 'idle':
-      return arrive(step, state.index, ctx, [fillWords(w.intro, { count: checklist.items.length })]);
+      return arriveStop(step, state.stop, ctx, [fillWords(w.intro, { count: checklist.stops.length })]);
     case 'finished':
       return step;
     case 'paused':
       return step.say(w.paused).listen('paused');
     case 'noting':
-      // The recording did not survive the interruption: back to the item.
-      step.set({ noteHeard: null });
-      return reAsk(step, ctx, w.resumed);
+      // The recording did not survive the interruption: back to the question.
+      step.set({ noteHeard: null, noteItemKey: null });
+      return backToWhereWeWere(step, ctx, state.returnTo, w.resumed);
     case 'stalled':
       step.set({ lastError: null });
       return backToWhereWeWere(step, ctx, state.returnTo, w.resumed);
     case 'confirming':
+    case 'choosing':
     case 'asking':
-      return reAsk(step, ctx, w.resumed);
+      return backToWhereWeWere(step, ctx, returnPhaseOf(state.phase), w.resumed);
     case 'offering':
       return goToEnd(step, ctx, w.resumed);
   }
@@ -708,6 +1307,7 @@ function onStart(step: Step, ctx: VoiceLoopContext): Step {
 export function warmVoiceLoop(locale: Locale): void {
   const heard = [{ transcript: locale === 'es' ? 'bien' : 'good', confidence: 1 }];
   interpretUtterance(heard, { type: 'check' }, locale);
+  interpretStopAnswer(heard, [], locale);
   interpretConfirmation(heard, locale);
 }
 
@@ -722,29 +1322,30 @@ export function reduceVoiceLoop(state: VoiceLoopState, event: VoiceLoopEvent, ct
       return onSilence(step, ctx).done();
     case 'speech_error':
       return onSpeechError(step, event).done();
+    case 'note_limit':
+      if (state.phase !== 'noting') return step.done();
+      return endNote(step, ctx, null, words(state).noteLimit).done();
     case 'command': {
-      if (!['asking', 'confirming', 'offering'].includes(state.phase)) {
-        // Buttons work as the voice would: resume from a pause, end a note.
-        if (state.phase === 'paused' && event.command === 'resume') {
-          return backToWhereWeWere(step, ctx, state.returnTo, words(state).resuming).done();
-        }
-        if (state.phase === 'noting' && event.command === 'end_note') {
-          const heard = (state.noteHeard ?? []).join(' ');
-          step.set({ noteHeard: null }).emit({ type: 'stopNote', itemKey: state.itemKey, heard });
-          return backToWhereWeWere(step, ctx, state.returnTo, words(state).noteSaved).done();
-        }
-        return step.done();
+      if (state.phase === 'paused' && event.command === 'resume') {
+        // A tap or a headset button goes on after a pause or a wait.
+        return backToWhereWeWere(step, ctx, state.returnTo, words(state).resuming).done();
       }
+      if (state.phase === 'noting' && event.command === 'end_note') {
+        return endNote(step, ctx, null, words(state).noteSaved).done();
+      }
+      if (!['asking', 'confirming', 'choosing', 'offering'].includes(state.phase)) return step.done();
       return command(step, ctx, event.command, '').done();
     }
     case 'jump': {
       // A note in progress is ended by its own words or button first; a finished walk-around is closed.
       if (state.phase === 'noting' || state.phase === 'finished') return step.done();
-      const index = checklistOf(state, ctx).items.findIndex((item) => item.key === event.itemKey);
-      if (index < 0) return step.done();
-      // Leaving a round of revisiting: after this item the walk-around carries on in order.
+      const checklist = checklistOf(state, ctx);
+      if (itemIndex(checklist, event.itemKey) < 0) return step.done();
+      // Leaving a round of revisiting: after this item the walk-around carries on where it was.
+      const here = state.phase === 'offering' ? null : state.stop;
       step.set({ review: null });
-      return arrive(step, index, ctx, [], true).done();
+      arriveItem(step, { key: event.itemKey, reading: false }, [], ctx, [], true);
+      return step.set({ resumeStop: here }).done();
     }
     case 'set_locale':
       if (state.phase === 'idle' || state.phase === 'finished') {
@@ -755,31 +1356,22 @@ export function reduceVoiceLoop(state: VoiceLoopState, event: VoiceLoopEvent, ct
 }
 
 // ---------------------------------------------------------------------------------------------------
-// Storing and restoring.
-
-export function serializeVoiceLoop(state: VoiceLoopState): string {
-  return JSON.stringify(state);
-}
+// Restoring: the state is plain JSON, stored as it is.
 
 function isRecord(value: unknown): value is Record<string, unknown> {
   return typeof value === 'object' && value !== null && !Array.isArray(value);
 }
 
-// Null when the stored text is not a loop state for this checklist; the host then starts afresh.
-export function restoreVoiceLoop(stored: string, checklist: Checklist): VoiceLoopState | null {
-  let parsed: unknown;
-  try {
-    parsed = JSON.parse(stored);
-  } catch {
-    return null;
-  }
-  if (!isRecord(parsed) || parsed.version !== VOICE_LOOP_VERSION) return null;
-  if (typeof parsed.phase !== 'string' || !(VOICE_LOOP_PHASES as readonly string[]).includes(parsed.phase)) return null;
-  if (!isRecord(parsed.results) || !Array.isArray(parsed.skipped)) return null;
-  const state = parsed as unknown as VoiceLoopState;
+// Null when the stored value is not a loop state for this checklist; the host then starts afresh.
+export function restoreVoiceLoop(stored: unknown, checklist: Checklist): VoiceLoopState | null {
+  if (!isRecord(stored) || stored.version !== VOICE_LOOP_VERSION) return null;
+  if (typeof stored.phase !== 'string' || !(VOICE_LOOP_PHASES as readonly string[]).includes(stored.phase)) return null;
+  if (!isRecord(stored.results) || !Array.isArray(stored.skipped) || !Array.isArray(stored.queue)) return null;
+  const state = stored as unknown as VoiceLoopState;
+  const stop = checklist.stops.findIndex((s) => s.key === state.stopKey);
   const index = checklist.items.findIndex((item) => item.key === state.itemKey);
-  if (index < 0) return null;
+  if (stop < 0 || index < 0) return null;
   const keys = new Set(checklist.items.map((item) => item.key));
   if (!Object.keys(state.results).every((key) => keys.has(key))) return null;
-  return { ...state, index };
+  return { ...state, stop, index };
 }
