@@ -5,12 +5,10 @@ import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { App } from '@/app/app';
 import { applyDisplaySettings, readCachedDisplaySettings } from '@/lib/display-settings';
-import { addScreenWords } from '@/lib/i18n/add-screen-words';
 import { registerAppServiceWorker } from '@/lib/offline/app-update';
 
-// Before the first paint: every screen's words, and the last settings used on this device (text
-// size, theme, language).
-addScreenWords();
+// Before the first paint: the last settings used on this device (text size, theme, language). The
+// screens' words come with their routes.
 applyDisplaySettings(readCachedDisplaySettings());
 
 const root = document.getElementById('root');

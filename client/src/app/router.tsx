@@ -2,6 +2,7 @@ import type { QueryClient } from '@tanstack/react-query';
 import type { ComponentType } from 'react';
 import type { LoaderFunction, LoaderFunctionArgs, RouteObject } from 'react-router';
 import type { Role } from '@yardcall/shared';
+import { loadWords, type WordPart } from '@/lib/i18n/load-words';
 import { AppShell } from './layout/app-shell';
 import { RootError, RouteError, RouteLoading } from './layout/route-status';
 import { NotFound } from './layout/not-found';
@@ -13,6 +14,12 @@ interface ScreenModule {
   loader?: LoaderFunction;
 }
 
+// The driver's home, start and walk-around need only the words the root loads (the core and the
+// driver part); every other screen loads its part with its code.
+const DRIVER_WORDS: WordPart[] = [];
+const FINISH_WORDS: WordPart[] = ['finish'];
+const OFFICE_WORDS: WordPart[] = ['screens'];
+
 // A screen behind the role check, in its own chunk. Its data is fetched only once the check
 // passes, so a signed-out visitor or another role never fires the screen's calls.
 function guardedScreen(
@@ -21,6 +28,7 @@ function guardedScreen(
   roles: readonly Role[],
   load: () => Promise<ScreenModule>,
   handle?: ShellHandle,
+  words: WordPart[] = OFFICE_WORDS,
 ): RouteObject {
   const guard = requireRole(queryClient, roles);
   return {
@@ -29,24 +37,41 @@ function guardedScreen(
     loader: async (args: LoaderFunctionArgs) => {
       const redirect = await guard(args);
       if (redirect) return redirect;
-      const screen = await load();
+      const [screen] = await Promise.all([load(), loadWords(...words)]);
       return screen.loader ? screen.loader(args) : null;
     },
     lazy: async () => ({ Component: (await load()).Component }),
   };
 }
 
-function publicScreen(path: string, load: () => Promise<ComponentType>): RouteObject {
-  return { path, lazy: async () => ({ Component: await load() }) };
+function publicScreen(path: string, load: () => Promise<ComponentType>, words: WordPart[] = []): RouteObject {
+  return {
+    path,
+    lazy: async () => {
+      const [Component] = await Promise.all([load(), loadWords(...words)]);
+      return { Component };
+    },
+  };
 }
 
 // Every screen is its own chunk: a driver's first load carries no admin or supervisor code.
 export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
   const screen = (path: string, roles: readonly Role[], load: () => Promise<ScreenModule>, handle?: ShellHandle) =>
     guardedScreen(queryClient, path, roles, load, handle);
+  const driverScreen = (
+    path: string,
+    load: () => Promise<ScreenModule>,
+    handle?: ShellHandle,
+    words: WordPart[] = DRIVER_WORDS,
+  ) => guardedScreen(queryClient, path, ['driver'], load, handle, words);
   return [
     {
       path: '/',
+      // The shell's and the driver's words (sign-in, settings and the user menu among them).
+      loader: async () => {
+        await loadWords('core', 'driver');
+        return null;
+      },
       Component: AppShell,
       ErrorBoundary: RootError,
       HydrateFallback: RouteLoading,
@@ -60,27 +85,36 @@ export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
             publicScreen(
               'invite/:token',
               async () => (await import('@/features/auth/routes/accept-invitation')).AcceptInvitationRoute,
+              OFFICE_WORDS,
             ),
-            publicScreen('settings', async () => (await import('@/features/settings/routes/settings')).SettingsRoute),
+            publicScreen(
+              'settings',
+              async () => (await import('@/features/settings/routes/settings')).SettingsRoute,
+              OFFICE_WORDS,
+            ),
 
-            screen('driver', ['driver'], async () => ({
+            driverScreen('driver', async () => ({
               Component: (await import('./routes/driver-home')).DriverHomeRoute,
             })),
-            screen('driver/start', ['driver'], async () => {
+            driverScreen('driver/start', async () => {
               const route = await import('./routes/start-inspection');
               return { Component: route.StartInspectionRoute, loader: route.startInspectionLoader(queryClient) };
             }),
-            screen(
+            driverScreen(
               'driver/inspections/:clientId',
-              ['driver'],
               async () => ({
                 Component: (await import('@/features/walkaround/routes/run-inspection')).RunInspectionRoute,
               }),
               { focused: true },
             ),
-            screen('driver/inspections/:clientId/finish', ['driver'], async () => ({
-              Component: (await import('@/features/walkaround/routes/finish-inspection')).FinishInspectionRoute,
-            })),
+            driverScreen(
+              'driver/inspections/:clientId/finish',
+              async () => ({
+                Component: (await import('@/features/walkaround/routes/finish-inspection')).FinishInspectionRoute,
+              }),
+              undefined,
+              FINISH_WORDS,
+            ),
             screen('mechanic', ['mechanic'], async () => {
               const route = await import('./routes/mechanic-home');
               return { Component: route.MechanicHomeRoute, loader: route.mechanicHomeLoader(queryClient) };

@@ -1,15 +1,25 @@
 import type { Locale } from '@yardcall/shared';
-import en from './en/screens.json';
-import es from './es/screens.json';
+import enCore from './en/core.json';
+import enDriver from './en/driver.json';
+import enFinish from './en/finish.json';
+import enScreens from './en/screens.json';
+import esCore from './es/core.json';
+import esDriver from './es/driver.json';
+import esFinish from './es/finish.json';
+import esScreens from './es/screens.json';
 import { i18n } from './index';
 
-const SCREEN_WORDS: Record<Locale, typeof en> = { en, es };
+type Words = Record<string, unknown>;
+const ALL_WORDS: Record<Locale, Words[]> = {
+  en: [enCore, enDriver, enFinish, enScreens],
+  es: [esCore, esDriver, esFinish, esScreens],
+};
 
-// The words of every screen but the glove screen, both languages (switching must work with no
-// signal), added to the core words before the app renders.
+// Every word in both languages at once, for tests; the app loads them with its routes
+// (load-words.ts).
 export function addScreenWords(): void {
-  // Not deep: the two parts share no section, and a shallow merge leaves the core words untouched.
-  for (const [locale, words] of Object.entries(SCREEN_WORDS)) {
-    i18n.addResourceBundle(locale, 'translation', words, false, false);
+  // Deep: a section may be split across parts; they share no leaf, so nothing is overwritten.
+  for (const [locale, parts] of Object.entries(ALL_WORDS)) {
+    for (const words of parts) i18n.addResourceBundle(locale, 'translation', words, true, false);
   }
 }

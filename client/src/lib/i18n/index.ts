@@ -2,29 +2,35 @@ import i18next from 'i18next';
 import { initReactI18next } from 'react-i18next';
 import { LOCALES, type Locale } from '@yardcall/shared';
 import en from './en/core.json';
-import es from './es/core.json';
+import type enDriver from './en/driver.json';
+import type enFinish from './en/finish.json';
 import type enScreens from './en/screens.json';
 
-// Two parts per language in one namespace: the core words every page needs (the glove screen's
-// own page loads only these) and the words of every other screen, which the app adds at start
-// (add-screen-words.ts).
+// Four parts per language in one namespace: the core words every page needs (the glove screen's
+// own page loads only these), the driver's home and start, the finish and report, and every other
+// screen's words; the app loads each with the routes that need it (load-words.ts). A section may
+// be split across parts (walkaround, vehicles): the parts are merged deep and share no leaf.
 declare module 'i18next' {
   interface CustomTypeOptions {
     defaultNS: 'translation';
-    resources: { translation: typeof en & typeof enScreens };
+    resources: { translation: typeof en & typeof enDriver & typeof enFinish & typeof enScreens };
   }
 }
 
 export const i18n = i18next.createInstance();
 
-// Both languages are bundled (a few KB): switching must work with no signal.
+// English core words come with the page; every other part and language is loaded when needed
+// (load-words.ts) from chunks the service worker precaches, so switching works with no signal.
 void i18n.use(initReactI18next).init({
-  resources: { en: { translation: en }, es: { translation: es } },
+  // A copy: the other parts are merged into the store deep, which must not change the module's object.
+  resources: { en: { translation: structuredClone(en) } },
   lng: 'en',
   fallbackLng: 'en',
   supportedLngs: [...LOCALES],
   interpolation: { escapeValue: false },
   initAsync: false,
+  // Words loaded with a route re-render what is on screen.
+  react: { bindI18nStore: 'added' },
 });
 
 export function isLocale(value: unknown): value is Locale {

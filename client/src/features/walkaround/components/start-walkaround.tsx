@@ -1,4 +1,4 @@
-import { useState, type ReactNode } from 'react';
+import { lazy, Suspense, useState, type ReactNode } from 'react';
 import { useTranslation } from 'react-i18next';
 import { useNavigate } from 'react-router';
 import { useQueryClient } from '@tanstack/react-query';
@@ -14,7 +14,11 @@ import { useCreateLocalInspection } from '../api/create-local-inspection';
 import { pendingAcknowledgementQueryOptions } from '../api/get-pending-acknowledgement';
 import { useStartData } from '../api/get-start-data';
 import { runPath } from '../walkaround-paths';
-import { PendingAcknowledgementReview } from './pending-acknowledgement-review';
+
+// Loaded only when a review is waiting: its signature pad and form stay off the start's first load.
+const PendingAcknowledgementReview = lazy(async () => ({
+  default: (await import('./pending-acknowledgement-review')).PendingAcknowledgementReview,
+}));
 
 export const START_KINDS = ['pre_trip', 'post_trip', 'en_route'] as const satisfies readonly InspectionKind[];
 
@@ -162,22 +166,24 @@ export function StartWalkaround({ renderPicker, vehicles }: StartWalkaroundProps
           </div>
         </Section>
       ) : pending && firstPending ? (
-        <PendingAcknowledgementReview
-          key={firstPending.inspectionId}
-          pending={firstPending}
-          onCancel={() => {
-            setPending(null);
-            setPowerUnit(null);
-          }}
-          onSigned={() => {
-            const rest = pending.list.slice(1);
-            if (rest.length > 0) setPending({ ...pending, list: rest });
-            else {
+        <Suspense fallback={<Loading label={t('common.loading')} />}>
+          <PendingAcknowledgementReview
+            key={firstPending.inspectionId}
+            pending={firstPending}
+            onCancel={() => {
               setPending(null);
-              run(pending.chosen);
-            }
-          }}
-        />
+              setPowerUnit(null);
+            }}
+            onSigned={() => {
+              const rest = pending.list.slice(1);
+              if (rest.length > 0) setPending({ ...pending, list: rest });
+              else {
+                setPending(null);
+                run(pending.chosen);
+              }
+            }}
+          />
+        </Suspense>
       ) : powerUnit ? (
         <Section title={t('walkaround.start.trailerTitle', { unit: powerUnit.unitNumber })} id="start-trailers">
           <ul className="flex flex-col gap-tap-gap" aria-label={t('walkaround.start.trailers')}>
