@@ -113,7 +113,8 @@ const FIFTH_WHEEL_ITEMS: readonly ItemWordId[] = [
   'coupling.release_arm',
 ];
 
-const MAX_UNITS = 4;
+// A power unit and up to three trailers: the most units one walk-around covers (our own bound).
+export const MAX_UNITS = 4;
 
 class ChecklistBuilder {
   readonly items: ChecklistItem[] = [];

@@ -29,10 +29,6 @@ import {
 } from '@yardcall/shared';
 import { Transform, Type } from 'class-transformer';
 import {
-  ArrayMaxSize,
-  ArrayMinSize,
-  ArrayUnique,
-  IsArray,
   IsBoolean,
   IsIn,
   IsInt,
@@ -48,6 +44,7 @@ import {
   ValidateNested,
 } from 'class-validator';
 import { NotInTheFuture, WithinOfflineWindow } from '../../common/client-time';
+import { VehicleIds } from '../../common/dto/vehicle-ids.decorator';
 import { DefectResponseDto } from '../../defects/dto/defect.dto';
 import { InspectionVehicleDto, PersonRefDto } from './person-ref.dto';
 import { CLIENT_ID_MAX, ItemResultResponseDto } from './result.dto';
@@ -55,17 +52,10 @@ import { SignatureInputDto, SignatureResponseDto } from './signature.dto';
 
 export const PAGE_LIMIT_DEFAULT = 25;
 export const PAGE_LIMIT_MAX = 100;
-// A power unit and up to three trailers (the checklist engine's own bound).
-const UNITS_MAX = 4;
 const ISO_TIME = 'an ISO 8601 time, e.g. 2026-12-01T06:15:00.000Z';
 
 export class CreateInspectionDto implements CreateInspectionRequest {
-  @ApiProperty({ type: [String], format: 'uuid', description: 'Power unit first, then trailer(s).' })
-  @IsArray({ message: 'Send the vehicle ids as a list: the power unit first, then its trailers.' })
-  @ArrayMinSize(1, { message: 'Choose at least one vehicle.' })
-  @ArrayMaxSize(UNITS_MAX, { message: `Choose at most ${UNITS_MAX} vehicles: a power unit and its trailers.` })
-  @ArrayUnique({ message: 'Each vehicle may appear only once.' })
-  @IsUUID('all', { each: true, message: 'Each vehicle id is a UUID.' })
+  @VehicleIds()
   vehicleIds: string[];
 
   @ApiProperty({ enum: INSPECTION_KINDS })

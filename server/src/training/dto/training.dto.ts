@@ -20,8 +20,6 @@ import {
 import { Type } from 'class-transformer';
 import {
   ArrayMaxSize,
-  ArrayMinSize,
-  ArrayUnique,
   IsArray,
   IsIn,
   IsInt,
@@ -37,11 +35,10 @@ import {
   ValidateNested,
 } from 'class-validator';
 import { NotInTheFuture, WithinOfflineWindow } from '../../common/client-time';
+import { VehicleIds } from '../../common/dto/vehicle-ids.decorator';
 
 const CLIENT_ID_MAX = 64;
 const ITEM_KEY_MAX = 160;
-// A power unit and up to three trailers (the checklist engine's own bound).
-const UNITS_MAX = 4;
 // Our own bound: three hours, far past any practice walk-around; stops nonsense numbers.
 const DURATION_MAX_MS = 3 * 60 * 60 * 1000;
 const ISO_TIME = 'an ISO 8601 time, e.g. 2026-12-01T06:15:00.000Z';
@@ -54,12 +51,7 @@ export class CreateTrainingAttemptDto implements CreateTrainingAttemptRequest {
   @Matches(/^[A-Za-z0-9_-]+$/, { message: 'A client id uses only letters, digits, hyphens and underscores.' })
   clientId: string;
 
-  @ApiProperty({ type: [String], format: 'uuid', description: 'Power unit first, then trailer(s).' })
-  @IsArray({ message: 'Send the vehicle ids as a list: the power unit first, then its trailers.' })
-  @ArrayMinSize(1, { message: 'Choose at least one vehicle.' })
-  @ArrayMaxSize(UNITS_MAX, { message: `Choose at most ${UNITS_MAX} vehicles: a power unit and its trailers.` })
-  @ArrayUnique({ message: 'Each vehicle may appear only once.' })
-  @IsUUID('all', { each: true, message: 'Each vehicle id is a UUID.' })
+  @VehicleIds()
   vehicleIds: string[];
 
   @ApiProperty({ format: 'date-time' })
