@@ -248,7 +248,11 @@ export function GloveScreen({ walkaround, onFinished, createEngine }: GloveScree
           <p className="mt-2 text-2xl font-bold">{state.pending.question}</p>
         ) : null}
         {phase === 'choosing' && state.which ? (
-          <p className="mt-2 text-2xl font-bold">{t('walkaround.run.which', { detail: state.which.detail })}</p>
+          <p className="mt-2 text-2xl font-bold">
+            {state.which.detail.trim() === ''
+              ? t('walkaround.run.whichPlain')
+              : t('walkaround.run.which', { detail: state.which.detail })}
+          </p>
         ) : null}
         {phase === 'offering' || phase === 'paused' || phase === 'noting' ? (
           <p className="mt-2 text-2xl font-bold">{t(`walkaround.run.phase.${phase}`)}</p>

@@ -122,7 +122,7 @@ describe('the voice loop, stop by stop', () => {
     const run = simulateVoiceLoop(contextFor(en), only('defect, it is leaking', 'the hub'), {
       state: stateAtStop(en, STEER_LEFT_HUB),
     });
-    expect(run.effects.some((e) => e.type === 'speak' && e.text.includes('which one'))).toBe(true);
+    expect(run.effects.some((e) => e.type === 'speak' && e.text.startsWith('Which one?'))).toBe(true);
     const results = latestResults(run.saved);
     expect(results.get(STEER_LEFT_HUB)?.answer).toBe('defect');
     expect(results.get(STEER_LEFT_HUB)?.detail).toContain('leaking');

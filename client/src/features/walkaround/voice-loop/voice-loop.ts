@@ -430,7 +430,8 @@ function arriveItem(
     return step
       .say(...prefix, fillWords(words(step.state).readingRequired, { item: capitalise(item.name) }))
       .listen('answer');
-  return step.say(...prefix, full ? item.prompt : item.shortPrompt).listen('answer');
+  // Inside its stop the position was said with the stop: the item's name is enough.
+  return step.say(...prefix, full ? item.prompt : `${capitalise(item.name)}?`).listen('answer');
 }
 
 // Says the current question again, in full, without counting it again.
@@ -917,12 +918,13 @@ function commandOrLanguage(
   return command(step, ctx, meaning.command, meaning.heard);
 }
 
+// "Which one? Hub, lug nuts, rim, or another?" The driver's own words stay on the screen.
 function whichQuestion(state: VoiceLoopState, ctx: VoiceLoopContext, which: PendingWhich): string {
   const checklist = checklistOf(state, ctx);
+  const w = words(state);
   const names = which.candidates.slice(0, WHICH_LIST_LENGTH).map((key) => itemByKey(checklist, key)?.name ?? key);
-  // A bare "defect" names nothing: the question says the word itself.
-  const detail = which.detail.trim() === '' ? (words(state).phrases[1] ?? '') : which.detail;
-  return fillWords(words(state).whichOne, { detail: capitalise(detail), list: spokenList(state, names) });
+  if (which.candidates.length > WHICH_LIST_LENGTH) names.push(w.another);
+  return fillWords(w.whichOne, { list: capitalise(spokenList(state, names)) });
 }
 
 function askWhich(step: Step, ctx: VoiceLoopContext, which: PendingWhich): Step {
