@@ -36,22 +36,12 @@ import { ApiErrorBodyDto } from '../common/dto/api-error-body.dto';
 import { UuidParam } from '../common/uuid-param';
 import { OBJECT_STORAGE, type ObjectStorage } from '../storage/object-storage';
 import { PhotoResponseDto, PhotoUploadDto, VoiceNoteResponseDto, VoiceNoteUploadDto } from './dto/upload.dto';
-import { PHOTO_MEDIA, VOICE_NOTE_MEDIA } from './media-types';
+import { PHOTO_MEDIA, VOICE_NOTE_MEDIA } from '../uploads/media-types';
 import { NotesService, type UploadResult } from './notes.service';
-import { serveObject } from './serve-object';
-import { formatBytes, UPLOAD_FIELD, UploadInterceptor } from './upload.interceptor';
+import { serveObject } from '../uploads/serve-object';
+import { formatBytes, multipartBody, UploadInterceptor } from '../uploads/upload.interceptor';
 
 const ITEM_FIELDS = { itemKey: { type: 'string' }, clientId: { type: 'string' } };
-
-function multipartBody(fields: Record<string, { type: string }>, required: string[]) {
-  return {
-    schema: {
-      type: 'object',
-      required: [UPLOAD_FIELD, ...required],
-      properties: { [UPLOAD_FIELD]: { type: 'string', format: 'binary' }, ...fields },
-    },
-  };
-}
 
 // 201 for a new upload, 200 when the same clientId had already stored it.
 function answer<T>(response: Response, result: UploadResult<T>): T {

@@ -17,9 +17,9 @@ import { OBJECT_STORAGE, type ObjectStorage } from '../storage/object-storage';
 import type { PhotoUploadDto, VoiceNoteUploadDto } from './dto/upload.dto';
 import { Photo } from './entities/photo.entity';
 import { VoiceNote } from './entities/voice-note.entity';
-import { checkUpload, type CheckedUpload } from './check-upload';
-import { PHOTO_MEDIA, VOICE_NOTE_MEDIA, type MediaKind } from './media-types';
-import type { ServedObject } from './serve-object';
+import { checkUpload, type CheckedUpload } from '../uploads/check-upload';
+import { PHOTO_MEDIA, VOICE_NOTE_MEDIA, type MediaKind } from '../uploads/media-types';
+import type { ServedObject } from '../uploads/serve-object';
 
 export interface UploadResult<T> {
   record: T;

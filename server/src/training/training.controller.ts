@@ -44,8 +44,8 @@ import { CurrentUser } from '../auth/decorators/current-user.decorator';
 import { Roles } from '../auth/decorators/roles.decorator';
 import { ApiErrorBodyDto } from '../common/dto/api-error-body.dto';
 import { UuidParam } from '../common/uuid-param';
-import { serveObject } from '../notes/serve-object';
-import { formatBytes, UPLOAD_FIELD, UploadInterceptor } from '../notes/upload.interceptor';
+import { serveObject } from '../uploads/serve-object';
+import { formatBytes, multipartBody, UploadInterceptor } from '../uploads/upload.interceptor';
 import { OBJECT_STORAGE, type ObjectStorage } from '../storage/object-storage';
 import {
   CreateTrainingAttemptDto,
@@ -112,13 +112,7 @@ export class TrainingController {
     summary: `Add the attempt's recording. ${STUDENT_ONLY} Judged by its content (${PRACTICE_AUDIO_MEDIA.acceptedNames}, at most ${formatBytes(PRACTICE_AUDIO_MEDIA.maxBytes)}); the same file sent again answers 200.`,
   })
   @ApiConsumes('multipart/form-data')
-  @ApiBody({
-    schema: {
-      type: 'object',
-      required: [UPLOAD_FIELD, 'durationMs'],
-      properties: { [UPLOAD_FIELD]: { type: 'string', format: 'binary' }, durationMs: { type: 'integer' } },
-    },
-  })
+  @ApiBody(multipartBody({ durationMs: { type: 'integer' } }, ['durationMs']))
   @ApiCreatedResponse({ description: 'Stored; 200 with the same body when sent again.' })
   @ApiBadRequestResponse({ type: ApiErrorBodyDto, description: 'Empty, not audio, or a field is wrong.' })
   @ApiPayloadTooLargeResponse({ type: ApiErrorBodyDto })

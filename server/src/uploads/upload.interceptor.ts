@@ -15,6 +15,17 @@ import type { MediaKind } from './media-types';
 
 export const UPLOAD_FIELD = 'file';
 
+// The OpenAPI body of an upload: the file under UPLOAD_FIELD and the form fields sent with it.
+export function multipartBody(fields: Record<string, { type: string }>, required: string[]) {
+  return {
+    schema: {
+      type: 'object',
+      required: [UPLOAD_FIELD, ...required],
+      properties: { [UPLOAD_FIELD]: { type: 'string', format: 'binary' }, ...fields },
+    },
+  };
+}
+
 export function formatBytes(bytes: number): string {
   return bytes >= 1024 * 1024 ? `${(bytes / (1024 * 1024)).toFixed(0)} MB` : `${(bytes / 1024).toFixed(0)} KB`;
 }
