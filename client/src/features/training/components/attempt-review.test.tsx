@@ -65,6 +65,9 @@ describe('attempt review', () => {
     fireEvent.click(row.querySelector('[data-testid="item-play"]') as HTMLElement);
     expect((audio as HTMLAudioElement).currentTime).toBeCloseTo(named.firstNamedMs! / 1000, 3);
     expect(screen.getByTestId('playing-from')).toHaveTextContent(/Playing from 0:\d\d/);
+    // Grouped by stop, as the walk-around asks it: the item sits under its stop's label.
+    const stop = attempt.checklist.stops.find((s) => s.itemKeys.includes(named.itemKey))!;
+    expect(row.closest('[data-testid="attempt-stop"]')).toHaveTextContent(stop.label);
   }, 30_000);
 
   it('asks for a grade, then saves every item’s mark with the comments', async () => {
