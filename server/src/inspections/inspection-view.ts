@@ -5,11 +5,12 @@ import type {
   ItemResultResponse,
   SignatureResponse,
 } from '@yardcall/shared';
-import type { Inspection, InspectionVehicleSnapshot } from './entities/inspection.entity';
+import type { VehicleSnapshot } from '../vehicles/vehicle-checklist';
+import type { Inspection } from './entities/inspection.entity';
 import type { ItemResult } from './entities/item-result.entity';
 import type { Signature } from './entities/signature.entity';
 
-export function toVehicleRefs(snapshot: readonly InspectionVehicleSnapshot[]): InspectionVehicle[] {
+export function toVehicleRefs(snapshot: readonly VehicleSnapshot[]): InspectionVehicle[] {
   return snapshot.map((v) => ({ id: v.id, unitNumber: v.unitNumber, kind: v.kind }));
 }
 

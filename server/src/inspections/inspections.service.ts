@@ -1,11 +1,9 @@
 import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import {
-  ChecklistError,
   DEFAULT_DISPLAY_SETTINGS,
   DEFAULT_TIME_ZONE,
   LimitError,
-  buildChecklist,
   canonicalUnitOf,
   evaluateMeasurement,
   isReadingRequired,
@@ -25,7 +23,7 @@ import {
   type SpotFix,
   type Verdict,
 } from '@yardcall/shared';
-import { DataSource, In, Repository, type SelectQueryBuilder } from 'typeorm';
+import { DataSource, Repository, type SelectQueryBuilder } from 'typeorm';
 import type { AuthUser } from '../auth/auth-user';
 import { ApiValidationException } from '../common/api-validation.exception';
 import { isUniqueViolation } from '../common/database-errors';
@@ -35,6 +33,12 @@ import { refreshVehicleStatus } from '../defects/vehicle-status';
 import { Organization } from '../organizations/entities/organization.entity';
 import { User } from '../users/entities/user.entity';
 import { Vehicle } from '../vehicles/entities/vehicle.entity';
+import {
+  ChecklistCache,
+  checklistOfSnapshot,
+  snapshotVehicles,
+  type BuiltChecklist,
+} from '../vehicles/vehicle-checklist';
 import { JOB_SAFETY_DEFECT_REPORTED, type SafetyDefectReportedJob } from '../jobs/job-names';
 import { JobsService } from '../jobs/jobs.service';
 import { AcknowledgementsService } from './acknowledgements.service';
@@ -47,14 +51,13 @@ import {
 } from './dto/inspection.dto';
 import type { MeasurementValueDto, PutResultsDto, ResultUpsertDto, SpotFixDto } from './dto/result.dto';
 import { InspectionVehicle } from './entities/inspection-vehicle.entity';
-import { Inspection, type InspectionVehicleSnapshot } from './entities/inspection.entity';
+import { Inspection } from './entities/inspection.entity';
 import { ItemResult } from './entities/item-result.entity';
 import { Signature } from './entities/signature.entity';
 import { InspectionAttachmentsRegistry } from './inspection-attachments';
 import { toListItem, toResultResponse, toSharedResult, toSignatureResponse } from './inspection-view';
 import { recurringDefectsOf } from './review';
 import { driverStatement } from './statements';
-import { BoundedCache } from '../common/bounded-cache';
 
 // A signature cannot come before the walk-around began (the future is the DTO's to refuse).
 function signedTimeOf(dto: SubmitInspectionDto, startedAt: Date, now: Date): Date {
@@ -74,11 +77,6 @@ const NOT_FOUND = 'No inspection with this id in your organisation.';
 const CLIENT_ID_INDEX = 'UQ_inspections_driver_client';
 // Checklists are rebuilt from the stored snapshot, which never changes: keep the recent ones.
 const CHECKLIST_CACHE_MAX = 500;
-
-interface BuiltChecklist {
-  checklist: Checklist;
-  byKey: Map<string, ChecklistItem>;
-}
 
 // One answer, ready for the database: measurement in the canonical unit, verdict and limit from the server.
 interface PreparedResult {
@@ -232,7 +230,7 @@ function whereStartedWithin(
 
 @Injectable()
 export class InspectionsService {
-  private readonly checklists = new BoundedCache<string, BuiltChecklist>(CHECKLIST_CACHE_MAX);
+  private readonly checklists = new ChecklistCache(CHECKLIST_CACHE_MAX);
 
   constructor(
     @InjectRepository(Inspection) private readonly inspections: Repository<Inspection>,
@@ -251,14 +249,7 @@ export class InspectionsService {
     const existing = await this.inspections.findOneBy({ driverId: user.id, clientId: dto.clientId });
     if (existing) return { created: false, inspection: await this.assemble(existing) };
 
-    const found = await this.vehicles.findBy({ id: In(dto.vehicleIds), organizationId: user.organizationId });
-    const byId = new Map(found.map((v) => [v.id, v]));
-    const missing = dto.vehicleIds.find((id) => !byId.has(id));
-    if (missing) throw new NotFoundException(`No vehicle with id ${missing} in your organisation.`);
-    const snapshot: InspectionVehicleSnapshot[] = dto.vehicleIds.map((id) => {
-      const vehicle = byId.get(id) as Vehicle;
-      return { id: vehicle.id, unitNumber: vehicle.unitNumber, kind: vehicle.kind, config: vehicle.config };
-    });
+    const snapshot = await snapshotVehicles(this.vehicles, user.organizationId, dto.vehicleIds);
     const [driver, organization] = await Promise.all([
       this.users.findOne({ select: { id: true, settings: true }, where: { id: user.id } }),
       this.dataSource.manager.findOne(Organization, {
@@ -267,15 +258,7 @@ export class InspectionsService {
       }),
     ]);
     const locale = dto.locale ?? driver?.settings.locale ?? DEFAULT_DISPLAY_SETTINGS.locale;
-    let checklist: Checklist;
-    try {
-      checklist = buildChecklist(snapshot, dto.kind, locale);
-    } catch (error) {
-      if (error instanceof ChecklistError) {
-        throw new ApiValidationException([{ field: 'vehicleIds', message: error.message }]);
-      }
-      throw error;
-    }
+    const checklist = checklistOfSnapshot(snapshot, dto.kind, locale);
     if (dto.kind === 'pre_trip') {
       for (const vehicle of snapshot) {
         const pending = await this.acknowledgements.pendingInspectionFor(
@@ -324,7 +307,7 @@ export class InspectionsService {
       const winner = await this.inspections.findOneByOrFail({ driverId: user.id, clientId: dto.clientId });
       return { created: false, inspection: await this.assemble(winner) };
     }
-    this.remember(inspection.id, checklist);
+    this.checklists.remember(inspection.id, checklist);
     return { created: true, inspection: await this.assemble(inspection) };
   }
 
@@ -746,13 +729,7 @@ export class InspectionsService {
   }
 
   private checklistOf(inspection: Inspection): BuiltChecklist {
-    const cached = this.checklists.get(inspection.id);
-    if (cached) return cached;
-    return this.remember(inspection.id, buildChecklist(inspection.vehicles, inspection.kind, inspection.locale));
-  }
-
-  private remember(id: string, checklist: Checklist): BuiltChecklist {
-    return this.checklists.set(id, { checklist, byKey: new Map(checklist.items.map((item) => [item.key, item])) });
+    return this.checklists.of(inspection);
   }
 
   private async assemble(inspection: Inspection): Promise<InspectionResponse> {

@@ -1,10 +1,8 @@
 import { ConflictException, ForbiddenException, Inject, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import {
-  ChecklistError,
   DEFAULT_DISPLAY_SETTINGS,
   TRAINING_AUDIO_MAX_BYTES,
-  buildChecklist,
   scoreNarration,
   type Checklist,
   type FieldProblem,
@@ -16,13 +14,13 @@ import { DataSource, In, Repository, type EntityManager } from 'typeorm';
 import type { AuthUser } from '../auth/auth-user';
 import { ApiValidationException } from '../common/api-validation.exception';
 import { isUniqueViolation } from '../common/database-errors';
-import type { InspectionVehicleSnapshot } from '../inspections/entities/inspection.entity';
 import { checkUpload } from '../uploads/check-upload';
 import { VOICE_NOTE_MEDIA, type MediaKind, type NoteAudioType } from '../uploads/media-types';
 import type { ServedObject } from '../uploads/serve-object';
 import { OBJECT_STORAGE, type ObjectStorage } from '../storage/object-storage';
 import { User } from '../users/entities/user.entity';
 import { Vehicle } from '../vehicles/entities/vehicle.entity';
+import { ChecklistCache, checklistOfSnapshot, snapshotVehicles } from '../vehicles/vehicle-checklist';
 import type {
   CreateTrainingAttemptDto,
   FinishTrainingAttemptDto,
@@ -35,7 +33,6 @@ import type {
 import { TrainingAttempt } from './entities/training-attempt.entity';
 import { TrainingReview } from './entities/training-review.entity';
 import { orderedSegments, toAttemptListItem, toAttemptResponse, toProgressPoint } from './training-view';
-import { BoundedCache } from '../common/bounded-cache';
 
 // The same containers as voice notes, judged by content the same way; a whole walk-around is longer.
 export const PRACTICE_AUDIO_MEDIA: MediaKind<NoteAudioType> = {
@@ -56,7 +53,7 @@ const LIST_LIMIT = 200;
 
 @Injectable()
 export class TrainingService {
-  private readonly checklists = new BoundedCache<string, Checklist>(CHECKLIST_CACHE_MAX);
+  private readonly checklists = new ChecklistCache(CHECKLIST_CACHE_MAX);
 
   constructor(
     @InjectRepository(TrainingAttempt) private readonly attempts: Repository<TrainingAttempt>,
@@ -79,24 +76,9 @@ export class TrainingService {
     });
     if (!student?.isStudent) throw new ForbiddenException(NOT_A_STUDENT);
 
-    const found = await this.vehicles.findBy({ id: In(dto.vehicleIds), organizationId: user.organizationId });
-    const byId = new Map(found.map((v) => [v.id, v]));
-    const missing = dto.vehicleIds.find((id) => !byId.has(id));
-    if (missing) throw new NotFoundException(`No vehicle with id ${missing} in your organisation.`);
-    const snapshot: InspectionVehicleSnapshot[] = dto.vehicleIds.map((id) => {
-      const vehicle = byId.get(id) as Vehicle;
-      return { id: vehicle.id, unitNumber: vehicle.unitNumber, kind: vehicle.kind, config: vehicle.config };
-    });
+    const snapshot = await snapshotVehicles(this.vehicles, user.organizationId, dto.vehicleIds);
     const locale = dto.locale ?? student.settings.locale ?? DEFAULT_DISPLAY_SETTINGS.locale;
-    let checklist: Checklist;
-    try {
-      checklist = buildChecklist(snapshot, 'practice', locale);
-    } catch (error) {
-      if (error instanceof ChecklistError) {
-        throw new ApiValidationException([{ field: 'vehicleIds', message: error.message }]);
-      }
-      throw error;
-    }
+    const checklist = checklistOfSnapshot(snapshot, 'practice', locale);
     let attempt: TrainingAttempt;
     try {
       attempt = await this.attempts.save(
@@ -126,7 +108,7 @@ export class TrainingService {
       const winner = await this.attempts.findOneByOrFail({ studentId: user.id, clientId: dto.clientId });
       return { created: false, attempt: await this.assemble(winner) };
     }
-    this.checklists.set(attempt.id, checklist);
+    this.checklists.remember(attempt.id, checklist);
     return { created: true, attempt: await this.assemble(attempt) };
   }
 
@@ -369,10 +351,7 @@ export class TrainingService {
   }
 
   private checklistOf(attempt: TrainingAttempt): Checklist {
-    return (
-      this.checklists.get(attempt.id) ??
-      this.checklists.set(attempt.id, buildChecklist(attempt.vehicles, 'practice', attempt.locale))
-    );
+    return this.checklists.of(attempt).checklist;
   }
 
   private async assemble(attempt: TrainingAttempt): Promise<TrainingAttemptResponse> {

@@ -5,21 +5,11 @@ import {
   type InspectionStatus,
   type Locale,
   type ReadingRule,
-  type VehicleConfig,
-  type VehicleKind,
 } from '@yardcall/shared';
 import { Column, Entity, Index, JoinColumn, ManyToOne } from 'typeorm';
 import { EditableOrganizationOwned } from '../../organizations/entities/organization-owned';
 import { User } from '../../users/entities/user.entity';
-
-// The vehicles as they were configured when the walk-around began: the checklist is rebuilt from this,
-// so editing a vehicle later never changes an inspection's items.
-export interface InspectionVehicleSnapshot {
-  id: string;
-  unitNumber: string;
-  kind: VehicleKind;
-  config: VehicleConfig;
-}
+import type { VehicleSnapshot } from '../../vehicles/vehicle-checklist';
 
 // The list's keyset indexes sort newest first; their DESC columns live in the migration only.
 @Index('IDX_inspections_org_started', { synchronize: false })
@@ -64,7 +54,7 @@ export class Inspection extends EditableOrganizationOwned {
   location: string | null;
 
   @Column({ type: 'jsonb' })
-  vehicles: InspectionVehicleSnapshot[];
+  vehicles: VehicleSnapshot[];
 
   // The organisation's required readings when the walk-around began, so a later change rewrites no history.
   @Column({ name: 'required_readings', type: 'jsonb', default: [] })

@@ -7,9 +7,9 @@ import {
   type TrainingAttemptStatus,
 } from '@yardcall/shared';
 import { Column, Entity, Index, JoinColumn, ManyToOne } from 'typeorm';
-import type { InspectionVehicleSnapshot } from '../../inspections/entities/inspection.entity';
 import { EditableOrganizationOwned } from '../../organizations/entities/organization-owned';
 import { User } from '../../users/entities/user.entity';
+import type { VehicleSnapshot } from '../../vehicles/vehicle-checklist';
 
 // A segment as stored: its sequence number keeps a batch sent twice from adding it twice.
 export interface StoredSegment extends NarrationSegment {
@@ -47,7 +47,7 @@ export class TrainingAttempt extends EditableOrganizationOwned {
 
   // The vehicles as configured when the attempt began: the checklist is rebuilt from this.
   @Column({ type: 'jsonb' })
-  vehicles: InspectionVehicleSnapshot[];
+  vehicles: VehicleSnapshot[];
 
   @Column({ name: 'started_at', type: 'timestamptz' })
   startedAt: Date;
