@@ -11,5 +11,7 @@ import { MailModule } from '../mail/mail.module';
   imports: [TypeOrmModule.forFeature([Defect, Repair]), MailModule],
   controllers: [DefectsController],
   providers: [DefectsService, SafetyDefectAlerts],
+  // Inspections open a submitted report's defects through DefectsService.openFromReport.
+  exports: [DefectsService],
 })
 export class DefectsModule {}

@@ -1,9 +1,10 @@
 import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
-import type { DefectResponse, FieldProblem } from '@yardcall/shared';
-import { DataSource } from 'typeorm';
+import type { ChecklistItem, DefectResponse, FieldProblem, InspectionSummary } from '@yardcall/shared';
+import { DataSource, type EntityManager } from 'typeorm';
 import type { AuthUser } from '../auth/auth-user';
 import { ApiValidationException } from '../common/api-validation.exception';
 import { Inspection } from '../inspections/entities/inspection.entity';
+import type { ItemResult } from '../inspections/entities/item-result.entity';
 import { Signature } from '../inspections/entities/signature.entity';
 import { mechanicStatement } from '../inspections/statements';
 import { toDefectResponses } from './defect-view';
@@ -11,12 +12,67 @@ import type { ListDefectsQuery, RepairRequestDto } from './dto/defect.dto';
 import { Defect } from './entities/defect.entity';
 import { Repair } from './entities/repair.entity';
 import { refreshVehicleStatus } from './vehicle-status';
+import { JOB_SAFETY_DEFECT_REPORTED, type SafetyDefectReportedJob } from '../jobs/job-names';
+import { JobsService } from '../jobs/jobs.service';
+
+// A report being submitted: its checklist, its stored answers and the shared summary of them.
+export interface SubmittedReport {
+  inspection: Inspection;
+  summary: InspectionSummary;
+  byKey: ReadonlyMap<string, ChecklistItem>;
+  results: readonly ItemResult[];
+}
 
 const LIST_MAX = 500;
 
 @Injectable()
 export class DefectsService {
-  constructor(private readonly dataSource: DataSource) {}
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly jobs: JobsService,
+  ) {}
+
+  // One open defect per finding of a submitted report, inside the submit's transaction. A safety defect
+  // takes its vehicle out of service, and the mechanics and supervisors hear of it exactly once (a job
+  // committed with the report).
+  async openFromReport(manager: EntityManager, report: SubmittedReport): Promise<Defect[]> {
+    const { inspection, summary, byKey } = report;
+    const rowByKey = new Map(report.results.map((r) => [r.itemKey, r]));
+    const defects = summary.defects.map((defect) => {
+      const item = byKey.get(defect.itemKey) as ChecklistItem;
+      const row = rowByKey.get(defect.itemKey);
+      const vehicle = inspection.vehicles[item.unitIndex] ?? inspection.vehicles[0]!;
+      return manager.create(Defect, {
+        organizationId: inspection.organizationId,
+        inspectionId: inspection.id,
+        vehicleId: vehicle.id,
+        itemKey: defect.itemKey,
+        title: defect.title.slice(0, 200),
+        positionLabel: defect.positionLabel.slice(0, 200),
+        // A safety item, or any out-of-limit measurement: both keep the vehicle parked until certified.
+        safety: defect.blocksDriving,
+        detail: defect.detail ?? null,
+        measurement: defect.measurement ?? null,
+        measurementLimit:
+          row && row.limitValue !== null && row.limitUnit !== null && row.limitSource !== null
+            ? { value: row.limitValue, unit: row.limitUnit, source: row.limitSource }
+            : null,
+        status: 'open',
+      });
+    });
+    if (defects.length === 0) return defects;
+    await manager.save(Defect, defects);
+    const safety = defects.filter((d) => d.safety);
+    await refreshVehicleStatus(
+      manager,
+      safety.map((d) => d.vehicleId),
+    );
+    if (safety.length > 0) {
+      const job: SafetyDefectReportedJob = { organizationId: inspection.organizationId, inspectionId: inspection.id };
+      await this.jobs.send(JOB_SAFETY_DEFECT_REPORTED, job, manager);
+    }
+    return defects;
+  }
 
   async list(user: AuthUser, query: ListDefectsQuery): Promise<DefectResponse[]> {
     const builder = this.dataSource.manager

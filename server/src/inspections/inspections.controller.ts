@@ -38,6 +38,8 @@ import {
 import { PutResultsDto, PutResultsResponseDto } from './dto/result.dto';
 import { SignatureResponseDto } from './dto/signature.dto';
 import { CSV_BOM, csvHeader, csvRows } from './inspections-csv';
+import { InspectionListService } from './inspection-list.service';
+import { InspectionResultsService } from './inspection-results.service';
 import { InspectionsService } from './inspections.service';
 
 @ApiTags('inspections')
@@ -46,6 +48,8 @@ import { InspectionsService } from './inspections.service';
 export class InspectionsController {
   constructor(
     private readonly inspections: InspectionsService,
+    private readonly results: InspectionResultsService,
+    private readonly listing: InspectionListService,
     private readonly acknowledgements: AcknowledgementsService,
   ) {}
 
@@ -78,7 +82,7 @@ export class InspectionsController {
   @ApiOkResponse({ type: InspectionPageDto })
   @ApiBadRequestResponse({ type: ApiErrorBodyDto })
   list(@CurrentUser() user: AuthUser, @Query() query: ListInspectionsQuery): Promise<InspectionPage> {
-    return this.inspections.list(user, query);
+    return this.listing.list(user, query);
   }
 
   @Get('export.csv')
@@ -94,7 +98,7 @@ export class InspectionsController {
     @Query() query: ListInspectionsQuery,
     @Res() response: Response,
   ): Promise<void> {
-    const pages = this.inspections.listAll(user, query, INSPECTION_CSV_MAX_ROWS);
+    const pages = this.listing.listAll(user, query, INSPECTION_CSV_MAX_ROWS);
     // The first page before any byte is sent, so a wrong filter still answers a plain 400.
     const first = await pages.next();
     const day = new Date().toISOString().slice(0, 10);
@@ -137,7 +141,7 @@ export class InspectionsController {
     @UuidParam('id') id: string,
     @Body() body: PutResultsDto,
   ): Promise<PutResultsResponse> {
-    return { results: await this.inspections.putResults(user, id, body) };
+    return { results: await this.results.putResults(user, id, body) };
   }
 
   @Post(':id/submit')

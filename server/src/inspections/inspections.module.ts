@@ -1,5 +1,6 @@
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
+import { DefectsModule } from '../defects/defects.module';
 import { User } from '../users/entities/user.entity';
 import { Vehicle } from '../vehicles/entities/vehicle.entity';
 import { AcknowledgementsService } from './acknowledgements.service';
@@ -10,11 +11,24 @@ import { Signature } from './entities/signature.entity';
 import { InspectionAttachmentsRegistry } from './inspection-attachments';
 import { InspectionsController, VehicleAcknowledgementsController } from './inspections.controller';
 import { InspectionsService } from './inspections.service';
+import { InspectionChecklists } from './inspection-checklists';
+import { InspectionListService } from './inspection-list.service';
+import { InspectionResultsService } from './inspection-results.service';
 
 @Module({
-  imports: [TypeOrmModule.forFeature([Inspection, InspectionVehicle, ItemResult, Signature, Vehicle, User])],
+  imports: [
+    TypeOrmModule.forFeature([Inspection, InspectionVehicle, ItemResult, Signature, Vehicle, User]),
+    DefectsModule,
+  ],
   controllers: [InspectionsController, VehicleAcknowledgementsController],
-  providers: [InspectionsService, AcknowledgementsService, InspectionAttachmentsRegistry],
+  providers: [
+    InspectionsService,
+    InspectionResultsService,
+    InspectionListService,
+    InspectionChecklists,
+    AcknowledgementsService,
+    InspectionAttachmentsRegistry,
+  ],
   // Notes and photos register with the registry and check access through InspectionsService.findEditable/findReadable.
   exports: [InspectionsService, InspectionAttachmentsRegistry],
 })
