@@ -1,7 +1,7 @@
 import '@fontsource/atkinson-hyperlegible/400.css';
 import '@fontsource/atkinson-hyperlegible/700.css';
 import './index.css';
-import { StrictMode } from 'react';
+import { StrictMode, startTransition } from 'react';
 import { createRoot } from 'react-dom/client';
 import { App } from '@/app/app';
 import { applyDisplaySettings, readCachedDisplaySettings } from '@/lib/display-settings';
@@ -14,8 +14,12 @@ applyDisplaySettings(readCachedDisplaySettings());
 const root = document.getElementById('root');
 if (!root) throw new Error('index.html has no #root element.');
 registerAppServiceWorker();
-createRoot(root).render(
-  <StrictMode>
-    <App />
-  </StrictMode>,
-);
+// A transition: React renders the first screen in slices and lets the phone answer in between,
+// rather than in one long task.
+startTransition(() => {
+  createRoot(root).render(
+    <StrictMode>
+      <App />
+    </StrictMode>,
+  );
+});

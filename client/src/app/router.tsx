@@ -3,6 +3,7 @@ import type { ComponentType } from 'react';
 import type { LoaderFunction, LoaderFunctionArgs, RouteObject } from 'react-router';
 import type { Role } from '@yardcall/shared';
 import { loadWords, type WordPart } from '@/lib/i18n/load-words';
+import { SignInRoute } from '@/features/auth/routes/sign-in';
 import { AppShell } from './layout/app-shell';
 import { RootError, RouteError, RouteLoading } from './layout/route-status';
 import { NotFound } from './layout/not-found';
@@ -14,9 +15,9 @@ interface ScreenModule {
   loader?: LoaderFunction;
 }
 
-// The driver's home, start and walk-around need only the words the root loads (the core and the
-// driver part); every other screen loads its part with its code.
-const DRIVER_WORDS: WordPart[] = [];
+// The root loads the core words (the shell's and the sign-in's among them); every screen loads
+// its part with its code.
+const DRIVER_WORDS: WordPart[] = ['driver'];
 const FINISH_WORDS: WordPart[] = ['finish'];
 const OFFICE_WORDS: WordPart[] = ['screens'];
 
@@ -67,9 +68,9 @@ export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
   return [
     {
       path: '/',
-      // The shell's and the driver's words (sign-in, settings and the user menu among them).
+      // The core words in the driver's language (English ones come with the page).
       loader: async () => {
-        await loadWords('core', 'driver');
+        await loadWords('core');
         return null;
       },
       Component: AppShell,
@@ -81,7 +82,9 @@ export function createAppRoutes(queryClient: QueryClient): RouteObject[] {
           ErrorBoundary: RouteError,
           children: [
             { index: true, loader: redirectToRoleHome(queryClient) },
-            publicScreen('sign-in', async () => (await import('@/features/auth/routes/sign-in')).SignInRoute),
+            // With the page itself, not a chunk of its own: a cold first visit paints it without a
+            // second round trip.
+            { path: 'sign-in', Component: SignInRoute },
             publicScreen(
               'invite/:token',
               async () => (await import('@/features/auth/routes/accept-invitation')).AcceptInvitationRoute,
