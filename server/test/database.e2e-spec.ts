@@ -51,15 +51,17 @@ describe('database', () => {
     const expectedUsers = SEED_ORGANIZATIONS.reduce((n, o) => n + o.users.length, 0);
     const expectedVehicles = SEED_ORGANIZATIONS.reduce((n, o) => n + o.vehicles.length, 0);
     if (record!.tablesBefore === 0) {
-      expect(record!.firstSeed).toEqual({
+      expect(record!.firstSeed).toMatchObject({
         organizations: SEED_ORGANIZATIONS.length,
         users: expectedUsers,
         vehicles: expectedVehicles,
-        // The demo report of KV-103 (seed-inspections.ts).
-        inspections: 1,
+        // The demo organisation's history (seed-history.ts): weeks of walk-arounds with notes, a photo
+        // and two practice attempts.
+        history: { voiceNotes: 3, photos: 1, trainingAttempts: 2 },
       });
+      expect(record!.firstSeed.inspections).toBeGreaterThan(100);
     }
-    expect(record!.secondSeed).toEqual({ organizations: 0, users: 0, vehicles: 0, inspections: 0 });
+    expect(record!.secondSeed).toEqual({ organizations: 0, users: 0, vehicles: 0, inspections: 0, history: null });
     expect(record!.countsAfterSecond).toEqual(record!.countsAfterFirst);
   });
 
@@ -71,7 +73,13 @@ describe('database', () => {
                 (SELECT json_agg(v ORDER BY v.id) FROM vehicles v) AS vehicles`,
       );
     const before = await snapshot();
-    await expect(seed(dataSource)).resolves.toEqual({ organizations: 0, users: 0, vehicles: 0, inspections: 0 });
+    await expect(seed(dataSource)).resolves.toEqual({
+      organizations: 0,
+      users: 0,
+      vehicles: 0,
+      inspections: 0,
+      history: null,
+    });
     expect(await snapshot()).toEqual(before);
   });
 });

@@ -74,7 +74,7 @@ function readUrl(raw: Record<string, unknown>, name: string, protocols: string[]
 const S3_REQUIRED = ['S3_ENDPOINT', 'S3_BUCKET', 'S3_ACCESS_KEY_ID', 'S3_SECRET_ACCESS_KEY'] as const;
 
 // Any S3_* variable switches to the S3-compatible store, which then needs all four; else STORAGE_DIR.
-function readStorageEnv(raw: Record<string, unknown>): StorageEnv {
+export function readStorageEnv(raw: Record<string, unknown>): StorageEnv {
   const anyS3 = [...S3_REQUIRED, 'S3_REGION'].some((name) => readString(raw, name) !== undefined);
   if (!anyS3) {
     const dir = readString(raw, 'STORAGE_DIR');

@@ -25,6 +25,8 @@ export interface SeedOrganization {
   name: string;
   users: SeedUser[];
   vehicles: SeedVehicle[];
+  // Whether the seed writes the demo history (seed-history.ts) into this organisation.
+  history?: boolean;
 }
 
 const STEERING_20_POWER = { wheelDiameterIn: 20, type: 'power' } as const;
@@ -72,6 +74,7 @@ function trailerAxle(
 export const SEED_ORGANIZATIONS: SeedOrganization[] = [
   {
     name: 'Kestrel Valley Freight',
+    history: true,
     users: [
       { email: 'driver@yardcall.test', name: 'Dana Okafor', role: 'driver' },
       { email: 'mechanic@yardcall.test', name: 'Rui Almeida', role: 'mechanic' },

@@ -4,21 +4,38 @@ import { hashPassword } from '../auth/password';
 import { Organization } from '../organizations/entities/organization.entity';
 import { User } from '../users/entities/user.entity';
 import { Vehicle } from '../vehicles/entities/vehicle.entity';
+import { readStorageEnv } from '../config/env.validation';
+import { LocalObjectStorage } from '../storage/local-object-storage';
+import type { ObjectStorage } from '../storage/object-storage';
+import { createS3Client, S3ObjectStorage } from '../storage/s3-object-storage';
 import { buildDataSourceOptions } from './data-source';
-import { seedDemoInspection } from './seed-inspections';
 import { DEMO_PASSWORD, SEED_ORGANIZATIONS } from './seed-data';
+import { seedDemoHistory, type HistoryCounts } from './seed-history';
 
 export interface SeedResult {
   organizations: number;
   users: number;
   vehicles: number;
   inspections: number;
+  // What the demo history added (its item results, defects, notes, photos, practice attempts).
+  history: Omit<HistoryCounts, 'inspections'> | null;
+}
+
+// Where the demo history's voice notes and photos go: the store the server is configured with.
+export async function storageFromEnv(env: Record<string, unknown> = process.env): Promise<ObjectStorage> {
+  const settings = readStorageEnv(env);
+  if (settings.driver === 's3') return new S3ObjectStorage(createS3Client(settings), settings.bucket);
+  const local = new LocalObjectStorage(settings.dir);
+  await local.ensureRoot();
+  return local;
 }
 
 // Idempotent: finds each organisation, user and vehicle by its natural key and creates only what is missing;
-// existing rows are left exactly as they are (a second run changes nothing).
-export async function seed(dataSource: DataSource): Promise<SeedResult> {
-  const created: SeedResult = { organizations: 0, users: 0, vehicles: 0, inspections: 0 };
+// existing rows are left exactly as they are (a second run changes nothing). The demo organisation also
+// gets its history once (seed-history.ts).
+export async function seed(dataSource: DataSource, storage?: ObjectStorage, now = new Date()): Promise<SeedResult> {
+  const created: SeedResult = { organizations: 0, users: 0, vehicles: 0, inspections: 0, history: null };
+  const store = storage ?? (await storageFromEnv());
   const passwordHash = await hashPassword(DEMO_PASSWORD);
   await dataSource.transaction(async (manager) => {
     for (const spec of SEED_ORGANIZATIONS) {
@@ -67,7 +84,13 @@ export async function seed(dataSource: DataSource): Promise<SeedResult> {
         );
         created.vehicles += 1;
       }
-      created.inspections += await seedDemoInspection(manager, organization.id);
+      if (!spec.history) continue;
+      const history = await seedDemoHistory(manager, organization.id, store, now);
+      if (history) {
+        const { inspections, ...rest } = history;
+        created.inspections += inspections;
+        created.history = rest;
+      }
     }
   });
   return created;
@@ -78,9 +101,13 @@ async function main(): Promise<void> {
   if (!databaseUrl) throw new Error('DATABASE_URL is required, e.g. postgres://postgres@127.0.0.1:54400/yardcall.');
   const dataSource = await new DataSource(buildDataSourceOptions(databaseUrl)).initialize();
   try {
+    const started = Date.now();
     const created = await seed(dataSource);
+    const history = created.history
+      ? ` (${created.history.itemResults} answers, ${created.history.defects} defects, ${created.history.voiceNotes} voice notes, ${created.history.photos} photos, ${created.history.trainingAttempts} practice walk-arounds)`
+      : '';
     console.log(
-      `Seed done: created ${created.organizations} organisations, ${created.users} users, ${created.vehicles} vehicles, ${created.inspections} demo reports (existing rows untouched). Demo password: ${DEMO_PASSWORD}`,
+      `Seed done in ${((Date.now() - started) / 1000).toFixed(1)} s: created ${created.organizations} organisations, ${created.users} users, ${created.vehicles} vehicles, ${created.inspections} demo reports${history} (existing rows untouched). Demo password: ${DEMO_PASSWORD}`,
     );
   } finally {
     await dataSource.destroy();
