@@ -1,6 +1,7 @@
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { DefectsModule } from '../defects/defects.module';
+import { NotesModule } from '../notes/notes.module';
 import { User } from '../users/entities/user.entity';
 import { Vehicle } from '../vehicles/entities/vehicle.entity';
 import { AcknowledgementsService } from './acknowledgements.service';
@@ -8,28 +9,29 @@ import { InspectionVehicle } from './entities/inspection-vehicle.entity';
 import { Inspection } from './entities/inspection.entity';
 import { ItemResult } from './entities/item-result.entity';
 import { Signature } from './entities/signature.entity';
-import { InspectionAttachmentsRegistry } from './inspection-attachments';
-import { InspectionsController, VehicleAcknowledgementsController } from './inspections.controller';
-import { InspectionsService } from './inspections.service';
+import { InspectionAttachmentsController } from './inspection-attachments.controller';
 import { InspectionChecklists } from './inspection-checklists';
 import { InspectionListService } from './inspection-list.service';
 import { InspectionResultsService } from './inspection-results.service';
+import { InspectionsController, VehicleAcknowledgementsController } from './inspections.controller';
+import { InspectionsService } from './inspections.service';
 
+// Every /inspections route. Notes and photos are kept by NotesModule, defects opened by DefectsModule;
+// neither imports this module.
 @Module({
   imports: [
     TypeOrmModule.forFeature([Inspection, InspectionVehicle, ItemResult, Signature, Vehicle, User]),
     DefectsModule,
+    NotesModule,
   ],
-  controllers: [InspectionsController, VehicleAcknowledgementsController],
+  controllers: [InspectionsController, InspectionAttachmentsController, VehicleAcknowledgementsController],
   providers: [
     InspectionsService,
     InspectionResultsService,
     InspectionListService,
     InspectionChecklists,
     AcknowledgementsService,
-    InspectionAttachmentsRegistry,
   ],
-  // Notes and photos register with the registry and check access through InspectionsService.findEditable/findReadable.
-  exports: [InspectionsService, InspectionAttachmentsRegistry],
+  exports: [InspectionsService],
 })
 export class InspectionsModule {}

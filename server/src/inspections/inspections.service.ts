@@ -1,11 +1,10 @@
-import { ConflictException, Injectable } from '@nestjs/common';
+import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import {
   DEFAULT_DISPLAY_SETTINGS,
   rushedFlag,
   summarizeInspection,
   walkedRoute,
-  type Checklist,
   type InspectionResponse,
 } from '@yardcall/shared';
 import { DataSource, Repository } from 'typeorm';
@@ -15,6 +14,7 @@ import { isUniqueViolation } from '../common/database-errors';
 import { DefectsService } from '../defects/defects.service';
 import { toDefectResponses } from '../defects/defect-view';
 import { Defect } from '../defects/entities/defect.entity';
+import { NotesService, type AttachmentTarget } from '../notes/notes.service';
 import { Organization } from '../organizations/entities/organization.entity';
 import { User } from '../users/entities/user.entity';
 import { Vehicle } from '../vehicles/entities/vehicle.entity';
@@ -25,8 +25,7 @@ import { InspectionVehicle } from './entities/inspection-vehicle.entity';
 import { Inspection } from './entities/inspection.entity';
 import { ItemResult } from './entities/item-result.entity';
 import { Signature } from './entities/signature.entity';
-import { assertEditable, findReadableInspection } from './inspection-access';
-import { InspectionAttachmentsRegistry } from './inspection-attachments';
+import { assertEditable, findReadableInspection, INSPECTION_NOT_FOUND } from './inspection-access';
 import { InspectionChecklists } from './inspection-checklists';
 import { toListItem, toResultResponse, toSharedResult, toSignatureResponse } from './inspection-view';
 import { recurringDefectsOf } from './review';
@@ -56,7 +55,7 @@ export class InspectionsService {
     @InjectRepository(User) private readonly users: Repository<User>,
     private readonly dataSource: DataSource,
     private readonly checklists: InspectionChecklists,
-    private readonly attachments: InspectionAttachmentsRegistry,
+    private readonly notes: NotesService,
     private readonly acknowledgements: AcknowledgementsService,
     private readonly defects: DefectsService,
   ) {}
@@ -138,15 +137,13 @@ export class InspectionsService {
     return findReadableInspection(this.inspections, user, id);
   }
 
-  // The caller's own inspection while it is in progress, with its checklist (also for attachments).
-  async findEditable(user: AuthUser, id: string): Promise<{ inspection: Inspection; checklist: Checklist }> {
+  // Where a voice note or photo goes: the caller's own inspection (404 for anyone else's), with its
+  // checklist while in progress. Once submitted, `editable` is null: a retried upload may still be answered.
+  async findAttachmentTarget(user: AuthUser, id: string): Promise<AttachmentTarget> {
     const inspection = await this.inspections.findOneBy({ id, organizationId: user.organizationId, driverId: user.id });
-    return this.editable(inspection);
-  }
-
-  private editable(found: Inspection | null): { inspection: Inspection; checklist: Checklist } {
-    const inspection = assertEditable(found);
-    return { inspection, checklist: this.checklistOf(inspection).checklist };
+    if (!inspection) throw new NotFoundException(INSPECTION_NOT_FOUND);
+    if (inspection.status === 'submitted') return { inspectionId: id, editable: null };
+    return { inspectionId: id, editable: { inspection, checklist: this.checklistOf(inspection).checklist } };
   }
 
   async submit(user: AuthUser, id: string, dto: SubmitInspectionDto): Promise<InspectionResponse> {
@@ -211,7 +208,7 @@ export class InspectionsService {
         relations: { signer: true },
         order: { signedAt: 'ASC', id: 'ASC' },
       }),
-      this.attachments.collect(inspection.id),
+      this.notes.attachmentsOf(inspection.id),
     ]);
     const { checklist } = this.checklistOf(inspection);
     const order = new Map(checklist.items.map((item, index) => [item.key, index]));

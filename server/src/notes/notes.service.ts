@@ -1,4 +1,4 @@
-import { ConflictException, Inject, Injectable, NotFoundException, type OnModuleInit } from '@nestjs/common';
+import { ConflictException, Inject, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import type { Checklist, PhotoResponse, VoiceNoteResponse } from '@yardcall/shared';
 import { randomUUID } from 'node:crypto';
@@ -6,13 +6,8 @@ import { Repository, type FindOptionsWhere } from 'typeorm';
 import type { AuthUser } from '../auth/auth-user';
 import { ApiValidationException } from '../common/api-validation.exception';
 import { isUniqueViolation } from '../common/database-errors';
-import {
-  InspectionAttachmentsRegistry,
-  type InspectionAttachments,
-  type InspectionAttachmentSource,
-} from '../inspections/inspection-attachments';
-import { InspectionsService } from '../inspections/inspections.service';
-import type { Inspection } from '../inspections/entities/inspection.entity';
+import { Inspection } from '../inspections/entities/inspection.entity';
+import { findReadableInspection } from '../inspections/inspection-access';
 import { OBJECT_STORAGE, type ObjectStorage } from '../storage/object-storage';
 import type { PhotoUploadDto, VoiceNoteUploadDto } from './dto/upload.dto';
 import { Photo } from './entities/photo.entity';
@@ -20,6 +15,19 @@ import { VoiceNote } from './entities/voice-note.entity';
 import { checkUpload, type CheckedUpload } from '../uploads/check-upload';
 import { PHOTO_MEDIA, VOICE_NOTE_MEDIA, type MediaKind } from '../uploads/media-types';
 import type { ServedObject } from '../uploads/serve-object';
+
+// The inspection an upload goes to, as the inspections module found it for the caller: with its
+// checklist while in progress, `editable` null once submitted.
+export interface AttachmentTarget {
+  inspectionId: string;
+  editable: { inspection: Inspection; checklist: Checklist } | null;
+}
+
+// An inspection's notes and photos, shown with it.
+export interface InspectionAttachments {
+  notes: VoiceNoteResponse[];
+  photos: PhotoResponse[];
+}
 
 export interface UploadResult<T> {
   record: T;
@@ -110,27 +118,21 @@ const UNIQUE_PHOTO = 'UQ_photos_inspection_client';
 
 // Voice notes and defect photos: checked by content, kept in ObjectStorage, idempotent on clientId.
 @Injectable()
-export class NotesService implements InspectionAttachmentSource, OnModuleInit {
+export class NotesService {
   constructor(
     @InjectRepository(VoiceNote) private readonly notes: Repository<VoiceNote>,
     @InjectRepository(Photo) private readonly photos: Repository<Photo>,
-    private readonly inspections: InspectionsService,
-    private readonly attachments: InspectionAttachmentsRegistry,
+    @InjectRepository(Inspection) private readonly inspections: Repository<Inspection>,
     @Inject(OBJECT_STORAGE) private readonly storage: ObjectStorage,
   ) {}
 
-  // GET /inspections/:id then lists this module's notes and photos.
-  onModuleInit(): void {
-    this.attachments.register(this);
-  }
-
   async addVoiceNote(
-    user: AuthUser,
-    inspectionId: string,
+    target: AttachmentTarget,
     dto: VoiceNoteUploadDto,
     file: Express.Multer.File | undefined,
   ): Promise<UploadResult<VoiceNoteResponse>> {
-    return this.storeUpload(user, inspectionId, dto, file, {
+    const { inspectionId } = target;
+    return this.storeUpload(target, dto, file, {
       kind: VOICE_NOTE_MEDIA,
       folder: 'notes',
       uniqueIndex: UNIQUE_NOTE,
@@ -143,12 +145,12 @@ export class NotesService implements InspectionAttachmentSource, OnModuleInit {
   }
 
   async addPhoto(
-    user: AuthUser,
-    inspectionId: string,
+    target: AttachmentTarget,
     dto: PhotoUploadDto,
     file: Express.Multer.File | undefined,
   ): Promise<UploadResult<PhotoResponse>> {
-    return this.storeUpload(user, inspectionId, dto, file, {
+    const { inspectionId } = target;
+    return this.storeUpload(target, dto, file, {
       kind: PHOTO_MEDIA,
       folder: 'photos',
       uniqueIndex: UNIQUE_PHOTO,
@@ -159,7 +161,7 @@ export class NotesService implements InspectionAttachmentSource, OnModuleInit {
     });
   }
 
-  // Whoever may read the inspection may listen (InspectionsService.findReadable); to anyone else,
+  // Whoever may read the inspection may listen (findReadableInspection); to anyone else,
   // including another organisation, the note does not exist.
   async voiceNoteAudio(user: AuthUser, id: string): Promise<ServedObject> {
     const note = await this.notes.findOneBy({ id, organizationId: user.organizationId });
@@ -175,8 +177,8 @@ export class NotesService implements InspectionAttachmentSource, OnModuleInit {
     return { objectKey: photo.objectKey, sizeBytes: photo.sizeBytes, mimeType: photo.mimeType, label: 'photo' };
   }
 
-  // For GET /inspections/:id (through InspectionAttachmentsRegistry): the inspection's notes and
-  // photos in the order they were made. The caller has already checked who may read the inspection.
+  // For GET /inspections/:id: the inspection's notes and photos in the order they were made. The
+  // caller has already checked who may read the inspection.
   async attachmentsOf(inspectionId: string): Promise<InspectionAttachments> {
     const [notes, photos] = await Promise.all([
       this.notes.find({ where: { inspectionId }, order: { createdAt: 'ASC', id: 'ASC' } }),
@@ -188,18 +190,18 @@ export class NotesService implements InspectionAttachmentSource, OnModuleInit {
   // The steps every upload shares: the stored record for a retried clientId, else the file kept in
   // ObjectStorage under <folder>/<inspection>/<id> and its row saved.
   private async storeUpload<E extends StoredUpload, R>(
-    user: AuthUser,
-    inspectionId: string,
+    target: AttachmentTarget,
     dto: { itemKey: string; clientId: string },
     file: Express.Multer.File | undefined,
     upload: UploadKind<E, R>,
   ): Promise<UploadResult<R>> {
     const { repository, where, toResponse } = upload;
-    const prepared = await this.prepare(user, inspectionId, file, upload.kind, () => repository.findOneBy(where));
+    const prepared = await this.prepare(target, file, upload.kind, () => repository.findOneBy(where));
     if (!('checked' in prepared)) return { record: toResponse(prepared.existing), created: false };
     const { inspection, checklist, checked } = prepared;
     assertOnChecklist(checklist, dto.itemKey);
 
+    const { inspectionId } = target;
     const id = randomUUID();
     const objectKey = `${upload.folder}/${inspectionId}/${id}.${checked.extension}`;
     await this.storage.put(objectKey, checked.buffer, { contentType: checked.mimeType });
@@ -228,7 +230,7 @@ export class NotesService implements InspectionAttachmentSource, OnModuleInit {
 
   private async mayRead(user: AuthUser, inspectionId: string): Promise<boolean> {
     try {
-      await this.inspections.findReadable(user, inspectionId);
+      await findReadableInspection(this.inspections, user, inspectionId);
       return true;
     } catch (error) {
       if (error instanceof NotFoundException) return false;
@@ -236,21 +238,17 @@ export class NotesService implements InspectionAttachmentSource, OnModuleInit {
     }
   }
 
-  // The caller's own inspection in progress (InspectionsService.findEditable: 404 for anyone else's)
-  // and the checked file. A record already stored under the clientId is answered even after the
-  // inspection was submitted: the client may be retrying an upload whose answer it lost.
+  // The inspection in progress (the target) and the checked file. A record already stored under the
+  // clientId is answered even after the inspection was submitted: the client may be retrying an upload
+  // whose answer it lost.
   private async prepare<T extends StoredUpload>(
-    user: AuthUser,
-    inspectionId: string,
+    target: AttachmentTarget,
     file: Express.Multer.File | undefined,
     kind: MediaKind<string>,
     findStored: () => Promise<T | null>,
   ): Promise<Prepared<T>> {
-    let editable: { inspection: Inspection; checklist: Checklist };
-    try {
-      editable = await this.inspections.findEditable(user, inspectionId);
-    } catch (error) {
-      if (!(error instanceof ConflictException)) throw error;
+    const { editable } = target;
+    if (!editable) {
       const stored = await findStored();
       if (!stored) {
         throw new ConflictException(`This inspection has been submitted: ${kind.label} can no longer be added to it.`);

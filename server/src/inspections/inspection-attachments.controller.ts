@@ -1,0 +1,106 @@
+import { Body, Controller, HttpStatus, Post, Res, UploadedFile, UseInterceptors } from '@nestjs/common';
+import {
+  ApiBadRequestResponse,
+  ApiBearerAuth,
+  ApiBody,
+  ApiConflictResponse,
+  ApiConsumes,
+  ApiCreatedResponse,
+  ApiNotFoundResponse,
+  ApiOperation,
+  ApiPayloadTooLargeResponse,
+  ApiTags,
+} from '@nestjs/swagger';
+import type { PhotoResponse, VoiceNoteResponse } from '@yardcall/shared';
+import type { Response } from 'express';
+import type { AuthUser } from '../auth/auth-user';
+import { CurrentUser } from '../auth/decorators/current-user.decorator';
+import { Roles } from '../auth/decorators/roles.decorator';
+import { ApiErrorBodyDto } from '../common/dto/api-error-body.dto';
+import { UuidParam } from '../common/uuid-param';
+import { PhotoResponseDto, PhotoUploadDto, VoiceNoteResponseDto, VoiceNoteUploadDto } from '../notes/dto/upload.dto';
+import { NotesService, type UploadResult } from '../notes/notes.service';
+import { PHOTO_MEDIA, VOICE_NOTE_MEDIA } from '../uploads/media-types';
+import { formatBytes, multipartBody, UploadInterceptor } from '../uploads/upload.interceptor';
+import { InspectionsService } from './inspections.service';
+
+const ITEM_FIELDS = { itemKey: { type: 'string' }, clientId: { type: 'string' } };
+
+// 201 for a new upload, 200 when the same clientId had already stored it.
+function answer<T>(response: Response, result: UploadResult<T>): T {
+  response.status(result.created ? HttpStatus.CREATED : HttpStatus.OK);
+  return result.record;
+}
+
+// Voice notes and photos added to a walk-around: the inspections module finds the caller's inspection,
+// the notes module keeps the files (tagged "notes" in the API document, as they always were).
+@ApiTags('notes')
+@ApiBearerAuth()
+@Controller('inspections')
+export class InspectionAttachmentsController {
+  constructor(
+    private readonly inspections: InspectionsService,
+    private readonly notes: NotesService,
+  ) {}
+
+  @Post(':id/notes')
+  @Roles('driver')
+  @UseInterceptors(UploadInterceptor(VOICE_NOTE_MEDIA))
+  @ApiOperation({
+    // The operation ids these routes had before they moved here: the API document stays the same.
+    operationId: 'NotesController_addNote',
+    summary: `Add a voice note at a checklist item: the inspection's driver, while it is in progress. The audio is judged by its content (${VOICE_NOTE_MEDIA.acceptedNames}, at most ${formatBytes(VOICE_NOTE_MEDIA.maxBytes)}). Sent again with the same clientId, it answers the stored note.`,
+  })
+  @ApiConsumes('multipart/form-data')
+  @ApiBody(
+    multipartBody({ ...ITEM_FIELDS, durationMs: { type: 'integer' }, heard: { type: 'string' } }, [
+      'itemKey',
+      'clientId',
+      'durationMs',
+    ]),
+  )
+  @ApiCreatedResponse({ type: VoiceNoteResponseDto, description: 'Stored; 200 with the same body when sent again.' })
+  @ApiBadRequestResponse({ type: ApiErrorBodyDto, description: 'Empty, not audio, or a field is wrong.' })
+  @ApiPayloadTooLargeResponse({ type: ApiErrorBodyDto })
+  @ApiNotFoundResponse({ type: ApiErrorBodyDto, description: "No such inspection of the caller's own." })
+  @ApiConflictResponse({ type: ApiErrorBodyDto, description: 'Submitted already, or the clientId names another file.' })
+  async addNote(
+    @CurrentUser() user: AuthUser,
+    @UuidParam('id') id: string,
+    @Body() body: VoiceNoteUploadDto,
+    @UploadedFile() file: Express.Multer.File | undefined,
+    @Res({ passthrough: true }) response: Response,
+  ): Promise<VoiceNoteResponse> {
+    return answer(
+      response,
+      await this.notes.addVoiceNote(await this.inspections.findAttachmentTarget(user, id), body, file),
+    );
+  }
+
+  @Post(':id/photos')
+  @Roles('driver')
+  @UseInterceptors(UploadInterceptor(PHOTO_MEDIA))
+  @ApiOperation({
+    operationId: 'NotesController_addPhoto',
+    summary: `Add a photo at a checklist item: the inspection's driver, while it is in progress. The image is judged by its content (${PHOTO_MEDIA.acceptedNames}, at most ${formatBytes(PHOTO_MEDIA.maxBytes)}). Sent again with the same clientId, it answers the stored photo.`,
+  })
+  @ApiConsumes('multipart/form-data')
+  @ApiBody(multipartBody(ITEM_FIELDS, ['itemKey', 'clientId']))
+  @ApiCreatedResponse({ type: PhotoResponseDto, description: 'Stored; 200 with the same body when sent again.' })
+  @ApiBadRequestResponse({ type: ApiErrorBodyDto, description: 'Empty, not an image we take, or a field is wrong.' })
+  @ApiPayloadTooLargeResponse({ type: ApiErrorBodyDto })
+  @ApiNotFoundResponse({ type: ApiErrorBodyDto, description: "No such inspection of the caller's own." })
+  @ApiConflictResponse({ type: ApiErrorBodyDto, description: 'Submitted already, or the clientId names another file.' })
+  async addPhoto(
+    @CurrentUser() user: AuthUser,
+    @UuidParam('id') id: string,
+    @Body() body: PhotoUploadDto,
+    @UploadedFile() file: Express.Multer.File | undefined,
+    @Res({ passthrough: true }) response: Response,
+  ): Promise<PhotoResponse> {
+    return answer(
+      response,
+      await this.notes.addPhoto(await this.inspections.findAttachmentTarget(user, id), body, file),
+    );
+  }
+}
