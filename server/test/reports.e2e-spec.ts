@@ -1,6 +1,15 @@
 import {
+  buildChecklist,
+  formatZonedTime,
   safetyCaution,
+  sampleTractor,
+  sampleTrailer,
+  summarizeInspection,
+  type Checklist,
   type ChecklistItem,
+  type InspectionResponse,
+  type PendingAcknowledgement,
+  type VehicleResponse,
   type DefectResponse,
   type ItemResultResponse,
   type Role,
@@ -13,6 +22,7 @@ import { pathBounds } from '../src/reports/signature-drawing';
 import {
   bearer,
   binary,
+  bodyOf,
   createVehicle,
   errorBody,
   OTHER_ORG_ADMIN,
@@ -27,6 +37,39 @@ import { makePng } from './media-fixtures';
 import { pdfText, squash } from './pdf-text';
 
 const PNG_DRAWING = `data:image/png;base64,${makePng().toString('base64')}`;
+
+// The tractor and trailer of the hand-made reports: 281 items.
+function tractorAndTrailer(): Checklist {
+  return buildChecklist(
+    [
+      { id: randomUUID(), unitNumber: 'KV-118', kind: 'tractor', config: sampleTractor().config },
+      { id: randomUUID(), unitNumber: 'KV-T40', kind: 'trailer', config: sampleTrailer().config },
+    ],
+    'pre_trip',
+    'en',
+  );
+}
+
+// Finds each stop's label, then each of its items' titles, in walk-around order in the text.
+function missingInOrder(text: string, checklist: Checklist): string[] {
+  const squashed = squash(text);
+  const titleOf = new Map(checklist.items.map((i) => [i.key, i.title]));
+  const missing: string[] = [];
+  let cursor = 0;
+  for (const stop of checklist.stops) {
+    const at = squashed.indexOf(squash(stop.label), cursor);
+    if (at < 0) {
+      missing.push(stop.label);
+      continue;
+    }
+    cursor = at;
+    for (const key of stop.itemKeys) {
+      const found = squashed.indexOf(squash(titleOf.get(key) ?? key), cursor);
+      if (found < 0) missing.push(`${stop.label}: ${titleOf.get(key) ?? key}`);
+    }
+  }
+  return missing;
+}
 
 function treadDefect(): DefectResponse {
   return {
@@ -101,6 +144,7 @@ function handMadeReport(defects: DefectResponse[]): InspectionReport {
       results: [heard],
       notes: [note],
       requiredReadings: [],
+      checklist: tractorAndTrailer(),
       summary: { fixedOnTheSpot: [], checkedWithoutReading: [], noGauge: [] },
     },
     signatures: [
@@ -290,7 +334,6 @@ describe('inspection report PDF: readings and fixes on the spot', () => {
     for (const expected of [
       'Required readings: every tire pressure, with a gauge',
       'Measured checks passed without a reading (2): no gauge 1, checked without a reading 1.',
-      'Tread depth: Tractor, axle 2, right outer tire: checked without a reading',
       'Tire pressure: Tractor, axle 2, right outer tire: no gauge (reading required)',
     ]) {
       expect({ expected, found: text.includes(squash(expected)) }).toEqual({ expected, found: true });
@@ -302,6 +345,91 @@ describe('inspection report PDF: readings and fixes on the spot', () => {
     expect(plain).toContain(squash('Required readings: none (a measured check may be passed without a reading)'));
     expect(plain).toContain(squash('Every measured check that was passed has its reading.'));
     expect(plain).not.toContain(squash('Fixed on the spot'));
+  });
+});
+
+// A clean tractor and trailer: every item passed, measured checks by eye, one stop every 14 s.
+function cleanReport(timeZone: string): InspectionReport {
+  const report = handMadeReport([]);
+  const checklist = tractorAndTrailer();
+  const start = Date.parse('2026-11-03T12:02:00.000Z');
+  const results: ItemResultResponse[] = checklist.stops.flatMap((stop, n) =>
+    stop.itemKeys.map((key) => {
+      const item = checklist.items.find((i) => i.key === key)!;
+      return {
+        id: randomUUID(),
+        clientId: key,
+        itemKey: key,
+        answer: 'pass' as const,
+        measurement: null,
+        verdict: null,
+        limit: null,
+        noReading: item.expects.type === 'measure' ? ('visual' as const) : null,
+        fixed: null,
+        detail: null,
+        heard: 'all good',
+        confidence: 0.9,
+        answeredAt: new Date(start + (n + 1) * 14_000).toISOString(),
+      };
+    }),
+  );
+  const summary = summarizeInspection(
+    checklist,
+    results.map((r) => ({ itemKey: r.itemKey, answer: r.answer, answeredAt: r.answeredAt, noReading: r.noReading! })),
+    { startedAt: new Date(start).toISOString() },
+  );
+  report.timeZone = timeZone;
+  report.inspection = {
+    ...report.inspection,
+    startedAt: new Date(start).toISOString(),
+    submittedAt: new Date(start + 15 * 60_000).toISOString(),
+    checklist,
+    results,
+    notes: [],
+    summary,
+  };
+  report.signatures = [report.signatures[0]!];
+  return report;
+}
+
+describe('inspection report PDF: every item checked', () => {
+  it('lists all 281 items of a clean tractor and trailer by stop, with stop times in the zone, on two pages', async () => {
+    const report = cleanReport('America/Chicago');
+    const { pages, text } = await pdfText(await renderInspectionReport(report));
+    expect(report.inspection.checklist.items).toHaveLength(281);
+    expect(missingInOrder(text, report.inspection.checklist)).toEqual([]);
+    expect(squash(text)).toContain(squash('Items checked (281 of 281)'));
+    // 12:02 UTC is 06:02 in Chicago in November (CST, UTC-6); the first stop was answered 14 s later.
+    expect(squash(text)).toContain(squash('Started: 2026-11-03 06:02 CST'));
+    expect(squash(text)).toContain(squash(`${report.inspection.checklist.stops[0]!.label} 06:02:`));
+    expect(squash(text)).not.toContain(squash('12:02'));
+    expect(pages).toBe(2);
+    expect(squash(text)).toContain(squash('page 2 of 2'));
+  });
+
+  it('prints a reading with its limit and source, and a defect with the words heard', async () => {
+    const report = cleanReport('UTC');
+    const checklist = report.inspection.checklist;
+    const tread = checklist.items.find((i) => i.expects.type === 'measure' && i.expects.quantity === 'tread_depth')!;
+    const lamp = checklist.items.find((i) => i.expects.type === 'check' && !i.safety)!;
+    report.inspection.results = report.inspection.results.map((r) =>
+      r.itemKey === tread.key
+        ? {
+            ...r,
+            noReading: null,
+            measurement: { quantity: 'tread_depth', value: 9, unit: 'in/32' },
+            verdict: 'ok',
+            limit: { value: 4, unit: 'in/32', source: '49 CFR 393.75(b)' },
+          }
+        : r.itemKey === lamp.key
+          ? { ...r, answer: 'defect', detail: 'lens cracked', heard: 'good except the lens is cracked' }
+          : r,
+    );
+    const text = squash((await pdfText(await renderInspectionReport(report))).text);
+    expect(text).toContain(squash(`${tread.title}: 9`));
+    expect(text).toContain(squash('9 thirty-seconds (limit 4 thirty-seconds, 49 CFR 393.75(b)), within limit'));
+    expect(text).toContain(squash(`${lamp.title}: DEFECT, "lens cracked", heard "good except the lens is cracked"`));
+    expect(missingInOrder(text, checklist)).toEqual([]);
   });
 });
 
@@ -395,7 +523,6 @@ describe('GET /api/inspections/:id/report.pdf', () => {
       item.positionLabel,
       'Driver\'s words: "cracked lens, water inside"',
       'Driver: Dana Okafor',
-      `${measured.title}: ${measured.positionLabel}: checked without a reading`,
       'Defects (1)',
       'Fixed on the spot (1)',
       `1. ${pressure.title}: ${pressure.positionLabel}`,
@@ -404,10 +531,59 @@ describe('GET /api/inspections/:id/report.pdf', () => {
     ]) {
       expect({ expected, found: squash(text).includes(squash(expected)) }).toEqual({ expected, found: true });
     }
+    // The check passed without a value is marked so among the items (alone, or beside a defect at its stop).
+    expect(squash(text)).toMatch(new RegExp(`${squash(measured.title)}(\\(byeye\\)|:ok,byeye)`));
 
     const other = await signIn(t.url, OTHER_ORG_ADMIN);
     const foreign = await request(t.url).get(`/api/inspections/${inspection.id}/report.pdf`).set(bearer(other));
     expect(foreign.status).toBe(404);
     expect(errorBody(foreign).message).toMatch(/inspection/i);
+  });
+
+  it("prints every item of a seeded demo report, and its times in the organisation's zone", async () => {
+    const vehicles = bodyOf<VehicleResponse[]>(
+      await request(t.url).get('/api/vehicles?q=KV-103').set(bearer(tokens.driver)),
+    );
+    const kv103 = vehicles.find((v) => v.unitNumber === 'KV-103')!;
+    const pending = bodyOf<PendingAcknowledgement>(
+      await request(t.url).get(`/api/vehicles/${kv103.id}/pending-acknowledgement`).set(bearer(tokens.driver)),
+    );
+    const zone = (timeZone: string) =>
+      request(t.url).patch('/api/organizations/time-zone').set(bearer(tokens.admin)).send({ timeZone });
+    expect((await zone('America/Denver')).status).toBe(200);
+    try {
+      const inspection = bodyOf<InspectionResponse>(
+        await request(t.url).get(`/api/inspections/${pending.inspectionId}`).set(bearer(tokens.supervisor)),
+      );
+      const response = await binary(
+        request(t.url).get(`/api/inspections/${pending.inspectionId}/report.pdf`).set(bearer(tokens.supervisor)),
+      );
+      expect(response.status).toBe(200);
+      const { text } = await pdfText(response.body as Buffer);
+      expect(missingInOrder(text, inspection.checklist)).toEqual([]);
+      const denver = (iso: string) =>
+        new Intl.DateTimeFormat('en-GB', {
+          timeZone: 'America/Denver',
+          hour: '2-digit',
+          minute: '2-digit',
+          hourCycle: 'h23',
+        }).format(new Date(iso));
+      expect(squash(text)).toContain(
+        squash(`Started: ${formatZonedTime(new Date(inspection.startedAt), 'America/Denver')}`),
+      );
+      expect(formatZonedTime(new Date(inspection.startedAt), 'America/Denver')).toMatch(/M[SD]T$/);
+      const lastAnswer = inspection.results
+        .map((r) => r.answeredAt)
+        .sort()
+        .at(-1)!;
+      expect(squash(text)).toContain(squash(`${inspection.checklist.stops.at(-1)!.label} ${denver(lastAnswer)}:`));
+      // The steer tire's reading, its limit and source, and the repair signed by the shop.
+      expect(squash(text)).toContain(
+        squash('3 thirty-seconds (limit 4 thirty-seconds, 49 CFR 393.75(b)), out of limit'),
+      );
+      expect(squash(text)).toMatch(/Certifiedrepaired.*byRuiAlmeida/);
+    } finally {
+      expect((await zone('UTC')).status).toBe(200);
+    }
   });
 });

@@ -1,5 +1,8 @@
 import {
   DEFAULT_TIME_ZONE,
+  type Answer,
+  type ChecklistItem,
+  type ItemResultResponse,
   formatZonedTime,
   formatMeasure,
   safetyCaution,
@@ -52,6 +55,7 @@ export type ReportInspection = Pick<
   | 'results'
   | 'notes'
   | 'requiredReadings'
+  | 'checklist'
 > & { summary: Pick<InspectionSummary, 'fixedOnTheSpot' | 'checkedWithoutReading' | 'noGauge'> };
 
 export interface InspectionReport {
@@ -120,12 +124,26 @@ const REGULAR_TTF =
 const BOLD_TTF = require.resolve('@expo-google-fonts/atkinson-hyperlegible/700Bold/AtkinsonHyperlegible_700Bold.ttf');
 
 const MARGIN = 54;
+// The items checked: two columns of small type, so a tractor and trailer's 281 items fit about a page.
+const ITEM_COLUMNS = 2;
+const ITEM_GUTTER = 14;
+const ITEM_FONT_SIZE = 7;
+const ITEM_LINE_GAP = 0.6;
 const SIGNATURE_BOX = { width: 220, height: 70 };
 
 export function formatReportTime(iso: string | null, timeZone = DEFAULT_TIME_ZONE): string {
   if (!iso) return '—';
   const date = new Date(iso);
   return Number.isNaN(date.getTime()) ? iso : formatZonedTime(date, timeZone);
+}
+
+// "06:05": the time of day in the zone, for the stops (the header says the day and the zone's name).
+export function formatReportTimeOfDay(iso: string, timeZone = DEFAULT_TIME_ZONE): string {
+  const date = new Date(iso);
+  if (Number.isNaN(date.getTime())) return iso;
+  return new Intl.DateTimeFormat('en-GB', { timeZone, hour: '2-digit', minute: '2-digit', hourCycle: 'h23' }).format(
+    date,
+  );
 }
 
 class ReportWriter {
@@ -223,6 +241,63 @@ class ReportWriter {
     this.doc.x = MARGIN;
     this.doc.y = y + SIGNATURE_BOX.height + 8;
   }
+
+  // Blocks of small text flowed down columns, then onto a new page; a block never splits. Where the rest
+  // fits in the columns of one page, they are balanced so the report goes on below both.
+  columns(blocks: readonly ColumnBlock[]): void {
+    const doc = this.doc;
+    const columnWidth = (this.width - ITEM_GUTTER * (ITEM_COLUMNS - 1)) / ITEM_COLUMNS;
+    const options = { width: columnWidth, lineGap: ITEM_LINE_GAP };
+    const heights = blocks.map((block) => {
+      doc.font(BOLD).fontSize(block.heading ? ITEM_FONT_SIZE + 1 : ITEM_FONT_SIZE);
+      return doc.heightOfString(`${block.lead} ${block.text}`, options) + (block.heading ? 3 : 1.5);
+    });
+    const bottom = doc.page.height - MARGIN;
+    let next = 0;
+    let top = doc.y;
+    while (next < blocks.length) {
+      const room = bottom - top;
+      const rest = heights.slice(next).reduce((a, b) => a + b, 0);
+      // Balanced when the rest fits this page's columns; else each column is filled in turn.
+      const target = rest <= room * ITEM_COLUMNS ? Math.min(room, rest / ITEM_COLUMNS) : room;
+      let lowest = top;
+      for (let column = 0; column < ITEM_COLUMNS && next < blocks.length; column += 1) {
+        const x = MARGIN + column * (columnWidth + ITEM_GUTTER);
+        let used = 0;
+        // The last column takes whatever fits; the others stop at the target height.
+        const limit = column === ITEM_COLUMNS - 1 ? room : target;
+        while (next < blocks.length && (used === 0 || used + heights[next]! <= limit + 0.5)) {
+          if (used + heights[next]! > room) break;
+          const block = blocks[next]!;
+          const y = top + used + (block.heading ? 2 : 0);
+          doc
+            .font(BOLD)
+            .fontSize(block.heading ? ITEM_FONT_SIZE + 1 : ITEM_FONT_SIZE)
+            .text(block.lead, x, y, { ...options, continued: block.text !== '' });
+          if (block.text !== '') doc.font(REGULAR).fontSize(ITEM_FONT_SIZE).text(` ${block.text}`, options);
+          next += 1;
+          // The column goes on from where the block really ended (the estimate is only for fitting).
+          used = doc.y - top + (block.heading ? 1 : 1.5);
+        }
+        lowest = Math.max(lowest, top + used);
+      }
+      if (next < blocks.length) {
+        doc.addPage();
+        top = MARGIN;
+      } else {
+        doc.y = lowest;
+      }
+    }
+    doc.x = MARGIN;
+    doc.font(REGULAR).fontSize(11);
+  }
+}
+
+interface ColumnBlock {
+  // Bold: a zone's title, or a stop's place and time.
+  lead: string;
+  text: string;
+  heading?: boolean;
 }
 
 function measurementLine(defect: DefectResponse, locale: ReportInspection['locale']): string | null {
@@ -309,11 +384,78 @@ function writeReadings(writer: ReportWriter, report: InspectionReport): void {
     return;
   }
   writer.paragraph(
-    `Measured checks passed without a reading (${without.length}): no gauge ${noGauge.length}, checked without a reading ${checkedWithoutReading.length}.`,
+    `Measured checks passed without a reading (${without.length}): no gauge ${noGauge.length}, checked without a reading ${checkedWithoutReading.length}. Each is marked in the items above.`,
   );
-  for (const entry of without) {
+  // A required reading not taken is listed by itself; the checks passed by eye are marked in the items.
+  for (const entry of noGauge) {
     writer.paragraph(`${entry.title}: ${entry.positionLabel}: ${NO_READING_LABELS[entry.reason]}`, { indent: 12 });
   }
+}
+
+const ANSWER_WORDS: Record<Answer, string> = { pass: 'ok', defect: 'DEFECT', not_applicable: 'not applicable' };
+
+// One item's line: its answer, the reading with its limit and source, the verdict, and what was heard
+// for a defect. A stop answered all good lists its items once, after "All good:".
+function itemLine(item: ChecklistItem, result: ItemResultResponse | undefined, locale: ReportInspection['locale']) {
+  if (!result) return `${item.title}: not answered`;
+  const parts: string[] = [];
+  if (result.measurement) {
+    const measured = formatMeasure(result.measurement.value, result.measurement.unit, locale);
+    const limit = result.limit
+      ? ` (limit ${formatMeasure(result.limit.value, result.limit.unit, locale)}, ${result.limit.source})`
+      : '';
+    parts.push(`${measured}${limit}${result.verdict ? `, ${VERDICT_LABELS[result.verdict]}` : ''}`);
+  }
+  if (result.answer !== 'pass' || !result.measurement) parts.push(ANSWER_WORDS[result.answer]);
+  if (result.noReading) parts.push(result.noReading === 'visual' ? 'by eye' : 'no gauge');
+  if (result.fixed) parts.push(`fixed on the spot: ${result.fixed.action}`);
+  if (result.answer === 'defect') {
+    if (result.detail) parts.push(`"${result.detail}"`);
+    if (result.heard && result.heard !== result.detail) parts.push(`heard "${result.heard}"`);
+  }
+  return `${item.title}: ${parts.join(', ')}`;
+}
+
+function isPlainPass(result: ItemResultResponse | undefined): boolean {
+  return result !== undefined && result.answer === 'pass' && !result.measurement && !result.fixed;
+}
+
+// Every item of the checklist, grouped by zone and stop in walk-around order, with the stop's time.
+function writeItems(writer: ReportWriter, report: InspectionReport): void {
+  const { inspection } = report;
+  const { checklist } = inspection;
+  const resultOf = new Map(inspection.results.map((r) => [r.itemKey, r]));
+  const itemOf = new Map(checklist.items.map((i) => [i.key, i]));
+  const zoneTitle = new Map(checklist.zones.map((z) => [z.key, z.title]));
+  const answered = inspection.results.length;
+  writer.heading(`Items checked (${answered} of ${checklist.items.length})`);
+  writer.paragraph(
+    'By zone and stop, in walk-around order; the time is when the stop was answered. "by eye": a measured check passed without a reading.',
+    { size: 8 },
+  );
+  const blocks: ColumnBlock[] = [];
+  let zone = '';
+  for (const stop of checklist.stops) {
+    if (stop.zone !== zone) {
+      zone = stop.zone;
+      blocks.push({ lead: zoneTitle.get(zone) ?? zone, text: '', heading: true });
+    }
+    const items = stop.itemKeys.flatMap((key) => itemOf.get(key) ?? []);
+    const results = items.map((item) => resultOf.get(item.key));
+    const times = results.flatMap((r) => (r ? [r.answeredAt] : [])).sort();
+    const at = times.length > 0 ? ` ${formatReportTimeOfDay(times[times.length - 1]!, report.timeZone)}` : '';
+    const lead = `${stop.label}${at}:`;
+    if (results.every(isPlainPass)) {
+      const names = items.map((item, n) => (results[n]?.noReading ? `${item.title} (by eye)` : item.title));
+      blocks.push({ lead, text: `all ok: ${names.join('; ')}.` });
+    } else {
+      blocks.push({
+        lead,
+        text: `${items.map((item, n) => itemLine(item, results[n], inspection.locale)).join('; ')}.`,
+      });
+    }
+  }
+  writer.columns(blocks);
 }
 
 function writeReport(writer: ReportWriter, report: InspectionReport): void {
@@ -342,6 +484,8 @@ function writeReport(writer: ReportWriter, report: InspectionReport): void {
       `Unit ${vehicle.unitNumber} (${VEHICLE_KIND_LABELS[vehicle.kind]}) · VIN ${vehicle.vin} · Plate ${vehicle.plate}`,
     );
   }
+
+  writeItems(writer, report);
 
   writer.heading(`Defects (${inspection.defects.length})`);
   if (inspection.defects.length === 0) {
