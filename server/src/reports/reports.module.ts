@@ -1,15 +1,14 @@
 import { Module } from '@nestjs/common';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { Signature } from '../inspections/entities/signature.entity';
-import { InspectionsModule } from '../inspections/inspections.module';
 import { Organization } from '../organizations/entities/organization.entity';
 import { Vehicle } from '../vehicles/entities/vehicle.entity';
-import { ReportsController } from './reports.controller';
 import { ReportsService } from './reports.service';
 
+// Draws an inspection's PDF; InspectionsModule serves it at /inspections/:id/report.pdf.
 @Module({
-  imports: [TypeOrmModule.forFeature([Organization, Vehicle, Signature]), InspectionsModule],
-  controllers: [ReportsController],
+  imports: [TypeOrmModule.forFeature([Organization, Vehicle, Signature])],
   providers: [ReportsService],
+  exports: [ReportsService],
 })
 export class ReportsModule {}

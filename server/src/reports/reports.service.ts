@@ -1,9 +1,9 @@
 import { Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
+import type { InspectionResponse } from '@yardcall/shared';
 import { In, Repository } from 'typeorm';
 import type { AuthUser } from '../auth/auth-user';
 import { Signature } from '../inspections/entities/signature.entity';
-import { InspectionsService } from '../inspections/inspections.service';
 import { Organization } from '../organizations/entities/organization.entity';
 import { Vehicle } from '../vehicles/entities/vehicle.entity';
 import { renderInspectionReport, type InspectionReport } from './inspection-report';
@@ -16,15 +16,14 @@ export interface RenderedReport {
 @Injectable()
 export class ReportsService {
   constructor(
-    private readonly inspections: InspectionsService,
     @InjectRepository(Organization) private readonly organizations: Repository<Organization>,
     @InjectRepository(Vehicle) private readonly vehicles: Repository<Vehicle>,
     @InjectRepository(Signature) private readonly signatures: Repository<Signature>,
   ) {}
 
-  // The report of an inspection the caller may read (InspectionsService.get decides, 404 otherwise).
-  async build(user: AuthUser, inspectionId: string, now = new Date()): Promise<InspectionReport> {
-    const inspection = await this.inspections.get(user, inspectionId);
+  // The report of an inspection the caller may read (the inspections module found it, 404 otherwise).
+  async build(user: AuthUser, inspection: InspectionResponse, now = new Date()): Promise<InspectionReport> {
+    const inspectionId = inspection.id;
     const vehicleIds = inspection.vehicles.map((v) => v.id);
     const [organization, vehicleRows, drawings] = await Promise.all([
       this.organizations.findOneByOrFail({ id: user.organizationId }),
@@ -56,8 +55,8 @@ export class ReportsService {
     };
   }
 
-  async render(user: AuthUser, inspectionId: string): Promise<RenderedReport> {
-    const report = await this.build(user, inspectionId);
+  async render(user: AuthUser, inspection: InspectionResponse): Promise<RenderedReport> {
+    const report = await this.build(user, inspection);
     const units = report.vehicles.map((v) => v.unitNumber).join('-');
     const day = report.inspection.startedAt.slice(0, 10);
     const filename = `yardcall-${report.inspection.kind}-${units}-${day}.pdf`.replace(/[^A-Za-z0-9._-]/g, '_');
