@@ -4,7 +4,6 @@ import {
   ApiBearerAuth,
   ApiConflictResponse,
   ApiCreatedResponse,
-  ApiNoContentResponse,
   ApiNotFoundResponse,
   ApiOkResponse,
   ApiOperation,
@@ -12,13 +11,7 @@ import {
   ApiTags,
 } from '@nestjs/swagger';
 import { INSPECTION_CSV_COLUMNS, INSPECTION_CSV_MAX_ROWS } from '@yardcall/shared';
-import type {
-  InspectionPage,
-  InspectionResponse,
-  PendingAcknowledgement,
-  PutResultsResponse,
-  SignatureResponse,
-} from '@yardcall/shared';
+import type { InspectionPage, InspectionResponse, PutResultsResponse, SignatureResponse } from '@yardcall/shared';
 import type { Response } from 'express';
 import type { AuthUser } from '../auth/auth-user';
 import { CurrentUser } from '../auth/decorators/current-user.decorator';
@@ -32,7 +25,6 @@ import {
   InspectionPageDto,
   InspectionResponseDto,
   ListInspectionsQuery,
-  PendingAcknowledgementDto,
   SubmitInspectionDto,
 } from './dto/inspection.dto';
 import { PutResultsDto, PutResultsResponseDto } from './dto/result.dto';
@@ -176,34 +168,5 @@ export class InspectionsController {
     @Body() body: AcknowledgeDto,
   ): Promise<SignatureResponse> {
     return this.acknowledgements.acknowledge(user, id, body);
-  }
-}
-
-@ApiTags('inspections')
-@ApiBearerAuth()
-@Controller('vehicles')
-export class VehicleAcknowledgementsController {
-  constructor(private readonly acknowledgements: AcknowledgementsService) {}
-
-  @Get(':id/pending-acknowledgement')
-  @Roles('driver')
-  @ApiOperation({
-    summary:
-      "The vehicle's last report when a mechanic certified its defects and no driver has acknowledged that yet; 204 when nothing waits.",
-  })
-  @ApiOkResponse({ type: PendingAcknowledgementDto })
-  @ApiNoContentResponse({ description: 'Nothing waits for an acknowledgement.' })
-  @ApiNotFoundResponse({ type: ApiErrorBodyDto })
-  async pending(
-    @CurrentUser() user: AuthUser,
-    @UuidParam('id') id: string,
-    @Res({ passthrough: true }) response: Response,
-  ): Promise<PendingAcknowledgement | undefined> {
-    const pending = await this.acknowledgements.pending(user, id);
-    if (!pending) {
-      response.status(204);
-      return undefined;
-    }
-    return pending;
   }
 }

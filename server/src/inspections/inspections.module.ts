@@ -15,7 +15,7 @@ import { InspectionChecklists } from './inspection-checklists';
 import { InspectionListService } from './inspection-list.service';
 import { InspectionReportController } from './inspection-report.controller';
 import { InspectionResultsService } from './inspection-results.service';
-import { InspectionsController, VehicleAcknowledgementsController } from './inspections.controller';
+import { InspectionsController } from './inspections.controller';
 import { InspectionsService } from './inspections.service';
 
 // Every /inspections route. Notes and photos are kept by NotesModule, defects opened by DefectsModule,
@@ -27,12 +27,7 @@ import { InspectionsService } from './inspections.service';
     NotesModule,
     ReportsModule,
   ],
-  controllers: [
-    InspectionsController,
-    InspectionAttachmentsController,
-    InspectionReportController,
-    VehicleAcknowledgementsController,
-  ],
+  controllers: [InspectionsController, InspectionAttachmentsController, InspectionReportController],
   providers: [
     InspectionsService,
     InspectionResultsService,
@@ -40,5 +35,7 @@ import { InspectionsService } from './inspections.service';
     InspectionChecklists,
     AcknowledgementsService,
   ],
+  // The next driver's acknowledgement is also asked for under /vehicles (VehiclesModule).
+  exports: [AcknowledgementsService],
 })
 export class InspectionsModule {}
