@@ -88,6 +88,64 @@ describe('fleet board', () => {
     expect(board.outOfServiceCount).toBe(db!.n);
   });
 
+  it("shows which units had a pre-trip today and which were used without one, today read in the organisation's zone", async () => {
+    // A zone where it is about noon now, so "the last ten minutes" is today whatever the hour of the run.
+    const offsetHours = 12 - new Date().getUTCHours();
+    // Etc/GMT signs are inverted: Etc/GMT-5 is five hours ahead of UTC.
+    const timeZone = offsetHours === 0 ? 'UTC' : `Etc/GMT${offsetHours > 0 ? '-' : '+'}${Math.abs(offsetHours)}`;
+    const zone = (name: string) =>
+      request(t.url).patch('/api/organizations/time-zone').set(bearer(tokens.admin)).send({ timeZone: name });
+    expect((await zone(timeZone)).status).toBe(200);
+    try {
+      const checked = await createVehicle(t.url, tokens.admin, tractorRequest(unit('FD')));
+      const used = await createVehicle(t.url, tokens.admin, tractorRequest(unit('FU')));
+      const idle = await createVehicle(t.url, tokens.admin, tractorRequest(unit('FI')));
+      const quickly = async (vehicleId: string, kind: 'pre_trip' | 'en_route') => {
+        const started = await startInspection(t.url, tokens.driver, {
+          vehicleIds: [vehicleId],
+          kind,
+          startedAt: new Date(Date.now() - 10 * 60_000).toISOString(),
+        });
+        const startMs = Date.parse(started.startedAt);
+        return answerAndSubmit(
+          t.url,
+          tokens.driver,
+          started.id,
+          started.checklist.items.map((item, index) => ({
+            itemKey: item.key,
+            answer: 'pass',
+            answeredAt: new Date(startMs + (index + 1) * 1000).toISOString(),
+            clientId: randomUUID(),
+          })),
+        );
+      };
+      const preTrip = await quickly(checked.id, 'pre_trip');
+      const enRoute = await quickly(used.id, 'en_route');
+
+      const board = bodyOf<FleetBoard>(await request(t.url).get('/api/fleet/board').set(bearer(tokens.supervisor)));
+      const today = new Intl.DateTimeFormat('en-CA', { timeZone }).format(new Date());
+      expect({ day: board.day, timeZone: board.timeZone }).toEqual({ day: today, timeZone });
+      const row = (id: string) => board.vehicles.find((v) => v.id === id)!;
+      expect(row(checked.id).today).toEqual({
+        preTrip: { id: preTrip.id, kind: 'pre_trip', submittedAt: preTrip.submittedAt, driver: preTrip.driver },
+        usedWithoutPreTrip: null,
+      });
+      expect(row(used.id).today).toEqual({
+        preTrip: null,
+        usedWithoutPreTrip: {
+          id: enRoute.id,
+          kind: 'en_route',
+          submittedAt: enRoute.submittedAt,
+          driver: enRoute.driver,
+        },
+      });
+      expect(row(idle.id).today).toEqual({ preTrip: null, usedWithoutPreTrip: null });
+    } finally {
+      // The demo organisation is shared by the other suites: back to UTC.
+      expect((await zone('UTC')).status).toBe(200);
+    }
+  });
+
   it('is the same for a mechanic and an admin, and a vehicle never inspected has no last report', async () => {
     const fresh = await createVehicle(t.url, tokens.admin, tractorRequest(unit('FN')));
     for (const role of ['mechanic', 'admin'] as const) {

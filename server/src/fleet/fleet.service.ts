@@ -1,7 +1,14 @@
 import { Injectable } from '@nestjs/common';
-import type { FleetBoard, FleetBoardDefect, FleetBoardInspection, InspectionKind } from '@yardcall/shared';
+import {
+  dayOfUse,
+  type FleetBoard,
+  type FleetBoardDefect,
+  type FleetBoardInspection,
+  type InspectionKind,
+} from '@yardcall/shared';
 import { DataSource } from 'typeorm';
 import { Defect } from '../defects/entities/defect.entity';
+import { Organization } from '../organizations/entities/organization.entity';
 import { Vehicle } from '../vehicles/entities/vehicle.entity';
 
 interface LastInspectionRow {
@@ -13,16 +20,25 @@ interface LastInspectionRow {
   driver_name: string;
 }
 
+interface TodayRow extends LastInspectionRow {
+  started_at: Date;
+}
+
 const UNIT_ORDER = new Intl.Collator('en', { numeric: true, sensitivity: 'base' });
 
 @Injectable()
 export class FleetService {
   constructor(private readonly dataSource: DataSource) {}
 
-  // Three queries whatever the fleet size: vehicles, open safety defects, each vehicle's last report.
+  // Five queries whatever the fleet size: the organisation's zone and day, vehicles, open safety defects,
+  // each vehicle's last report, and today's reports.
   async board(organizationId: string): Promise<FleetBoard> {
     const manager = this.dataSource.manager;
-    const [vehicles, defects, last] = await Promise.all([
+    const { timeZone } = await manager.findOneOrFail(Organization, {
+      select: { id: true, timeZone: true },
+      where: { id: organizationId },
+    });
+    const [vehicles, defects, last, todayRows, [clock]] = await Promise.all([
       manager.find(Vehicle, {
         select: { id: true, unitNumber: true, kind: true, status: true, statusSince: true, statusReason: true },
         where: { organizationId },
@@ -41,7 +57,35 @@ export class FleetService {
           ORDER BY iv.vehicle_id, i.submitted_at DESC, i.id DESC`,
         [organizationId],
       ),
+      // Today starts at midnight in the organisation's zone; PostgreSQL works out the edge, daylight saving included.
+      manager.query<TodayRow[]>(
+        `SELECT iv.vehicle_id, i.id, i.kind, i.started_at, i.submitted_at, i.driver_id, u.name AS driver_name
+           FROM inspection_vehicles iv
+           JOIN inspections i ON i.id = iv.inspection_id
+           JOIN users u ON u.id = i.driver_id
+          WHERE i.organization_id = $1 AND i.status = 'submitted' AND i.kind <> 'practice'
+            AND i.started_at >= date_trunc('day', now() AT TIME ZONE $2) AT TIME ZONE $2`,
+        [organizationId, timeZone],
+      ),
+      manager.query<{ day: string }[]>(`SELECT to_char(now() AT TIME ZONE $1, 'YYYY-MM-DD') AS day`, [timeZone]),
     ]);
+    const todayOf = new Map<string, TodayRow[]>();
+    for (const row of todayRows) todayOf.set(row.vehicle_id, [...(todayOf.get(row.vehicle_id) ?? []), row]);
+    const boardInspection = (row: LastInspectionRow): FleetBoardInspection => ({
+      id: row.id,
+      kind: row.kind,
+      submittedAt: row.submitted_at.toISOString(),
+      driver: { id: row.driver_id, name: row.driver_name },
+    });
+    const todayFor = (vehicleId: string) => {
+      const day = dayOfUse(
+        (todayOf.get(vehicleId) ?? []).map((row) => ({ ...row, startedAt: row.started_at.toISOString() })),
+      );
+      return {
+        preTrip: day.preTrip ? boardInspection(day.preTrip) : null,
+        usedWithoutPreTrip: day.usedWithoutPreTrip ? boardInspection(day.usedWithoutPreTrip) : null,
+      };
+    };
     const defectsOf = new Map<string, FleetBoardDefect[]>();
     for (const d of defects) {
       const list = defectsOf.get(d.vehicleId) ?? [];
@@ -54,17 +98,7 @@ export class FleetService {
       });
       defectsOf.set(d.vehicleId, list);
     }
-    const lastOf = new Map<string, FleetBoardInspection>(
-      last.map((row) => [
-        row.vehicle_id,
-        {
-          id: row.id,
-          kind: row.kind,
-          submittedAt: row.submitted_at.toISOString(),
-          driver: { id: row.driver_id, name: row.driver_name },
-        },
-      ]),
-    );
+    const lastOf = new Map<string, FleetBoardInspection>(last.map((row) => [row.vehicle_id, boardInspection(row)]));
     const board = vehicles
       .map((v) => ({
         id: v.id,
@@ -75,6 +109,7 @@ export class FleetService {
         statusReason: v.status === 'out_of_service' ? v.statusReason : null,
         openSafetyDefects: defectsOf.get(v.id) ?? [],
         lastInspection: lastOf.get(v.id) ?? null,
+        today: todayFor(v.id),
       }))
       .sort(
         (a, b) =>
@@ -87,6 +122,8 @@ export class FleetService {
       inServiceCount: board.length - outOfServiceCount,
       outOfServiceCount,
       generatedAt: new Date().toISOString(),
+      day: clock?.day ?? '',
+      timeZone,
     };
   }
 }

@@ -33,6 +33,12 @@ export interface FleetBoardVehicle {
   openSafetyDefects: FleetBoardDefect[];
   // The last submitted inspection that covered it, or null.
   lastInspection: FleetBoardInspection | null;
+  // Today in the organisation's time zone (see dayOfUse in review): its first pre-trip, and a post-trip
+  // or en-route inspection with no pre-trip before it.
+  today: {
+    preTrip: FleetBoardInspection | null;
+    usedWithoutPreTrip: FleetBoardInspection | null;
+  };
 }
 
 export interface FleetBoard {
@@ -41,6 +47,9 @@ export interface FleetBoard {
   inServiceCount: number;
   outOfServiceCount: number;
   generatedAt: string;
+  // The day the board's "today" means (YYYY-MM-DD) and the organisation's IANA time zone it is read in.
+  day: string;
+  timeZone: string;
 }
 
 // GET /api/inspections and GET /api/inspections/export.csv take the same filters.

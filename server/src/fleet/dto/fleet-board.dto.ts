@@ -44,6 +44,18 @@ export class FleetBoardInspectionDto implements FleetBoardInspection {
   driver: PersonRefDto;
 }
 
+export class FleetBoardTodayDto {
+  @ApiProperty({ type: FleetBoardInspectionDto, nullable: true, description: "Today's first pre-trip." })
+  preTrip: FleetBoardInspectionDto | null;
+
+  @ApiProperty({
+    type: FleetBoardInspectionDto,
+    nullable: true,
+    description: 'A post-trip or en-route inspection today with no pre-trip before it: the unit was used without one.',
+  })
+  usedWithoutPreTrip: FleetBoardInspectionDto | null;
+}
+
 export class FleetBoardVehicleDto implements FleetBoardVehicle {
   @ApiProperty({ format: 'uuid' })
   id: string;
@@ -72,6 +84,9 @@ export class FleetBoardVehicleDto implements FleetBoardVehicle {
 
   @ApiProperty({ type: FleetBoardInspectionDto, nullable: true })
   lastInspection: FleetBoardInspectionDto | null;
+
+  @ApiProperty({ type: FleetBoardTodayDto, description: "Today, in the organisation's time zone." })
+  today: FleetBoardTodayDto;
 }
 
 export class FleetBoardDto implements FleetBoard {
@@ -86,4 +101,10 @@ export class FleetBoardDto implements FleetBoard {
 
   @ApiProperty({ format: 'date-time' })
   generatedAt: string;
+
+  @ApiProperty({ example: '2026-12-03', description: "Today's date in the organisation's time zone." })
+  day: string;
+
+  @ApiProperty({ example: 'America/Chicago', description: "The organisation's IANA time zone." })
+  timeZone: string;
 }

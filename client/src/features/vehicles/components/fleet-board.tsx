@@ -1,6 +1,6 @@
 import { useTranslation } from 'react-i18next';
 import { Link } from 'react-router';
-import type { FleetBoardVehicle } from '@yardcall/shared';
+import type { FleetBoard as FleetBoardData, FleetBoardVehicle } from '@yardcall/shared';
 import { ErrorAlert, Loading } from '@/components/ui/alert';
 import { LinkButton } from '@/components/ui/link-button';
 import { describeError } from '@/lib/errors';
@@ -17,9 +17,87 @@ function byUrgency(a: FleetBoardVehicle, b: FleetBoardVehicle): number {
   );
 }
 
-function BoardUnit({ vehicle }: { vehicle: FleetBoardVehicle }) {
-  const { t, i18n } = useTranslation();
-  const locale = i18n.language;
+// Times read in the organisation's zone, as the board's "today" is.
+function zonedFormat(locale: string, timeZone: string) {
+  const dateTime = new Intl.DateTimeFormat(locale, { timeZone, dateStyle: 'medium', timeStyle: 'short' });
+  const date = new Intl.DateTimeFormat(locale, { timeZone, dateStyle: 'medium' });
+  const time = new Intl.DateTimeFormat(locale, { timeZone, timeStyle: 'short' });
+  return {
+    dateTime: (iso: string) => dateTime.format(new Date(iso)),
+    date: (iso: string) => date.format(new Date(iso)),
+    time: (iso: string) => time.format(new Date(iso)),
+  };
+}
+
+type ZonedFormat = ReturnType<typeof zonedFormat>;
+
+function TodayLine({ vehicle, format }: { vehicle: FleetBoardVehicle; format: ZonedFormat }) {
+  const { t } = useTranslation();
+  const { preTrip, usedWithoutPreTrip } = vehicle.today;
+  if (usedWithoutPreTrip) {
+    return (
+      <p className="font-bold text-danger" data-testid="board-today" data-today="used-without-pre-trip">
+        <span aria-hidden="true">⚠ </span>
+        <Link to={inspectionPath(usedWithoutPreTrip.id)}>
+          {t('board.todayUsed', {
+            kind: t(`inspections.kinds.${usedWithoutPreTrip.kind}`),
+            time: format.time(usedWithoutPreTrip.submittedAt),
+          })}
+        </Link>{' '}
+        {t('board.by', { name: usedWithoutPreTrip.driver.name })}
+      </p>
+    );
+  }
+  if (preTrip) {
+    return (
+      <p data-testid="board-today" data-today="pre-trip">
+        <span aria-hidden="true">✓ </span>
+        <Link to={inspectionPath(preTrip.id)}>
+          {t('board.todayPreTrip', { time: format.time(preTrip.submittedAt) })}
+        </Link>{' '}
+        {t('board.by', { name: preTrip.driver.name })}
+      </p>
+    );
+  }
+  return (
+    <p className="text-muted" data-testid="board-today" data-today="none">
+      {t('board.todayNone')}
+    </p>
+  );
+}
+
+// The supervisor's day at a glance: pre-trips done, units used without one, units out of service.
+function TodaySummary({ board, format }: { board: FleetBoardData; format: ZonedFormat }) {
+  const { t } = useTranslation();
+  const preTrip = board.vehicles.filter((v) => v.today.preTrip !== null).length;
+  const used = board.vehicles.filter((v) => v.today.usedWithoutPreTrip !== null).length;
+  // Noon of the board's day, so the date reads the same in any zone.
+  const day = format.date(`${board.day}T12:00:00Z`);
+  return (
+    <section
+      aria-labelledby="board-today-title"
+      className="rounded-xl border-2 border-line bg-surface p-4"
+      data-testid="board-today-summary"
+    >
+      <h3 id="board-today-title" className="text-xl font-bold">
+        {t('board.todayTitle', { day })}
+      </h3>
+      <p className="text-lg">
+        {t('board.todaySummary', {
+          preTrip,
+          count: board.vehicles.length,
+          used,
+          out: board.outOfServiceCount,
+        })}
+      </p>
+      <p className="text-sm text-muted">{t('board.usedMeans')}</p>
+      <p className="text-sm text-muted">{t('board.todayZone', { zone: board.timeZone })}</p>
+    </section>
+  );
+}
+
+function BoardUnit({ vehicle, format }: { vehicle: FleetBoardVehicle; format: ZonedFormat }) {
+  const { t } = useTranslation();
   const out = vehicle.status === 'out_of_service';
   const headingId = `board-unit-${vehicle.id}`;
   const last = vehicle.lastInspection;
@@ -42,9 +120,7 @@ function BoardUnit({ vehicle }: { vehicle: FleetBoardVehicle }) {
         {out ? (
           <>
             {vehicle.outOfServiceSince ? (
-              <p className="font-bold">
-                {t('board.since', { date: new Date(vehicle.outOfServiceSince).toLocaleString(locale) })}
-              </p>
+              <p className="font-bold">{t('board.since', { date: format.dateTime(vehicle.outOfServiceSince) })}</p>
             ) : null}
             <div>
               <p className="font-bold">{t('board.why')}</p>
@@ -57,7 +133,7 @@ function BoardUnit({ vehicle }: { vehicle: FleetBoardVehicle }) {
                       <span aria-hidden="true">⚠ </span>
                       <span className="font-bold">{defect.title}</span>, {defect.positionLabel} (
                       <Link to={inspectionPath(defect.inspectionId)}>
-                        {t('board.reportedAt', { date: new Date(defect.reportedAt).toLocaleDateString(locale) })}
+                        {t('board.reportedAt', { date: format.date(defect.reportedAt) })}
                       </Link>
                       )
                     </li>
@@ -69,6 +145,7 @@ function BoardUnit({ vehicle }: { vehicle: FleetBoardVehicle }) {
         ) : (
           <p>{t('board.noOpenSafetyDefects')}</p>
         )}
+        <TodayLine vehicle={vehicle} format={format} />
         <div className="mt-auto border-t-2 border-line pt-2">
           {last ? (
             <p>
@@ -76,7 +153,7 @@ function BoardUnit({ vehicle }: { vehicle: FleetBoardVehicle }) {
               <Link to={inspectionPath(last.id)} data-testid="board-last-inspection">
                 {t('board.lastInspectionLink', {
                   kind: t(`inspections.kinds.${last.kind}`),
-                  date: new Date(last.submittedAt).toLocaleString(locale),
+                  date: format.dateTime(last.submittedAt),
                 })}
               </Link>{' '}
               {t('board.by', { name: last.driver.name })}
@@ -97,21 +174,21 @@ export function FleetBoard() {
   if (board.isPending) return <Loading label={t('common.loading')} />;
   if (board.isError) return <ErrorAlert>{describeError(board.error)}</ErrorAlert>;
   const vehicles = [...board.data.vehicles].sort(byUrgency);
+  const format = zonedFormat(i18n.language, board.data.timeZone);
   return (
     <div className="flex flex-col gap-4" data-testid="fleet-board">
+      <TodaySummary board={board.data} format={format} />
       <p className="text-lg" role="status">
         {t('board.summary', {
           count: vehicles.length,
           inService: board.data.inServiceCount,
           out: board.data.outOfServiceCount,
         })}{' '}
-        <span className="text-muted">
-          {t('board.asOf', { time: new Date(board.data.generatedAt).toLocaleTimeString(i18n.language) })}
-        </span>
+        <span className="text-muted">{t('board.asOf', { time: format.time(board.data.generatedAt) })}</span>
       </p>
       <ul className="grid gap-4 md:grid-cols-2" aria-label={t('board.listLabel')}>
         {vehicles.map((vehicle) => (
-          <BoardUnit key={vehicle.id} vehicle={vehicle} />
+          <BoardUnit key={vehicle.id} vehicle={vehicle} format={format} />
         ))}
       </ul>
       <div className="flex flex-wrap gap-tap-gap">
