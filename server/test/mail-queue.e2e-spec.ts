@@ -51,6 +51,14 @@ describe('e-mail on safety defects, through the job queue', () => {
     return bodyOf<InspectionResponse>(submitted);
   }
 
+  it("holds the demo history's safety-defect e-mails from the boot, made again since the catcher keeps none", async () => {
+    const outbox = bodyOf<CaughtMail[]>(await request(t.url).get('/api/mail/outbox').set(bearer(tokens.admin)));
+    const demo = outbox.filter((m) => m.subject.startsWith('Safety defect on unit KV-T22:'));
+    // One to each mechanic and supervisor of the organisation, as a real report's alert.
+    expect(demo.flatMap((m) => m.to).sort()).toEqual(await recipients());
+    expect(demo[0]!.text).toMatch(/Trailer air lines/);
+  });
+
   async function recipients(role?: 'mechanic'): Promise<string[]> {
     const rows = await t.dataSource.query<{ email: string }[]>(
       `SELECT u.email FROM users u JOIN users a ON a.organization_id = u.organization_id

@@ -47,6 +47,11 @@ export class MailService implements OnModuleInit, OnModuleDestroy {
     this.logger.log(`Sent "${mail.subject}" to ${mail.to}.`);
   }
 
+  // True when e-mail goes to the built-in catcher (no SMTP_URL): nothing reaches a real person.
+  catchesMail(): boolean {
+    return this.catcher !== null;
+  }
+
   // Tests only: the loopback catcher refuses the next `count` messages (whose subject contains
   // `subjectContains`), so retries can be seen.
   failNextSends(count: number, subjectContains = ''): void {
