@@ -328,7 +328,7 @@ function todayPlan(now: Date): WalkaroundSpec[] {
       units: ['KV-101', 'KV-T21'],
       kind: 'pre_trip',
       // About 05:35, or earlier in the day's first hours.
-      startedAt: new Date(dayStart + Math.floor(Math.min(5.6 * HOUR_MS, elapsed * 0.3))),
+      startedAt: new Date(dayStart + Math.floor(Math.min(5.6 * HOUR_MS, elapsed * 0.55))),
       readings: [{ itemKey: 'u1.axle1.left.tire.tread', value: 11, heard: 'good, eleven thirty-seconds' }],
     },
     {
@@ -742,10 +742,11 @@ class HistoryWriter {
 
   // Practice walk-arounds narrated by the two students: one reviewed by the trainer, one waiting.
   async practice(now: Date): Promise<void> {
-    const tractor = this.vehicle('KV-101');
-    const snapshot: Inspection['vehicles'] = [
-      { id: tractor.id, unitNumber: tractor.unitNumber, kind: tractor.kind, config: tractor.config },
-    ];
+    // The tractor and trailer the students practise on: the narrations speak of both.
+    const snapshot: Inspection['vehicles'] = ['KV-101', 'KV-T21'].map((unit) => {
+      const v = this.vehicle(unit);
+      return { id: v.id, unitNumber: v.unitNumber, kind: v.kind, config: v.config };
+    });
     const checklist = buildChecklist(snapshot, 'practice', 'en');
     const attempts = [
       {
