@@ -5,6 +5,9 @@ import tseslint from 'typescript-eslint';
 import importX from 'eslint-plugin-import-x';
 import { createTypeScriptImportResolver } from 'eslint-import-resolver-typescript';
 import reactHooks from 'eslint-plugin-react-hooks';
+import vitest from '@vitest/eslint-plugin';
+import jest from 'eslint-plugin-jest';
+import playwright from 'eslint-plugin-playwright';
 import prettier from 'eslint-config-prettier';
 import globals from 'globals';
 
@@ -55,8 +58,70 @@ export default tseslint.config(
       '@typescript-eslint/no-explicit-any': 'error',
       '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
       'import-x/no-cycle': ['error', { ignoreExternal: true }],
-      'import-x/no-default-export': 'off',
+      // Named exports everywhere; the tools that load a config file want its default export (below).
+      'import-x/no-default-export': 'error',
+      // A switch over a union names every member (a default does not stand in for a missing case).
+      '@typescript-eslint/switch-exhaustiveness-check': 'error',
     },
+  },
+  {
+    // What a tool loads by its default export: config files, Jest's global set-up, and the type
+    // declarations of a package that has one.
+    files: ['**/*.config.{js,mjs,cjs,ts}', 'server/test/global-setup.ts', '**/*.d.ts'],
+    rules: { 'import-x/no-default-export': 'off' },
+  },
+  {
+    // The domain runs anywhere: no framework, no database, no Node. Its command-line faces (cli/) and
+    // the bench harness (bench/) are the exceptions: they run under Node by design.
+    files: ['shared/src/**/*.ts'],
+    ignores: ['shared/src/cli/**', 'shared/src/bench/**'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          patterns: [
+            {
+              regex: '^node:',
+              message: 'shared/ is pure TypeScript: no Node built-ins (the CLI under src/cli/ may use them).',
+            },
+            {
+              regex:
+                '^(assert|buffer|child_process|crypto|events|fs|http|https|net|os|path|perf_hooks|process|readline|stream|url|util|worker_threads|zlib)(/.*)?$',
+              message: 'shared/ is pure TypeScript: no Node built-ins (the CLI under src/cli/ may use them).',
+            },
+            {
+              regex:
+                '^(react|react-dom|react-router|@tanstack/.*|@nestjs/.*|express|class-validator|class-transformer)(/.*)?$',
+              message: 'shared/ holds the domain only: no framework; the apps import shared, not the other way.',
+            },
+            {
+              regex: '^(typeorm|pg|idb|dexie)(/.*)?$',
+              message: 'shared/ does no I/O: no database; the server and the client store what shared computes.',
+            },
+          ],
+        },
+      ],
+    },
+  },
+  {
+    // A test must assert: Vitest in shared/ and client/ (jest-dom's matchers go through expect too),
+    // Jest in the server, Playwright in the browser flows.
+    files: ['shared/src/**/*.test.ts', 'client/src/**/*.test.{ts,tsx}'],
+    plugins: { vitest },
+    rules: {
+      // expect, expect.soft, expectTypeOf and helpers named expect… (e.g. expectCode) that call it.
+      'vitest/expect-expect': ['error', { assertFunctionNames: ['expect*', 'assert'] }],
+    },
+  },
+  {
+    files: ['server/test/**/*.e2e-spec.ts', 'server/src/**/*.spec.ts'],
+    plugins: { jest },
+    rules: { 'jest/expect-expect': ['error', { assertFunctionNames: ['expect*'] }] },
+  },
+  {
+    files: ['client/e2e/**/*.spec.ts'],
+    plugins: { playwright },
+    rules: { 'playwright/expect-expect': ['error', { assertFunctionNames: ['expect*'] }] },
   },
   {
     files: ['**/*.js', '**/*.mjs', '**/*.cjs'],

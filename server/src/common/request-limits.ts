@@ -42,6 +42,7 @@ export function toParserHttpError(error: ParserError): HttpException | undefined
     case 'request.aborted':
     case 'request.size.invalid':
       return new BadRequestException('The body ended before its stated length: send it again.');
+    case undefined:
     default:
       return undefined;
   }

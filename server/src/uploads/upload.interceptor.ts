@@ -47,6 +47,12 @@ function toHttpError(error: unknown, kind: MediaKind<string>): Error {
     case 'LIMIT_UNEXPECTED_FILE':
     case 'LIMIT_FILE_COUNT':
       return new BadRequestException(`Send one file, in the form field "${UPLOAD_FIELD}".`);
+    // The other limits and problems; a code multer adds later reads the same way.
+    case 'LIMIT_PART_COUNT':
+    case 'LIMIT_FIELD_KEY':
+    case 'LIMIT_FIELD_VALUE':
+    case 'LIMIT_FIELD_COUNT':
+    case 'MISSING_FIELD_NAME':
     default:
       return new BadRequestException(
         `The upload could not be read (${error.message}): send it as multipart/form-data.`,

@@ -178,6 +178,11 @@ export function classifyWords(text: NormalisedText, allItems: readonly WordItem[
         return;
       case 'filler':
         return;
+      case 'part':
+      case 'neutral':
+      case 'command':
+      case 'language':
+      case undefined:
       default: {
         if (category === undefined) unknown += item.end - item.start;
         else known += 1;
