@@ -71,3 +71,15 @@ export function percentile(sorted: readonly number[], p: number): number {
   const index = Math.min(sorted.length - 1, Math.max(0, Math.ceil((p / 100) * sorted.length) - 1));
   return sorted[index] ?? Number.NaN;
 }
+
+// Run on its own (`tsx bench/<name>.bench.ts`): one JSON line a figure, as `npm run bench` collects them.
+export function printFigures(run: () => Promise<BenchFigure[]>): void {
+  run()
+    .then((figures) => {
+      for (const figure of figures) console.log(JSON.stringify(figure));
+    })
+    .catch((error: unknown) => {
+      console.error(error instanceof Error ? error.message : error);
+      process.exit(1);
+    });
+}

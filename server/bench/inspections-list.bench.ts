@@ -4,7 +4,7 @@
 // Run: npm run build -w shared && npm run build -w server && DATABASE_URL=... npx tsx server/bench/inspections-list.bench.ts
 import type { InspectionPage, LoginResponse } from '@yardcall/shared';
 import { Client } from 'pg';
-import { percentile, runScript, startServer, type BenchFigure } from './bench-server';
+import { percentile, printFigures, runScript, startServer, type BenchFigure } from './bench-server';
 
 const INSPECTIONS = 100_000;
 // More units than the demo's seven: copies of the seeded configurations under their own numbers.
@@ -203,13 +203,4 @@ export async function runInspectionsListBench(databaseUrl = process.env.DATABASE
   }
 }
 
-if (require.main === module) {
-  runInspectionsListBench()
-    .then((figures) => {
-      for (const figure of figures) console.log(JSON.stringify(figure));
-    })
-    .catch((error: unknown) => {
-      console.error(error instanceof Error ? error.message : error);
-      process.exit(1);
-    });
-}
+if (require.main === module) printFigures(runInspectionsListBench);

@@ -3,7 +3,7 @@
 // Run: npm run build -w shared && npm run build -w server && DATABASE_URL=... npx tsx server/bench/results-upsert.bench.ts
 import type { ChecklistItem, InspectionResponse, LoginResponse, ResultUpsert, VehicleResponse } from '@yardcall/shared';
 import { randomUUID } from 'node:crypto';
-import { percentile, runScript, startServer, type BenchFigure } from './bench-server';
+import { percentile, printFigures, runScript, startServer, type BenchFigure } from './bench-server';
 
 const CALLS = 200;
 const WARMUP = 20;
@@ -136,13 +136,4 @@ export async function runResultsUpsertBench(databaseUrl = process.env.DATABASE_U
   }
 }
 
-if (require.main === module) {
-  runResultsUpsertBench()
-    .then((figures) => {
-      for (const figure of figures) console.log(JSON.stringify(figure));
-    })
-    .catch((error: unknown) => {
-      console.error(error instanceof Error ? error.message : error);
-      process.exit(1);
-    });
-}
+if (require.main === module) printFigures(runResultsUpsertBench);
