@@ -24,18 +24,6 @@ export const CANONICAL_UNITS = {
 } as const satisfies Record<Quantity, string>;
 export type CanonicalUnit<Q extends Quantity = Quantity> = (typeof CANONICAL_UNITS)[Q];
 
-// A number that carries its unit in its type: an inch is not a psi.
-export type Measure<U extends string> = number & { readonly __unit: U };
-export type Inches = Measure<'in'>;
-export type ThirtySecondsInch = Measure<'in/32'>;
-export type Psi = Measure<'psi'>;
-export type Degrees = Measure<'deg'>;
-export type PsiPerMinute = Measure<'psi/min'>;
-
-export function measure<U extends string>(value: number, _unit: U): Measure<U> {
-  return value as Measure<U>;
-}
-
 // Every unit a driver may say or a client may send, grouped by dimension.
 export const UNITS = [
   'in',
@@ -138,7 +126,9 @@ export function unitFits(quantity: Quantity, unit: Unit): boolean {
 export class UnitError extends Error {}
 
 // Converts a value in any unit of the quantity's dimension into the quantity's canonical unit.
-export function toCanonical<Q extends Quantity>(quantity: Q, value: number, unit: string): Measure<CanonicalUnit<Q>> {
+// A value crosses every boundary (API, IndexedDB, database) as { quantity, value, unit }, checked here at
+// run time; the result is in canonicalUnitOf(quantity).
+export function toCanonical(quantity: Quantity, value: number, unit: string): number {
   const parsed = parseUnit(unit);
   if (!parsed) {
     throw new UnitError(`Unknown unit "${unit}". Use one of: ${UNITS.join(', ')}.`);
@@ -148,5 +138,5 @@ export function toCanonical<Q extends Quantity>(quantity: Q, value: number, unit
   }
   const canonical = canonicalUnitOf(quantity) as Unit;
   const base = value * UNIT_FACTORS[parsed].toBase;
-  return (base / UNIT_FACTORS[canonical].toBase) as Measure<CanonicalUnit<Q>>;
+  return base / UNIT_FACTORS[canonical].toBase;
 }
