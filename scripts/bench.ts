@@ -10,6 +10,7 @@ import { freshDatabase, startSeededServer } from './lib/stack.js';
 import { measureFirstLoadJs } from './lib/first-load.js';
 import { measureVoiceLoop } from './lib/voice-loop-latency.js';
 import { measureTalkTime } from './lib/talk-time.js';
+import { measureLighthouse } from './lib/lighthouse.js';
 
 export interface BenchFigure {
   name: string;
@@ -77,6 +78,8 @@ try {
   const server = await startSeededServer(cluster.adminUrl(), `yardcall_bench_web_${runId}`);
   try {
     figures.push(...(await measureFirstLoadJs(server.url)));
+    say('bench: Lighthouse mobile profile (sign-in LCP cold, /driver/start TBT signed in)');
+    figures.push(...(await measureLighthouse(server.url)));
     say('bench: a walk-around by voice in Chromium (answer-to-prompt latency, voice-note size)');
     figures.push(...(await measureVoiceLoop(server.url)));
     say('bench: the modelled talk time of a tractor + trailer pre-trip by voice in Chromium');

@@ -73,10 +73,19 @@ export function RunPage({ clientId }: { clientId: string }) {
             </a>
           </EmptyState>
         ) : null}
-        {loaded.status === 'ready' && loaded.walkaround ? (
+        {loaded.status === 'ready' && loaded.walkaround?.inspection.signed ? (
+          <SignedRedirect to={finishPath(clientId)} />
+        ) : null}
+        {loaded.status === 'ready' && loaded.walkaround && !loaded.walkaround.inspection.signed ? (
           <GloveScreen walkaround={loaded.walkaround} onFinished={() => window.location.assign(finishPath(clientId))} />
         ) : null}
       </main>
     </div>
   );
+}
+
+// Signed on this phone: the walk-around is read-only; its report waits on the finish screen.
+function SignedRedirect({ to }: { to: string }) {
+  useEffect(() => window.location.replace(to), [to]);
+  return null;
 }

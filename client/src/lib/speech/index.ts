@@ -28,3 +28,9 @@ export {
   recognitionNeedsNetwork,
   useOnline,
 } from './offline-speech';
+export {
+  createListeningSwitch,
+  listenByTapWhenOffline,
+  type ListeningSwitch,
+  type OfflineListening,
+} from './listen-by-tap-offline';

@@ -6,7 +6,17 @@ import { Button } from '@/components/ui/button';
 import { describeError } from '@/lib/errors';
 import { getOfflineRuntime, useSyncStatus, type JsonValue } from '@/lib/offline';
 import { resizePhoto, startRecording, type NoteRecording } from '@/lib/recorder';
-import { TypedInputEngine, chooseSpeechEngine, type SpeechEngine } from '@/lib/speech';
+import {
+  TypedInputEngine,
+  chooseSpeechEngine,
+  createListeningSwitch,
+  createOfflineNoticeOnce,
+  listenByTapWhenOffline,
+  listeningUnavailable,
+  recognitionNeedsNetwork,
+  useOnline,
+  type SpeechEngine,
+} from '@/lib/speech';
 import type { LocalWalkaround } from '@/lib/offline';
 import { NOTE_MAX_MS, VOICE_LOOP_WORDS, restoreVoiceLoop, useVoiceLoop } from '../voice-loop';
 import { observeEngine } from './observed-engine';
@@ -73,10 +83,47 @@ export function GloveScreen({ walkaround, onFinished, createEngine }: GloveScree
   const recording = useRef<{ itemKey: string; pending: Promise<NoteRecording | null> } | null>(null);
   const commandRef = useRef<(command: 'end_note') => void>(() => undefined);
 
-  const engine = useMemo(() => observeEngine(baseEngine, { onSpoken: setPrompt, onHeard: setHeard }), [baseEngine]);
+  // With no signal and a recogniser that needs one, turns wait for a tap, a swipe or a headset
+  // button while the prompts are still spoken; the driver is told once.
+  const online = useOnline();
+  const [needsNetwork, setNeedsNetwork] = useState(false);
+  const listeningOff = listeningUnavailable(online, needsNetwork);
+  const [listening] = useState(createListeningSwitch);
+  const [offlineNotice] = useState(createOfflineNoticeOnce);
+  useEffect(() => {
+    let current = true;
+    void recognitionNeedsNetwork(baseEngine, checklist.locale).then((needs) => {
+      if (current) setNeedsNetwork(needs);
+    });
+    return () => {
+      current = false;
+    };
+  }, [baseEngine, checklist.locale]);
+  const engine = useMemo(
+    () =>
+      observeEngine(
+        listenByTapWhenOffline(baseEngine, {
+          unavailable: () => listening.isOff(),
+          onUnavailable: (locale) => {
+            const notice = offlineNotice(locale);
+            if (!notice) return;
+            setNotice(notice.shown);
+            void baseEngine.speak(notice.spoken, { locale });
+          },
+        }),
+        { onSpoken: setPrompt, onHeard: setHeard },
+      ),
+    [baseEngine, offlineNotice, listening],
+  );
   // Resume at the stored item after a reload; a state that no longer fits the checklist starts afresh.
   const [initialState] = useState(() =>
-    inspection.voiceState === undefined ? undefined : (restoreVoiceLoop(inspection.voiceState, checklist) ?? undefined),
+    inspection.voiceState === undefined
+      ? undefined
+      : (restoreVoiceLoop(
+          inspection.voiceState,
+          checklist,
+          walkaround.results.map(({ upsert: { clientId: _id, ...result } }) => result),
+        ) ?? undefined),
   );
 
   const startNote = (itemKey: string) => {
@@ -146,6 +193,12 @@ export function GloveScreen({ walkaround, onFinished, createEngine }: GloveScree
   useEffect(() => {
     commandRef.current = voice.command;
   });
+
+  // Signal back while a turn waits for a tap: say the question again and listen.
+  const { start: restart, running } = voice;
+  useEffect(() => {
+    if (listening.set(listeningOff) && running) restart();
+  }, [listening, listeningOff, running, restart]);
 
   // After switching to typed answers, carry on from where the loop stopped.
   const { start } = voice;

@@ -1,5 +1,5 @@
 import { useTranslation } from 'react-i18next';
-import { useNavigate, useParams } from 'react-router';
+import { Navigate, useNavigate, useParams } from 'react-router';
 import { ErrorAlert, Loading } from '@/components/ui/alert';
 import { LinkButton } from '@/components/ui/link-button';
 import { EmptyState } from '@/components/ui/layout';
@@ -22,6 +22,8 @@ export function RunInspectionRoute() {
       </EmptyState>
     );
   }
+  // Signed on this phone: the walk-around is read-only; its report waits on the finish screen.
+  if (local.data.inspection.signed) return <Navigate to={finishPath(clientId)} replace />;
   return (
     <GloveScreen
       // A fresh screen per walk-around: its voice loop and store keys belong to one inspection.

@@ -317,6 +317,20 @@ describe('moving about', () => {
     expect(said?.type === 'speak' ? said.text : '').toContain(EN.resumed);
   });
 
+  it('takes the answers the phone stored as the record: a state stored ahead of them asks those items again', () => {
+    const first = simulateVoiceLoop(contextFor(en), scripted('good', 'good', 'good', null));
+    // The last stop's answers never reached the store before the reload.
+    const lastStop = en.stops[2] as ChecklistStop;
+    const saved = first.saved.filter((result) => !lastStop.itemKeys.includes(result.itemKey));
+    const restored = restoreVoiceLoop(JSON.parse(JSON.stringify(first.state)), en, saved);
+    expect(Object.keys(restored?.results ?? {}).sort()).toEqual(saved.map((r) => r.itemKey).sort());
+    const run = simulateVoiceLoop(contextFor(en), (turn) => (turn.mode === 'offer' ? 'yes' : passEverything(turn)), {
+      state: restored as VoiceLoopState,
+    });
+    expect(run.state.phase).toBe('finished');
+    expect(lastStop.itemKeys.every((key) => latestResults(run.saved).has(key))).toBe(true);
+  });
+
   it('refuses a stored state that does not belong to the checklist', () => {
     expect(restoreVoiceLoop('not a state', en)).toBeNull();
     expect(restoreVoiceLoop({ version: 1 }, en)).toBeNull();

@@ -1365,7 +1365,13 @@ function isRecord(value: unknown): value is Record<string, unknown> {
 }
 
 // Null when the stored value is not a loop state for this checklist; the host then starts afresh.
-export function restoreVoiceLoop(stored: unknown, checklist: Checklist): VoiceLoopState | null {
+// `saved` are the answers the phone's store holds: they are the record. The state is stored as each
+// step begins, so a reload can catch it ahead of the answers it names; those items are asked again.
+export function restoreVoiceLoop(
+  stored: unknown,
+  checklist: Checklist,
+  saved?: readonly ItemResult[],
+): VoiceLoopState | null {
   if (!isRecord(stored) || stored.version !== VOICE_LOOP_VERSION) return null;
   if (typeof stored.phase !== 'string' || !(VOICE_LOOP_PHASES as readonly string[]).includes(stored.phase)) return null;
   if (!isRecord(stored.results) || !Array.isArray(stored.skipped) || !Array.isArray(stored.queue)) return null;
@@ -1375,5 +1381,6 @@ export function restoreVoiceLoop(stored: unknown, checklist: Checklist): VoiceLo
   if (stop < 0 || index < 0) return null;
   const keys = new Set(checklist.items.map((item) => item.key));
   if (!Object.keys(state.results).every((key) => keys.has(key))) return null;
-  return { ...state, stop, index };
+  const results = saved ? Object.fromEntries(saved.map((result) => [result.itemKey, result])) : state.results;
+  return { ...state, stop, index, results };
 }
