@@ -20,6 +20,7 @@ import { join } from 'node:path';
 import { In, type EntityManager } from 'typeorm';
 import { Defect } from '../defects/entities/defect.entity';
 import { Repair } from '../defects/entities/repair.entity';
+import { defectsOfReport } from '../defects/defects.service';
 import { refreshVehicleStatus } from '../defects/vehicle-status';
 import { InspectionVehicle } from '../inspections/entities/inspection-vehicle.entity';
 import { Inspection } from '../inspections/entities/inspection.entity';
@@ -435,11 +436,13 @@ class HistoryWriter {
     const checklist = this.checklists.get(checklistKey) ?? buildChecklist(snapshot, spec.kind, 'en');
     this.checklists.set(checklistKey, checklist);
     const byKey = new Map(checklist.items.map((item) => [item.key, item]));
-    const itemOf = (key: string) => {
-      const item = byKey.get(key);
-      if (!item) throw new Error(`${spec.tag}: ${key} is not on the checklist of ${spec.units.join(' + ')}.`);
-      return item;
-    };
+    // Every item the story names must be on the checklist: an answer to no item is refused, never dropped.
+    const named = [...(spec.defects ?? []), ...(spec.readings ?? []), ...(spec.fix ? [spec.fix] : [])];
+    for (const { itemKey } of named) {
+      if (!byKey.has(itemKey)) {
+        throw new Error(`${spec.tag}: ${itemKey} is not on the checklist of ${spec.units.join(' + ')}.`);
+      }
+    }
     // The next driver reviews the units' last reports before this walk-around begins.
     for (const vehicle of units) await this.signPendingReview(vehicle, driver, spec.startedAt);
 
@@ -556,36 +559,10 @@ class HistoryWriter {
       signedAt: submittedAt,
     });
 
-    // The shop's defects, as the submit makes them: one a summary defect, on the unit its item is on.
-    const savedDefects: Defect[] = [];
-    for (const found of summary.defects) {
-      const item = itemOf(found.itemKey);
-      const row = rows.find((r) => r.itemKey === found.itemKey);
-      const vehicle = units[item.unitIndex] ?? units[0];
-      if (!vehicle) continue;
-      savedDefects.push(
-        await this.manager.save(
-          this.manager.create(Defect, {
-            organizationId: this.organizationId,
-            inspectionId: inspection.id,
-            vehicleId: vehicle.id,
-            itemKey: found.itemKey,
-            title: found.title,
-            positionLabel: found.positionLabel,
-            safety: found.blocksDriving,
-            detail: found.detail ?? null,
-            measurement: found.measurement ?? null,
-            measurementLimit:
-              row && row.limitValue !== null && row.limitUnit !== null && row.limitSource !== null
-                ? { value: row.limitValue, unit: row.limitUnit, source: row.limitSource }
-                : null,
-            status: 'open',
-            createdAt: submittedAt,
-            updatedAt: submittedAt,
-          }),
-        ),
-      );
-    }
+    // The shop's defects, as the submit makes them, dated when the report was submitted.
+    const found = defectsOfReport(this.manager, { inspection, summary, byKey, results: rows });
+    for (const defect of found) Object.assign(defect, { createdAt: submittedAt, updatedAt: submittedAt });
+    const savedDefects = found.length > 0 ? await this.manager.save(Defect, found) : [];
     this.counts.defects += savedDefects.length;
     if (savedDefects.length > 0) {
       const recurring = await recurringDefectsOf(this.manager, inspection, checklist, summary);

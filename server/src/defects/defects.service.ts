@@ -25,6 +25,35 @@ export interface SubmittedReport {
 
 const LIST_MAX = 500;
 
+// The shop's defects of a report, one per finding of its summary, on the unit its item belongs to (not
+// saved): what a submit opens, and what the demo history stores.
+export function defectsOfReport(manager: EntityManager, report: SubmittedReport): Defect[] {
+  const { inspection, summary, byKey } = report;
+  const rowByKey = new Map(report.results.map((r) => [r.itemKey, r]));
+  return summary.defects.map((defect) => {
+    const item = byKey.get(defect.itemKey) as ChecklistItem;
+    const row = rowByKey.get(defect.itemKey);
+    const vehicle = inspection.vehicles[item.unitIndex] ?? inspection.vehicles[0]!;
+    return manager.create(Defect, {
+      organizationId: inspection.organizationId,
+      inspectionId: inspection.id,
+      vehicleId: vehicle.id,
+      itemKey: defect.itemKey,
+      title: defect.title.slice(0, 200),
+      positionLabel: defect.positionLabel.slice(0, 200),
+      // A safety item, or any out-of-limit measurement: both keep the vehicle parked until certified.
+      safety: defect.blocksDriving,
+      detail: defect.detail ?? null,
+      measurement: defect.measurement ?? null,
+      measurementLimit:
+        row && row.limitValue !== null && row.limitUnit !== null && row.limitSource !== null
+          ? { value: row.limitValue, unit: row.limitUnit, source: row.limitSource }
+          : null,
+      status: 'open',
+    });
+  });
+}
+
 @Injectable()
 export class DefectsService {
   constructor(
@@ -36,30 +65,8 @@ export class DefectsService {
   // takes its vehicle out of service, and the mechanics and supervisors hear of it exactly once (a job
   // committed with the report).
   async openFromReport(manager: EntityManager, report: SubmittedReport): Promise<Defect[]> {
-    const { inspection, summary, byKey } = report;
-    const rowByKey = new Map(report.results.map((r) => [r.itemKey, r]));
-    const defects = summary.defects.map((defect) => {
-      const item = byKey.get(defect.itemKey) as ChecklistItem;
-      const row = rowByKey.get(defect.itemKey);
-      const vehicle = inspection.vehicles[item.unitIndex] ?? inspection.vehicles[0]!;
-      return manager.create(Defect, {
-        organizationId: inspection.organizationId,
-        inspectionId: inspection.id,
-        vehicleId: vehicle.id,
-        itemKey: defect.itemKey,
-        title: defect.title.slice(0, 200),
-        positionLabel: defect.positionLabel.slice(0, 200),
-        // A safety item, or any out-of-limit measurement: both keep the vehicle parked until certified.
-        safety: defect.blocksDriving,
-        detail: defect.detail ?? null,
-        measurement: defect.measurement ?? null,
-        measurementLimit:
-          row && row.limitValue !== null && row.limitUnit !== null && row.limitSource !== null
-            ? { value: row.limitValue, unit: row.limitUnit, source: row.limitSource }
-            : null,
-        status: 'open',
-      });
-    });
+    const { inspection } = report;
+    const defects = defectsOfReport(manager, report);
     if (defects.length === 0) return defects;
     await manager.save(Defect, defects);
     const safety = defects.filter((d) => d.safety);
