@@ -2,8 +2,6 @@ import type { INestApplication } from '@nestjs/common';
 import { NestFactory } from '@nestjs/core';
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import {
-  sampleTractor,
-  sampleTrailer,
   type InspectionResponse,
   type LoginResponse,
   type ResultUpsert,
@@ -11,6 +9,7 @@ import {
   type VehicleRequest,
   type VehicleResponse,
 } from '@yardcall/shared';
+import { sampleTractor, sampleTrailer } from '@yardcall/shared/testing';
 import { randomUUID } from 'node:crypto';
 import type { AddressInfo } from 'node:net';
 import request from 'supertest';

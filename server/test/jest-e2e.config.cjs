@@ -36,6 +36,7 @@ module.exports = {
   transformIgnorePatterns: [`/node_modules/(?!(${esmOnly.join('|')})/)`],
   moduleNameMapper: {
     '^@yardcall/shared$': '<rootDir>/../shared/src/index.ts',
+    '^@yardcall/shared/testing$': '<rootDir>/../shared/src/testing.ts',
     // The shared sources (and the ESM packages) import with `.js` suffixes; Jest resolves sources.
     '^(\\.{1,2}/.*)\\.js$': '$1',
   },

@@ -3,11 +3,11 @@ import userEvent from '@testing-library/user-event';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import {
   buildChecklist,
-  sampleTractor,
   scoreNarration,
   type PutTrainingReviewRequest,
   type TrainingAttemptResponse,
 } from '@yardcall/shared';
+import { sampleTractor } from '@yardcall/shared/testing';
 import { mockApi } from '@/testing/mock-api';
 import { renderWithProviders } from '@/testing/render';
 import { AttemptReview } from './attempt-review';
