@@ -1,8 +1,8 @@
 export * from './vehicle/index.js';
 export * from './units/index.js';
 export * from './checklist/index.js';
-export * from './text/index.js';
-export * from './numbers/index.js';
+// Text and numbers serve the interpreter and narration; the apps need only the normaliser.
+export { normaliseText, type NormalisedText } from './text/index.js';
 export * from './interpreter/index.js';
 export * from './limits/index.js';
 export * from './api/index.js';

@@ -1,2 +1,10 @@
-export * from './parse-number.js';
-export * from './number-to-words.js';
+// The numbers area's surface: spoken numbers read (interpreter) and said back (read-back).
+export { findNumbers, type NumberForm, type NumberOptions, type NumberSpan } from './parse-number.js';
+export {
+  apocopate,
+  denominatorWord,
+  fractionToWords,
+  integerToWords,
+  numberToWords,
+  toCommonFraction,
+} from './number-to-words.js';

@@ -1,6 +1,6 @@
-export * from './fold-text.js';
-export * from './stem-word.js';
-export * from './number-words.js';
-export * from './normalise-text.js';
-export * from './to-words.js';
-export * from './original-words.js';
+// The text area's surface: what the interpreter, the number reader and narration use.
+export { normaliseText, sliceText, type NormalisedText } from './normalise-text.js';
+export { originalWords } from './original-words.js';
+export { stemWord } from './stem-word.js';
+export { toWords, type Word } from './to-words.js';
+export { NUMBER_WORDS, type NumberWords } from './number-words.js';
