@@ -5,7 +5,7 @@ import {
   RetentionError,
   checkRetentionMonths,
   retentionCutoff,
-} from './index.js';
+} from './retention.js';
 
 describe('record retention (49 CFR 396.11(a)(4): three months)', () => {
   it('defaults to and never goes below three months', () => {

@@ -8,14 +8,8 @@ import {
   type ItemResult,
 } from '../checklist/index.js';
 import { RUSHED_RULE, summarizeInspection } from '../summary/index.js';
-import {
-  RECURRING_RULE,
-  findRecurringDefects,
-  itemKeyOnUnit,
-  rushedFlag,
-  walkedRoute,
-  type EarlierDefect,
-} from './index.js';
+import { RECURRING_RULE, findRecurringDefects, rushedFlag, walkedRoute, type EarlierDefect } from './index.js';
+import { itemKeyOnUnit } from './recurring.js';
 
 function item(key: string, zone: string): ChecklistItem {
   return {
