@@ -24,6 +24,8 @@ export interface SpeechPlan {
   chatter?: boolean;
   // How long after listening starts an answer comes (default 40 ms).
   answerMs?: number;
+  // The phone recognises speech on the device (no network needed), as some phones do.
+  onDevice?: boolean;
 }
 
 // Headless Chromium cannot speak or listen: both are replaced before the app loads. The fake
@@ -129,6 +131,11 @@ function fakeSpeech(p: SpeechPlan): void {
   };
 
   class FakeRecognition {
+    // Without `onDevice`, recognition needs a network, as a browser's server-side recogniser does.
+    static available(): Promise<string> {
+      return Promise.resolve(p.onDevice ? 'available' : 'unavailable');
+    }
+    processLocally = false;
     lang = '';
     continuous = false;
     interimResults = false;

@@ -107,7 +107,7 @@ async function walkAroundOffline(
     const url = page.url();
     await page.close();
     page = await context.newPage();
-    await installFakeSpeech(page, { answerTurns: null, skipAt: null, noteAt: null, lowTreadKey: null });
+    await installFakeSpeech(page, { answerTurns: null, skipAt: null, noteAt: null, lowTreadKey: null, onDevice: true });
     await page.goto(url);
     await expect(page.getByTestId('glove-screen')).toBeVisible();
     await expect(page.getByTestId('walkaround-progress')).toHaveText(progress ?? '');
@@ -132,7 +132,13 @@ test('with no signal from a cold start: home, start, a walk-around reloaded at t
 }) => {
   test.setTimeout(300_000);
   const baseUrl = baseURL ?? '';
-  await installFakeSpeech(firstPage, { answerTurns: 10, skipAt: null, noteAt: null, lowTreadKey: null });
+  await installFakeSpeech(firstPage, {
+    answerTurns: 10,
+    skipAt: null,
+    noteAt: null,
+    lowTreadKey: null,
+    onDevice: true,
+  });
   await signInWithSignal(firstPage, baseUrl);
 
   const { clientId, page } = await walkAroundOffline(firstPage, context, baseUrl, 10);
@@ -176,7 +182,7 @@ test('the server stopped and started again while the phone syncs: nothing lost, 
   const db = new pg.Client({ connectionString: databaseUrl });
   await db.connect();
   try {
-    await installFakeSpeech(page, { answerTurns: null, skipAt: null, noteAt: null, lowTreadKey: null });
+    await installFakeSpeech(page, { answerTurns: null, skipAt: null, noteAt: null, lowTreadKey: null, onDevice: true });
     await signInWithSignal(page, baseUrl);
     const { clientId } = await walkAroundOffline(page, context, baseUrl, null);
 

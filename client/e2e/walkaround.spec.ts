@@ -310,7 +310,14 @@ async function inspectionByClientId(page: Page, clientId: string): Promise<Inspe
 test('with the network cut halfway and restored, nothing is lost and nothing is doubled', async ({ page, context }) => {
   test.setTimeout(240_000);
   // Slower answers, so the network is cut while the walk-around runs.
-  await installFakeSpeech(page, { answerTurns: null, skipAt: null, noteAt: 10, lowTreadKey: null, answerMs: 400 });
+  await installFakeSpeech(page, {
+    answerTurns: null,
+    skipAt: null,
+    noteAt: 10,
+    lowTreadKey: null,
+    answerMs: 400,
+    onDevice: true,
+  });
   await signIn(page, 'driver@yardcall.test');
   await expect(page.getByRole('heading', { level: 1, name: 'Driver home' })).toBeVisible();
   await startUnit(page, 'KV-102', 'none');
@@ -337,4 +344,29 @@ test('with the network cut halfway and restored, nothing is lost and nothing is 
   expect(keys.sort()).toEqual(inspection.checklist.items.map((item) => item.key).sort());
   expect(inspection.notes).toHaveLength(1);
   expect(inspection.defects).toEqual([]);
+});
+
+test('with no signal and a recogniser that needs one, the prompts go on and the buttons answer; the driver is told once', async ({
+  page,
+  context,
+}) => {
+  await installFakeSpeech(page, { answerTurns: null, skipAt: null, noteAt: null, lowTreadKey: null, answerMs: 60_000 });
+  await signIn(page, 'driver@yardcall.test');
+  await expect(page.getByRole('heading', { level: 1, name: 'Driver home' })).toBeVisible();
+  await startUnit(page, 'KV-S31', null);
+  await context.setOffline(true);
+  await page.getByTestId('start-walkaround').click();
+  const progress = page.getByTestId('walkaround-progress');
+  await expect(page.getByText(/No signal: speech recognition needs one here/)).toBeVisible();
+  await page.getByRole('button', { name: 'All good' }).click();
+  await expect(progress).not.toContainText(/^0 of/);
+  const first = await progress.textContent();
+  await page.getByRole('button', { name: 'All good' }).click();
+  await expect(progress).not.toHaveText(first ?? '');
+  const spoken = await page.evaluate(() => (window as unknown as { __spoken: string[] }).__spoken);
+  expect(spoken.filter((s) => s.startsWith('No signal'))).toHaveLength(1);
+  // Nothing was heard: every answer came from a tap.
+  const turns = await page.evaluate(() => (window as unknown as { __speechTurns: unknown[] }).__speechTurns);
+  expect(turns).toHaveLength(0);
+  await context.setOffline(false);
 });

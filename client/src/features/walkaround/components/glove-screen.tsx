@@ -79,6 +79,7 @@ export function GloveScreen({ walkaround, onFinished, createEngine }: GloveScree
   const [listOpen, setListOpen] = useState(false);
   const startWhenReady = useRef(false);
   const screenRef = useRef<HTMLDivElement>(null);
+  const resultWrites = useRef(new Set<Promise<unknown>>());
   const resultIds = useRef(new Map(walkaround.results.map((r) => [r.itemKey, r.clientId])));
   const recording = useRef<{ itemKey: string; pending: Promise<NoteRecording | null> } | null>(null);
   const commandRef = useRef<(command: 'end_note') => void>(() => undefined);
@@ -176,7 +177,13 @@ export function GloveScreen({ walkaround, onFinished, createEngine }: GloveScree
         }
         // The photo button stays with the last defect named, whatever passes the same stop saved after it.
         if (result.answer === 'defect' && !result.fixed) setLastDefect(result);
-        await store.saveResults(clientId, [{ ...result, clientId: id }]);
+        const write = store.saveResults(clientId, [{ ...result, clientId: id }]);
+        resultWrites.current.add(write);
+        try {
+          await write;
+        } finally {
+          resultWrites.current.delete(write);
+        }
       },
       onState: (state) => {
         // The loop's state is plain JSON: stored as it is, read back on reload.
@@ -186,7 +193,9 @@ export function GloveScreen({ walkaround, onFinished, createEngine }: GloveScree
       },
       onStartNote: (itemKey) => startNote(itemKey),
       onStopNote: (_itemKey, words) => finishNote(words),
-      onFinish: () => onFinished(),
+      // A stop's answers are still being written when the last one finishes the walk-around: the
+      // finish screen reads them from the store, so it opens once they are there.
+      onFinish: () => void Promise.allSettled([...resultWrites.current]).then(() => onFinished()),
       onHostError: (error) => setProblem(describeError(error)),
     },
   });
