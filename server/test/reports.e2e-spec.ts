@@ -42,8 +42,8 @@ const PNG_DRAWING = `data:image/png;base64,${makePng().toString('base64')}`;
 function tractorAndTrailer(): Checklist {
   return buildChecklist(
     [
-      { id: randomUUID(), unitNumber: 'KV-118', kind: 'tractor', config: sampleTractor().config },
-      { id: randomUUID(), unitNumber: 'KV-T40', kind: 'trailer', config: sampleTrailer().config },
+      { unitNumber: 'KV-118', kind: 'tractor', config: sampleTractor().config },
+      { unitNumber: 'KV-T40', kind: 'trailer', config: sampleTrailer().config },
     ],
     'pre_trip',
     'en',
