@@ -6,7 +6,7 @@ import { ApiValidationException } from '../common/api-validation.exception';
 import { Inspection } from '../inspections/entities/inspection.entity';
 import type { ItemResult } from '../inspections/entities/item-result.entity';
 import { Signature } from '../inspections/entities/signature.entity';
-import { mechanicStatement } from '../inspections/statements';
+import { mechanicStatement, signerColumns } from '../inspections/statements';
 import { toDefectResponses } from './defect-view';
 import type { ListDefectsQuery, RepairRequestDto } from './dto/defect.dto';
 import { Defect } from './entities/defect.entity';
@@ -155,9 +155,7 @@ export class DefectsService {
         inspectionId: defect.inspectionId,
         defectId: defect.id,
         role: 'mechanic',
-        signerId: user.id,
-        name: dto.signature.name,
-        drawing: dto.signature.drawing ?? null,
+        ...signerColumns(user, dto.signature),
         statement: mechanicStatement(inspection.locale, {
           name: dto.signature.name,
           unit,

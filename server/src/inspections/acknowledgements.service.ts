@@ -11,7 +11,7 @@ import { InspectionVehicle } from './entities/inspection-vehicle.entity';
 import { Inspection } from './entities/inspection.entity';
 import { Signature } from './entities/signature.entity';
 import { toSignatureResponse } from './inspection-view';
-import { nextDriverStatement } from './statements';
+import { nextDriverStatement, signerColumns } from './statements';
 
 // Before driving, the next driver reviews the last report and signs that its repairs were certified (49 CFR 396.13).
 @Injectable()
@@ -95,9 +95,7 @@ export class AcknowledgementsService {
           inspectionId: inspection.id,
           defectId: null,
           role: 'next_driver',
-          signerId: user.id,
-          name: dto.signature.name,
-          drawing: dto.signature.drawing ?? null,
+          ...signerColumns(user, dto.signature),
           statement: nextDriverStatement(inspection.locale, {
             name: dto.signature.name,
             units: inspection.vehicles.map((v) => v.unitNumber),

@@ -29,7 +29,7 @@ import { assertEditable, findReadableInspection, INSPECTION_NOT_FOUND } from './
 import { InspectionChecklists } from './inspection-checklists';
 import { toListItem, toResultResponse, toSharedResult, toSignatureResponse } from './inspection-view';
 import { recurringDefectsOf } from './review';
-import { driverStatement } from './statements';
+import { driverStatement, signerColumns } from './statements';
 
 // A signature cannot come before the walk-around began (the future is the DTO's to refuse).
 function signedTimeOf(dto: SubmitInspectionDto, startedAt: Date, now: Date): Date {
@@ -167,9 +167,7 @@ export class InspectionsService {
         inspectionId: id,
         defectId: null,
         role: 'driver',
-        signerId: user.id,
-        name: dto.signature.name,
-        drawing: dto.signature.drawing ?? null,
+        ...signerColumns(user, dto.signature),
         statement: driverStatement(inspection.locale, {
           name: dto.signature.name,
           units: inspection.vehicles.map((v) => v.unitNumber),

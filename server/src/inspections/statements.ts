@@ -1,4 +1,5 @@
-import type { CertificationAction, Locale } from '@yardcall/shared';
+import type { CertificationAction, Locale, SignatureInput } from '@yardcall/shared';
+import type { AuthUser } from '../auth/auth-user';
 
 // What each signer certifies, in the inspection's language. The driver's statement follows what the
 // report must say (49 CFR 396.11(a)(2)); the mechanic's, the certification of 396.11(a)(3); the next
@@ -60,4 +61,13 @@ export function nextDriverStatement(locale: Locale, input: StatementInput): stri
   return locale === 'es'
     ? `Yo, ${input.name}, revisé el último informe de inspección de ${units}, del ${day(input.date, locale)}, y las certificaciones de reparación de sus defectos, y lo firmo como constancia de esa revisión.`
     : `I, ${input.name}, reviewed the last inspection report of ${units}, of ${day(input.date, locale)}, and the repair certifications of its defects, and sign it to acknowledge that review.`;
+}
+
+// The columns of a signature row that come from who signs and what they sent; the role, the statement
+// and the time are the caller's.
+export function signerColumns(
+  user: AuthUser,
+  signature: SignatureInput,
+): { signerId: string; name: string; drawing: string | null } {
+  return { signerId: user.id, name: signature.name, drawing: signature.drawing ?? null };
 }
