@@ -2,7 +2,7 @@
 // good words next to a problem, hedges and half sentences.
 import type { NormalisedText } from '../text/index.js';
 import type { CompiledLexicon, WordCategory } from './compiled-lexicon.js';
-import type { PhraseMatch } from './phrase-matcher.js';
+import type { PhraseMatch } from '../text/index.js';
 import type { UnclearReason } from './types.js';
 
 export type WordItem = PhraseMatch<WordCategory | undefined>;

@@ -5,7 +5,7 @@ import type { Unit } from '../units/index.js';
 import { EN_LEXICON } from './lexicon/en.js';
 import { ES_LEXICON } from './lexicon/es.js';
 import type { AnswerLexicon, SpokenCommand } from './lexicon/lexicon-types.js';
-import { PhraseMatcher, type PhraseGroup } from './phrase-matcher.js';
+import { PhraseMatcher, type PhraseGroup } from '../text/index.js';
 
 export type WordCategory =
   | { kind: 'filler' }

@@ -7,7 +7,7 @@ import { QUANTITIES, type Quantity } from '../units/index.js';
 import { classifyWords, withoutFillers, type WordItem, type WordsVerdict } from './classify-words.js';
 import type { CompiledLexicon } from './compiled-lexicon.js';
 import { disagreement, openAnswer, opposed, ranked, saysNoGauge, type Stance } from './interpret-utterance.js';
-import { PhraseMatcher, type PhraseMatch } from './phrase-matcher.js';
+import { PhraseMatcher, type PhraseMatch } from '../text/index.js';
 import { readFix, type FixReading } from './read-fix.js';
 import { applyHomophones, correctedFrom, readMeasurement } from './read-measurement.js';
 import type {

@@ -2,7 +2,7 @@
 // become cues, filler is dropped, and every other word stays as its stem.
 import type { Locale } from '../checklist/index.js';
 import { CONCEPTS, CUES, STOP_WORDS, type CueKind } from './lexicon.js';
-import { toWords, type Word } from '../text/index.js';
+import { PhraseMatcher, toWords, type CompiledPhrase, type PhraseGroup, type Word } from '../text/index.js';
 import { isPluralWord, withinOneEdit } from './word-match.js';
 
 export interface Term {
@@ -14,14 +14,14 @@ export interface Term {
   wordIndex: number;
 }
 
-interface PhraseEntry {
-  stems: string[];
+// What a phrase stands for: a concept term ("#slack_adjuster"), or a cue with an empty term.
+interface PhraseMeaning {
   term: string;
   cue?: CueKind;
 }
 
 interface PhraseIndex {
-  byFirstStem: Map<string, PhraseEntry[]>;
+  phrases: PhraseMatcher<PhraseMeaning>;
   stopSurfaces: Set<string>;
   stopStems: Set<string>;
   // Long words of the lexicon by first letter, with their stems, for mending a recogniser's near miss.
@@ -34,19 +34,17 @@ interface PhraseIndex {
 
 const indexes = new Map<Locale, PhraseIndex>();
 
-function addPhrase(index: PhraseIndex, phrase: string, locale: Locale, term: string, cue?: CueKind): void {
+// Narration reads phrases as it reads what was said: through toWords (spoken numbers as digits).
+function compileNarrationPhrase(phrase: string, locale: Locale): CompiledPhrase {
+  return { keys: toWords(phrase, locale).map((word) => word.stem), anchored: false };
+}
+
+// The lexicon's words, for mending a recogniser's near miss; a phrase whose stems came earlier adds none.
+function addVocabulary(index: PhraseIndex, phrase: string, locale: Locale, seen: Set<string>): void {
   const words = toWords(phrase, locale);
-  const stems = words.map((word) => word.stem);
-  const first = stems[0];
-  if (first === undefined) return;
-  const entries = index.byFirstStem.get(first) ?? [];
-  // The first registration of a phrase wins; concepts are registered before cues.
-  if (entries.some((entry) => entry.stems.join(' ') === stems.join(' '))) return;
-  const entry: PhraseEntry = { stems, term };
-  if (cue) entry.cue = cue;
-  entries.push(entry);
-  entries.sort((a, b) => b.stems.length - a.stems.length);
-  index.byFirstStem.set(first, entries);
+  const stems = words.map((word) => word.stem).join(' ');
+  if (seen.has(stems)) return;
+  seen.add(stems);
   for (const word of words) {
     index.known.add(word.stem);
     if (word.surface.length < 6 || /\d/.test(word.surface)) continue;
@@ -57,8 +55,13 @@ function addPhrase(index: PhraseIndex, phrase: string, locale: Locale, term: str
 }
 
 function buildIndex(locale: Locale): PhraseIndex {
+  // Concepts before cues: a phrase that is both is the concept (the earlier group wins a tie).
+  const groups: PhraseGroup<PhraseMeaning>[] = [
+    ...CONCEPTS.map((concept) => ({ category: { term: `#${concept.id}` }, phrases: concept[locale] })),
+    ...CUES.map((cue) => ({ category: { term: '', cue: cue.cue }, phrases: cue[locale] })),
+  ];
   const index: PhraseIndex = {
-    byFirstStem: new Map(),
+    phrases: new PhraseMatcher(locale, groups, compileNarrationPhrase),
     stopSurfaces: new Set(STOP_WORDS[locale]),
     stopStems: new Set(STOP_WORDS[locale].map((word) => toWords(word, locale)[0]?.stem ?? word)),
     vocabulary: new Map(),
@@ -66,12 +69,8 @@ function buildIndex(locale: Locale): PhraseIndex {
     mended: new Map(),
     termsOfText: new Map(),
   };
-  for (const concept of CONCEPTS) {
-    for (const phrase of concept[locale]) addPhrase(index, phrase, locale, `#${concept.id}`);
-  }
-  for (const cue of CUES) {
-    for (const phrase of cue[locale]) addPhrase(index, phrase, locale, '', cue.cue);
-  }
+  const seen = new Set<string>();
+  for (const group of groups) for (const phrase of group.phrases) addVocabulary(index, phrase, locale, seen);
   for (const bucket of index.vocabulary.values()) bucket.sort((a, b) => (a[0] < b[0] ? -1 : a[0] > b[0] ? 1 : 0));
   return index;
 }
@@ -101,14 +100,6 @@ function mendStem(word: Word, index: PhraseIndex): string {
   return mended;
 }
 
-function matchAt(words: readonly Word[], stems: readonly string[], start: number, entry: PhraseEntry): boolean {
-  if (start + entry.stems.length > words.length) return false;
-  for (let k = 0; k < entry.stems.length; k++) {
-    if (stems[start + k] !== entry.stems[k]) return false;
-  }
-  return true;
-}
-
 export interface TermsOfText {
   terms: Term[];
   wordCount: number;
@@ -127,18 +118,19 @@ export function toTerms(text: string, locale: Locale): TermsOfText {
 function termsOf(text: string, locale: Locale, index: PhraseIndex): TermsOfText {
   const words = toWords(text, locale);
   const stems = words.map((word) => mendStem(word, index));
+  const stemmed = { tokens: words.map((word) => word.surface), stems };
   const terms: Term[] = [];
   let i = 0;
   while (i < words.length) {
     const word = words[i]!;
-    const entries = index.byFirstStem.get(stems[i]!);
-    const entry = entries?.find((candidate) => matchAt(words, stems, i, candidate));
-    if (entry) {
-      const last = words[i + entry.stems.length - 1]!;
-      const term: Term = { term: entry.term, plural: isPluralWord(last.surface), wordIndex: i };
-      if (entry.cue) term.cue = entry.cue;
-      if (!entry.cue || entry.cue.type !== 'filler') terms.push(term);
-      i += entry.stems.length;
+    const match = index.phrases.matchAt(stemmed, i);
+    if (match) {
+      const { term: meaning, cue } = match.category;
+      const last = words[match.end - 1]!;
+      const term: Term = { term: meaning, plural: isPluralWord(last.surface), wordIndex: i };
+      if (cue) term.cue = cue;
+      if (!cue || cue.type !== 'filler') terms.push(term);
+      i = match.end;
       continue;
     }
     if (!index.stopSurfaces.has(word.surface) && !index.stopStems.has(stems[i]!)) {

@@ -3,4 +3,11 @@ export { normaliseText, sliceText, type NormalisedText } from './normalise-text.
 export { originalWords } from './original-words.js';
 export { stemWord } from './stem-word.js';
 export { toWords, type Word } from './to-words.js';
+export {
+  PhraseMatcher,
+  type CompiledPhrase,
+  type PhraseGroup,
+  type PhraseMatch,
+  type StemmedWords,
+} from './phrase-matcher.js';
 export { NUMBER_WORDS, type NumberWords } from './number-words.js';

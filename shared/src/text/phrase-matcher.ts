@@ -1,6 +1,7 @@
-// Longest-phrase matching of lexicon entries over normalised, stemmed words.
-import type { Locale } from '../checklist/index.js';
-import { normaliseText, type NormalisedText } from '../text/index.js';
+// Longest-phrase matching of lexicon entries over stemmed words: the interpreter's over normalised
+// text, narration's over its words. One matcher, so a phrase means the same wherever it is heard.
+import type { Locale } from '../checklist/types.js';
+import { normaliseText } from './normalise-text.js';
 
 interface Entry<C> {
   // Stems to match, or "=token" for an exact word.
@@ -16,12 +17,25 @@ export interface PhraseMatch<C> {
   end: number;
 }
 
+// Words as a matcher reads them: each word (tokens) beside its stem (stems), the same length.
+export interface StemmedWords {
+  readonly tokens: readonly string[];
+  readonly stems: readonly string[];
+}
+
 export interface PhraseGroup<C> {
   category: C;
   phrases: readonly string[];
 }
 
-function compileKeys(phrase: string, locale: Locale): { keys: string[]; anchored: boolean } {
+export interface CompiledPhrase {
+  keys: string[];
+  anchored: boolean;
+}
+
+// The interpreter's phrases: words through normaliseText; "=word" matches that exact word, a final
+// "$" only at the end of the answer.
+export function compileNormalisedPhrase(phrase: string, locale: Locale): CompiledPhrase {
   const words = phrase.trim().split(/\s+/);
   const anchored = words[words.length - 1] === '$';
   if (anchored) words.pop();
@@ -38,11 +52,16 @@ function compileKeys(phrase: string, locale: Locale): { keys: string[]; anchored
 export class PhraseMatcher<C> {
   private readonly byFirst = new Map<string, Entry<C>[]>();
 
-  // Earlier groups win ties between phrases of the same length.
-  constructor(locale: Locale, groups: readonly PhraseGroup<C>[]) {
+  // Earlier groups win ties between phrases of the same length, and within a group the phrase listed
+  // first. `compile` turns a phrase into its keys (by default as the interpreter reads it).
+  constructor(
+    locale: Locale,
+    groups: readonly PhraseGroup<C>[],
+    compile: (phrase: string, locale: Locale) => CompiledPhrase = compileNormalisedPhrase,
+  ) {
     groups.forEach((group, priority) => {
       for (const phrase of group.phrases) {
-        const { keys, anchored } = compileKeys(phrase, locale);
+        const { keys, anchored } = compile(phrase, locale);
         const first = keys[0];
         if (first === undefined) continue;
         const list = this.byFirst.get(first) ?? [];
@@ -52,7 +71,7 @@ export class PhraseMatcher<C> {
     });
   }
 
-  private fits(entry: Entry<C>, text: NormalisedText, i: number): boolean {
+  private fits(entry: Entry<C>, text: StemmedWords, i: number): boolean {
     const end = i + entry.keys.length;
     if (end > text.tokens.length) return false;
     if (entry.anchored && end !== text.tokens.length) return false;
@@ -61,7 +80,8 @@ export class PhraseMatcher<C> {
     );
   }
 
-  matchAt(text: NormalisedText, i: number): PhraseMatch<C> | undefined {
+  // The longest phrase starting at word i, if any.
+  matchAt(text: StemmedWords, i: number): PhraseMatch<C> | undefined {
     const candidates = [
       ...(this.byFirst.get(text.stems[i] ?? '') ?? []),
       ...(this.byFirst.get(`=${text.tokens[i] ?? ''}`) ?? []),
@@ -81,7 +101,7 @@ export class PhraseMatcher<C> {
   }
 
   // Left to right, longest first; words no phrase covers come back as `undefined` categories.
-  scan(text: NormalisedText): PhraseMatch<C | undefined>[] {
+  scan(text: StemmedWords): PhraseMatch<C | undefined>[] {
     const out: PhraseMatch<C | undefined>[] = [];
     let i = 0;
     while (i < text.tokens.length) {
