@@ -57,6 +57,7 @@ function fakeSpeech(p: SpeechPlan): void {
   let asked = 0;
   let skipped = false;
   let noted = 0;
+  let lowSaid = false;
   let chatty = 0;
   const air: Record<string, string> = {
     low_air_warning: 'sixty five psi',
@@ -119,12 +120,19 @@ function fakeSpeech(p: SpeechPlan): void {
       skipped = true;
       return record('skip');
     }
+    // A note about the low tread is said as the next prompt starts, once the defect is recorded.
+    const noteOnDefect = p.noteKey !== undefined && p.noteKey === p.lowTreadKey;
     const noteHere =
       p.noteKey !== undefined &&
-      (key === p.noteKey || (mode === 'stop' && card?.dataset.stopItems?.split(' ').includes(p.noteKey)));
+      (noteOnDefect
+        ? lowSaid
+        : key === p.noteKey || (mode === 'stop' && card?.dataset.stopItems?.split(' ').includes(p.noteKey)));
     if (noted === 0 && ((p.noteAt !== null && asked === p.noteAt) || noteHere)) return record('note');
     const lowHere = p.lowTreadKey !== null && card?.dataset.stopItems?.split(' ').includes(p.lowTreadKey);
-    if (mode === 'stop' && lowHere) return record('good, one thirty-second');
+    if (mode === 'stop' && lowHere && !lowSaid) {
+      lowSaid = true;
+      return record('good, one thirty-second');
+    }
     if (mode === 'stop') return record('good');
     if (key === p.lowTreadKey) return record('one thirty-second');
     return record(expects === 'check' ? 'good' : measure(expects, key));

@@ -18,8 +18,11 @@ interface ScreenModule {
 // The root loads the core words (the shell's and the sign-in's among them); every screen loads
 // its part with its code.
 const DRIVER_WORDS: WordPart[] = ['driver'];
-const FINISH_WORDS: WordPart[] = ['finish'];
-const OFFICE_WORDS: WordPart[] = ['screens'];
+// The finish screen signs with the same words as the next driver's review (the driver's part).
+const FINISH_WORDS: WordPart[] = ['driver', 'finish'];
+// Office screens name units, kinds and statuses too (the driver's part) and show reports (the finish
+// part); only the driver's first load is kept small.
+const OFFICE_WORDS: WordPart[] = ['driver', 'finish', 'screens'];
 
 // A screen behind the role check, in its own chunk. Its data is fetched only once the check
 // passes, so a signed-out visitor or another role never fires the screen's calls.

@@ -77,7 +77,7 @@ function FinishForm({ walkaround, runPath }: { walkaround: LocalWalkaround; runP
   const onSubmit = (event: FormEvent) => {
     event.preventDefault();
     const next: typeof errors = {};
-    if (name.trim() === '') next.name = t('walkaround.finish.nameNeeded');
+    if (name.trim() === '') next.name = t('walkaround.sign.nameNeeded');
     const miles = odometer.trim() === '' ? undefined : Number(odometer);
     if (miles !== undefined && (!Number.isInteger(miles) || miles < 0))
       next.odometer = t('walkaround.finish.odometerWrong');
@@ -174,15 +174,15 @@ function FinishForm({ walkaround, runPath }: { walkaround: LocalWalkaround; runP
           })}
         </p>
         <TextField
-          label={t('walkaround.finish.name')}
+          label={t('walkaround.sign.name')}
           value={name}
           onChange={(event) => setName(event.target.value)}
           error={errors.name}
           autoComplete="name"
         />
         <SignaturePad
-          label={t('walkaround.finish.signature')}
-          clearLabel={t('walkaround.finish.clearSignature')}
+          label={t('walkaround.sign.signature')}
+          clearLabel={t('walkaround.sign.clearSignature')}
           onChange={setDrawing}
         />
         <p>{t('walkaround.finish.noSignalNeeded')}</p>

@@ -73,7 +73,7 @@ export function PendingAcknowledgementReview({
   const submit = (event: FormEvent) => {
     event.preventDefault();
     if (name.trim() === '') {
-      setNameError(t('walkaround.finish.nameNeeded'));
+      setNameError(t('walkaround.sign.nameNeeded'));
       return;
     }
     setNameError(undefined);
@@ -118,15 +118,15 @@ export function PendingAcknowledgementReview({
       <form onSubmit={submit} className="flex flex-col gap-tap-gap" noValidate>
         <p className="font-bold">{t('walkaround.ack.statement', { unit })}</p>
         <TextField
-          label={t('walkaround.finish.name')}
+          label={t('walkaround.sign.name')}
           value={name}
           onChange={(event) => setName(event.target.value)}
           error={nameError}
           autoComplete="name"
         />
         <SignaturePad
-          label={t('walkaround.finish.signature')}
-          clearLabel={t('walkaround.finish.clearSignature')}
+          label={t('walkaround.sign.signature')}
+          clearLabel={t('walkaround.sign.clearSignature')}
           onChange={setDrawing}
         />
         {acknowledge.isError ? <ErrorAlert>{describeError(acknowledge.error)}</ErrorAlert> : null}

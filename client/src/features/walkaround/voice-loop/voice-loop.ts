@@ -129,7 +129,8 @@ export interface VoiceLoopState {
   gaugeless: boolean;
   pending: PendingKeep | null;
   which: PendingWhich | null;
-  // The last defect recorded, which "fixed" applies to.
+  // The defect the last answer recorded: "fixed" and a note said next apply to it. The next answer
+  // that records no defect clears it.
   lastDefectKey: string | null;
   // An in-limit value said back at the start of the current prompt: "no" or "back" corrects it.
   saidBack: string | null;
@@ -512,7 +513,8 @@ function save(step: Step, results: readonly ItemResult[]): Step {
   const keys = results.map((r) => r.itemKey);
   const all = { ...step.state.results };
   for (const result of results) all[result.itemKey] = result;
-  step.set({ results: all, skipped: withoutKeys(step.state.skipped, keys) });
+  const defect = results.filter((r) => r.answer === 'defect' && !r.fixed).at(-1)?.itemKey ?? null;
+  step.set({ results: all, skipped: withoutKeys(step.state.skipped, keys), lastDefectKey: defect });
   for (const result of results) step.emit({ type: 'save', result });
   return step;
 }
@@ -689,7 +691,6 @@ function keepPending(step: Step, ctx: VoiceLoopContext, at: string): Step {
   }
   save(step, pending.results);
   const defects = pending.results.filter((r) => r.answer === 'defect').map((r) => r.itemKey);
-  if (defects.length > 0) step.set({ lastDefectKey: defects.at(-1) ?? null });
   if (pending.verdict === 'out_of_limit' && pending.measurement) {
     return advance(
       step,
@@ -731,7 +732,6 @@ function recordFix(
     if (verdict) fixed.verdict = verdict.verdict;
   }
   save(step, [{ ...defect, fixed }]);
-  step.set({ lastDefectKey: null });
   return backToWhereWeWere(step, ctx, 'asking', fillWords(w.fixedNoted, { item: item.name }));
 }
 
@@ -853,10 +853,9 @@ function command(step: Step, ctx: VoiceLoopContext, cmd: Exclude<Command, 'langu
       step.set({ phase: 'paused', returnTo: phase, silent: 0 });
       return step.say(w.paused).listen('paused');
     case 'note': {
-      // At a stop, a note belongs to the defect just named there, else to the stop's first item.
-      const stopKeys = checklist.stops[state.stop]?.itemKeys ?? [];
-      const defectHere = state.lastDefectKey && stopKeys.includes(state.lastDefectKey) ? state.lastDefectKey : null;
-      const noteItemKey = state.current?.key ?? defectHere ?? state.itemKey;
+      // A note belongs to the item asked on its own, else to the defect just recorded (the driver
+      // describes it as the next prompt starts), else to the stop's first item.
+      const noteItemKey = state.current?.key ?? state.lastDefectKey ?? state.itemKey;
       step.set({ phase: 'noting', returnTo: phase, noteHeard: [], noteItemKey, silent: 0 });
       // Said before the recording starts, so the note does not begin with our own voice.
       return step
@@ -1026,7 +1025,6 @@ function keepStopAnswer(
     return step.say(question).listen('confirm');
   }
   save(step, results);
-  if (defects.length > 0) step.set({ lastDefectKey: defects.at(-1) ?? null });
   const measured = results.filter((r) => r.measurement && r.answer === 'pass').at(-1)?.itemKey ?? null;
   const prefix: Prefix = [...spoken, defectSentence(step, ctx, defects)];
   if (risky) {
@@ -1089,7 +1087,6 @@ function onItemAnswer(
       if (meaning.answer === 'defect' && meaning.detail) result.detail = meaning.detail;
       save(step, [result]);
       if (meaning.answer !== 'defect') return advance(step, ctx);
-      step.set({ lastDefectKey: item.key });
       return advance(step, ctx, defectSentence(step, ctx, [item.key]));
     }
   }
