@@ -1,1 +1,2 @@
 export * from './summarize-inspection.js';
+export * from './spot-fix.js';

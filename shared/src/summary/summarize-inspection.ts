@@ -10,6 +10,8 @@ import type {
   Verdict,
 } from '../checklist/index.js';
 
+import { fixNeedsReading } from './spot-fix.js';
+
 export const CERTIFICATION_ACTIONS = ['repaired', 'no_repair_needed', 'deferred'] as const;
 export type CertificationAction = (typeof CERTIFICATION_ACTIONS)[number];
 
@@ -251,12 +253,6 @@ function checkRushed(
     minimumDurationMs,
     rule,
   };
-}
-
-// A value found out of limit is fixed only by a new value within it ("added air, now one ten"); a
-// defect the driver described (a bulb out, a loose cap) is fixed on their word.
-export function fixNeedsReading(result: Pick<ItemResult, 'verdict'>): boolean {
-  return result.verdict === 'out_of_limit';
 }
 
 // A fix counts when its new reading, if it has or needs one, was judged and is not out of limit; a

@@ -39,10 +39,11 @@ const NAV_BY_ROLE: Record<Role, { key: NavKey; to: string }[]> = {
   ],
 };
 
-// Drivers in training also practise narrated walk-arounds and read their trainer's feedback.
+// Drivers in training also practise narrated walk-arounds and read their trainer's feedback. The
+// shell is on every page, so its words are in the core part.
 const STUDENT_NAV = [
-  { key: 'practice', to: '/training/practice', label: 'training.nav.practice' },
-  { key: 'feedback', to: '/training/feedback', label: 'training.nav.feedback' },
+  { key: 'practice', to: '/training/practice' },
+  { key: 'feedback', to: '/training/feedback' },
 ] as const;
 
 const navLinkClass = ({ isActive }: { isActive: boolean }) =>
@@ -88,7 +89,7 @@ export function AppShell() {
                   ).map((item) => (
                     <li key={item.key}>
                       <NavLink to={item.to} end className={navLinkClass}>
-                        {'label' in item ? t(item.label) : t(`nav.${item.key}`)}
+                        {t(`nav.${item.key}`)}
                       </NavLink>
                     </li>
                   ))}
