@@ -1,4 +1,4 @@
-import { Body, Controller, HttpStatus, Post, Res, UploadedFile, UseInterceptors } from '@nestjs/common';
+import { Body, Controller, Post, Res, UploadedFile, UseInterceptors } from '@nestjs/common';
 import {
   ApiBadRequestResponse,
   ApiBearerAuth,
@@ -23,12 +23,12 @@ import { NotesService, type UploadResult } from '../notes/notes.service';
 import { PHOTO_MEDIA, VOICE_NOTE_MEDIA } from '../uploads/media-types';
 import { formatBytes, multipartBody, UploadInterceptor } from '../uploads/upload.interceptor';
 import { InspectionsService } from './inspections.service';
+import { answerIdempotentCreate } from '../common/idempotent-status';
 
 const ITEM_FIELDS = { itemKey: { type: 'string' }, clientId: { type: 'string' } };
 
-// 201 for a new upload, 200 when the same clientId had already stored it.
 function answer<T>(response: Response, result: UploadResult<T>): T {
-  response.status(result.created ? HttpStatus.CREATED : HttpStatus.OK);
+  answerIdempotentCreate(response, result.created);
   return result.record;
 }
 

@@ -33,6 +33,7 @@ import { CSV_BOM, csvHeader, csvRows } from './inspections-csv';
 import { InspectionListService } from './inspection-list.service';
 import { InspectionResultsService } from './inspection-results.service';
 import { InspectionsService } from './inspections.service';
+import { answerIdempotentCreate } from '../common/idempotent-status';
 
 @ApiTags('inspections')
 @ApiBearerAuth()
@@ -62,7 +63,7 @@ export class InspectionsController {
     @Res({ passthrough: true }) response: Response,
   ): Promise<InspectionResponse> {
     const { created, inspection } = await this.inspections.create(user, body);
-    response.status(created ? 201 : 200);
+    answerIdempotentCreate(response, created);
     return inspection;
   }
 

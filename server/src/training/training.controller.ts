@@ -57,6 +57,7 @@ import {
   TrainingProgressQuery,
 } from './dto/training.dto';
 import { PRACTICE_AUDIO_MEDIA, TrainingService } from './training.service';
+import { answerIdempotentCreate } from '../common/idempotent-status';
 
 const STUDENT_ONLY = 'A driver marked as a student, on their own attempt.';
 
@@ -84,7 +85,7 @@ export class TrainingController {
     @Res({ passthrough: true }) response: Response,
   ): Promise<TrainingAttemptResponse> {
     const { created, attempt } = await this.training.create(user, body);
-    response.status(created ? HttpStatus.CREATED : HttpStatus.OK);
+    answerIdempotentCreate(response, created);
     return attempt;
   }
 
@@ -126,7 +127,7 @@ export class TrainingController {
     @Res({ passthrough: true }) response: Response,
   ): Promise<TrainingAttemptResponse> {
     const { created, attempt } = await this.training.addAudio(user, id, body, file);
-    response.status(created ? HttpStatus.CREATED : HttpStatus.OK);
+    answerIdempotentCreate(response, created);
     return attempt;
   }
 

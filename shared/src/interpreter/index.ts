@@ -7,4 +7,4 @@ export { ES_LEXICON } from './lexicon/es.js';
 export * from './read-back.js';
 export * from './interpret-confirmation.js';
 export { splitEndNote } from './split-end-note.js';
-export { interpretStopAnswer } from './interpret-stop-answer.js';
+export { interpretStopAnswer, itemsNamedIn } from './interpret-stop-answer.js';

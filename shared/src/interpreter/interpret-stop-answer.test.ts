@@ -4,7 +4,7 @@ import { normaliseText } from '../text/index.js';
 import { EN_LEXICON } from './lexicon/en.js';
 import { ES_LEXICON } from './lexicon/es.js';
 import { buildChecklist, sampleCombination, type Checklist, type Locale } from '../checklist/index.js';
-import { interpretStopAnswer } from './interpret-stop-answer.js';
+import { interpretStopAnswer, itemsNamedIn } from './interpret-stop-answer.js';
 import { measurementToWords } from './read-back.js';
 import type { StopInterpretation, StopItemRef } from './types.js';
 
@@ -313,6 +313,18 @@ describe('interpretStopAnswer', () => {
 });
 
 // Every stop of the demo pre-trip as the checklist builds it, with the names it gives its items.
+describe('itemsNamedIn', () => {
+  it('names the item a short reply points at', () => {
+    expect(itemsNamedIn('the hub', wheel, 'en')).toEqual(['hub']);
+    expect(itemsNamedIn('the outer tire', duals, 'en')).toEqual(['outer.condition']);
+  });
+
+  it('names every item a shared word fits, and none for words that name nothing', () => {
+    expect(itemsNamedIn('tire', duals, 'en')).toEqual(['outer.condition', 'inner.condition']);
+    expect(itemsNamedIn('no idea', wheel, 'en')).toEqual([]);
+  });
+});
+
 function stopsOf(checklist: Checklist): StopItemRef[][] {
   return checklist.stops.map((stop) =>
     checklist.items

@@ -537,7 +537,10 @@ function withNamesAsParts(
 
 // The item a segment's names point at: the one whose names hold the most of the words named
 // ("outer tire ... flat" is the outer tire's inflation, not its condition nor the inner's inflation).
-function pointedItems(reader: Reader, names: readonly PhraseMatch<number[]>[]): { items: number[]; sure: boolean } {
+function pointedItems(
+  reader: Pick<Reader, 'text' | 'itemStems'>,
+  names: readonly PhraseMatch<number[]>[],
+): { items: number[]; sure: boolean } {
   const candidates = [...new Set(names.flatMap((name) => name.category))];
   if (candidates.length <= 1) return { items: candidates, sure: true };
   const said = new Set(names.flatMap((name) => reader.text.stems.slice(name.start, name.end)));
@@ -587,6 +590,16 @@ function stanceOf(interpretation: StopInterpretation): Stance {
   if (interpretation.kind !== 'stop') return 'other';
   if (interpretation.marks.length === 0) return 'pass';
   return interpretation.marks.some((m) => m.answer === 'defect') ? 'problem' : 'other';
+}
+
+// Which of a stop's items a short reply names ("the hub", "the inner one"), for "which one?" after a
+// problem said without its item: the items whose names the reply holds most words of.
+export function itemsNamedIn(transcript: string, items: readonly StopItemRef[], locale: Locale): string[] {
+  const { matcher, stems } = stopNames(items, locale);
+  const text = normaliseText(transcript, locale);
+  const names = nameMatches(text, matcher);
+  if (names.length === 0) return [];
+  return pointedItems({ text, itemStems: stems }, names).items.flatMap((index) => items[index]?.key ?? []);
 }
 
 // What one answer says of every item at a stop. Items it does not mark pass; a problem it cannot

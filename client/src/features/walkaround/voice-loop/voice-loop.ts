@@ -27,6 +27,7 @@ import {
   interpretStopAnswer,
   interpretUtterance,
   isReadingRequired,
+  itemsNamedIn,
   languageSwitchedPrompt,
   measurementToWords,
   readBackMeasurement,
@@ -49,7 +50,6 @@ import {
   type Verdict,
 } from '@yardcall/shared';
 import { VOICE_LOOP_WORDS, fillWords } from './voice-loop-words';
-import { namedItemKeys } from './named-items';
 
 export const VOICE_LOOP_VERSION = 2;
 
@@ -1114,9 +1114,9 @@ function onWhich(step: Step, ctx: VoiceLoopContext, which: PendingWhich, alterna
   const best = bestAlternative(alternatives);
   const candidates = which.candidates.flatMap((key) => {
     const item = itemByKey(checklist, key);
-    return item ? [item] : [];
+    return item ? [{ key: item.key, names: [item.name, ...item.names], expects: item.expects }] : [];
   });
-  const named = best ? namedItemKeys(best.transcript, candidates, step.state.locale) : [];
+  const named = best ? itemsNamedIn(best.transcript, candidates, step.state.locale) : [];
   if (named.length === 1 && stop) {
     const marks: StopMark[] = [{ itemKey: named[0] as string, answer: 'defect', detail: which.detail }];
     step.set({ which: null });
