@@ -259,6 +259,35 @@ describe('required readings, checks without a reading and fixes on the spot', ()
       expect(count!.n).toBe(0);
     });
 
+    it('refuses a fix of a value out of limit sent without a new reading, naming the reading it needs', async () => {
+      const { inspection, at } = await begin();
+      const pressure = tirePressure(inspection.checklist.items);
+      const check = lamp(inspection.checklist.items);
+      const specPsi = pressure.limitContext!.specPsi!;
+      const low = { quantity: 'tire_pressure' as const, value: Math.round(specPsi / 2), unit: 'psi' };
+      const refused = await put(inspection.id, [
+        answer(pressure, at(10), { answer: 'defect', measurement: low, fixed: { action: 'added air', at: at(60) } }),
+      ]);
+      expect(refused.status).toBe(400);
+      expect(errorBody(refused).fields).toEqual([
+        {
+          field: 'results.0.fixed.measurement',
+          message: expect.stringMatching(/out of limit .*49 CFR 393\.75.*needs the new reading/) as string,
+        },
+      ]);
+      const [count] = await t.dataSource.query<{ n: number }[]>(
+        'SELECT count(*)::int AS n FROM item_results WHERE inspection_id = $1',
+        [inspection.id],
+      );
+      expect(count!.n).toBe(0);
+      // A defect the driver described is still fixed on their word.
+      const described = await put(inspection.id, [
+        answer(check, at(10), { answer: 'defect', detail: 'lens dirty', fixed: { action: 'wiped it', at: at(20) } }),
+      ]);
+      expect(described.status).toBe(200);
+      expect(bodyOf<PutResultsResponse>(described).results[0]!.fixed).toEqual({ action: 'wiped it', at: at(20) });
+    });
+
     it('refuses a fix on a pass, a blank or overlong action, and a new reading on a check that takes none', async () => {
       const { inspection, at } = await begin();
       const check = lamp(inspection.checklist.items);

@@ -4,6 +4,7 @@ import {
   LimitError,
   canonicalUnitOf,
   evaluateMeasurement,
+  fixNeedsReading,
   isReadingRequired,
   toCanonical,
   type ChecklistItem,
@@ -360,8 +361,19 @@ export class InspectionResultsService {
       problems.push({ field: `${field}.fixed.action`, message: 'Say what was done on the spot, e.g. "added air".' });
       return null;
     }
-    // Without a new reading the fix is kept as said; the shared summary decides whether it counts.
-    if (!fix.measurement) return spotFix;
+    // A value out of limit is fixed only by a new reading within it (shared's rule, which the voice loop
+    // and the summary follow); a described defect is fixed on the driver's word.
+    if (!fix.measurement) {
+      if (reading && fixNeedsReading(reading)) {
+        const { value, unit } = reading.measurement;
+        problems.push({
+          field: `${field}.fixed.measurement`,
+          message: `${item.key} was read at ${value} ${unit}, out of limit (${reading.limitValue} ${reading.limitUnit}, ${reading.limitSource}): a fix on the spot needs the new reading, within the limit; without one, send it as a defect.`,
+        });
+        return null;
+      }
+      return spotFix;
+    }
     const judged = this.judgeReading(fix.measurement, item, inspection, `${field}.fixed.measurement`, problems);
     if (!judged) return null;
     if (judged.verdict === 'out_of_limit') {
