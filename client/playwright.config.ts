@@ -1,4 +1,5 @@
 import { defineConfig, devices } from '@playwright/test';
+import { CHROMIUM_ARGS, CHROMIUM_PATH } from './e2e/chromium';
 
 // Browser flows in Debian's Chromium (never a downloaded browser) against a server that
 // `npm test` starts with a fresh, seeded database and names in BASE_URL.
@@ -14,18 +15,7 @@ export default defineConfig({
     baseURL: process.env.BASE_URL ?? 'http://127.0.0.1:3000',
     trace: 'retain-on-failure',
     screenshot: 'only-on-failure',
-    launchOptions: {
-      executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
-      args: [
-        '--no-sandbox',
-        '--disable-gpu',
-        '--disable-background-networking',
-        '--disable-component-update',
-        '--disable-sync',
-        '--no-first-run',
-        '--disable-quic',
-      ],
-    },
+    launchOptions: { executablePath: CHROMIUM_PATH, args: CHROMIUM_ARGS },
   },
   projects: [{ name: 'chromium', use: { ...devices['Desktop Chrome'], channel: undefined } }],
 });

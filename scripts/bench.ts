@@ -11,17 +11,7 @@ import { measureFirstLoadJs } from './lib/first-load.js';
 import { measureVoiceLoop } from './lib/voice-loop-latency.js';
 import { measureTalkTime } from './lib/talk-time.js';
 import { measureLighthouse } from './lib/lighthouse.js';
-
-export interface BenchFigure {
-  name: string;
-  unit: string;
-  p50: number;
-  p95: number;
-  p99: number;
-  goal: number;
-  judgedAt?: 'p50' | 'p95' | 'p99';
-  ratioToHealth?: number;
-}
+import { singleFigure, type BenchFigure } from '../shared/src/bench/index.js';
 
 type BenchModule = Record<string, () => BenchFigure[] | Promise<BenchFigure[]>>;
 
@@ -84,14 +74,14 @@ try {
     figures.push(...(await measureVoiceLoop(server.url)));
     say('bench: the modelled talk time of a tractor + trailer pre-trip by voice in Chromium');
     const talk = await measureTalkTime(server.url);
-    figures.push({
-      name: `modelled talk time, demo tractor + 2-axle trailer pre-trip by voice: ${talk.prompts} prompts, ${talk.words} words at 2.8 a second, ${talk.answers} answers at 2.0 s; ${talk.itemsOnServer} of ${talk.items} items on the server`,
-      unit: 'min',
-      p50: talk.minutes,
-      p95: talk.minutes,
-      p99: talk.minutes,
-      goal: 8,
-    });
+    figures.push(
+      singleFigure(
+        `modelled talk time, demo tractor + 2-axle trailer pre-trip by voice: ${talk.prompts} prompts, ${talk.words} words at 2.8 a second, ${talk.answers} answers at 2.0 s; ${talk.itemsOnServer} of ${talk.items} items on the server`,
+        'min',
+        talk.minutes,
+        8,
+      ),
+    );
   } finally {
     await server.stop();
   }

@@ -2,25 +2,8 @@
 // Chromium's network traffic, so lazy routes and split chunks count as they really load.
 import { gzipSync } from 'node:zlib';
 import { chromium, type Response } from '@playwright/test';
-
-export const CHROMIUM_ARGS = [
-  '--no-sandbox',
-  '--disable-gpu',
-  '--disable-background-networking',
-  '--disable-component-update',
-  '--disable-sync',
-  '--no-first-run',
-  '--disable-quic',
-];
-
-export interface SizeFigure {
-  name: string;
-  unit: 'KB';
-  p50: number;
-  p95: number;
-  p99: number;
-  goal: number;
-}
+import { singleFigure, type BenchFigure } from '../../shared/src/bench/index.js';
+import { CHROMIUM_ARGS, CHROMIUM_PATH } from '../../client/e2e/chromium.js';
 
 // The run route's chunks load whatever inspection id it is given; this one is not on the device.
 const DRIVER_ROUTES = [
@@ -39,14 +22,14 @@ export async function signInToken(baseUrl: string, email: string): Promise<strin
   return ((await response.json()) as { accessToken: string }).accessToken;
 }
 
-export async function measureFirstLoadJs(baseUrl: string): Promise<SizeFigure[]> {
+export async function measureFirstLoadJs(baseUrl: string): Promise<BenchFigure[]> {
   const browser = await chromium.launch({
-    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+    executablePath: CHROMIUM_PATH,
     args: CHROMIUM_ARGS,
   });
   try {
     const token = await signInToken(baseUrl, 'driver@yardcall.test');
-    const figures: SizeFigure[] = [];
+    const figures: BenchFigure[] = [];
     for (const { path, label } of DRIVER_ROUTES) {
       const context = await browser.newContext();
       await context.addInitScript(`localStorage.setItem('yardcall.token', ${JSON.stringify(token)});`);
@@ -63,14 +46,7 @@ export async function measureFirstLoadJs(baseUrl: string): Promise<SizeFigure[]>
       page.off('response', onResponse);
       const kb = (await Promise.all(bodies)).reduce((sum, bytes) => sum + bytes, 0) / 1024;
       const rounded = Math.round(kb * 10) / 10;
-      figures.push({
-        name: `first-load JS of ${label} (gzip)`,
-        unit: 'KB',
-        p50: rounded,
-        p95: rounded,
-        p99: rounded,
-        goal: 150,
-      });
+      figures.push(singleFigure(`first-load JS of ${label} (gzip)`, 'KB', rounded, 150));
       await context.close();
     }
     return figures;

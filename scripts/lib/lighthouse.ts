@@ -7,20 +7,11 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { chromium } from '@playwright/test';
 import lighthouse from 'lighthouse';
-import { CHROMIUM_ARGS, signInToken } from './first-load.js';
+import type { BenchFigure } from '../../shared/src/bench/index.js';
+import { CHROMIUM_ARGS, CHROMIUM_PATH } from '../../client/e2e/chromium.js';
+import { signInToken } from './first-load.js';
 import { stopChild } from './run.js';
 import { freePort } from './stack.js';
-
-export interface LighthouseFigure {
-  name: string;
-  unit: 'ms';
-  p50: number;
-  p95: number;
-  p99: number;
-  goal: number;
-  // Lighthouse's figures vary from run to run: the median of the runs is judged.
-  judgedAt: 'p50';
-}
 
 interface Measured {
   totalBlockingTimeMs: number;
@@ -37,7 +28,7 @@ async function startChromium(): Promise<{ port: number; stop: () => Promise<void
   const port = await freePort();
   const profile = mkdtempSync(join(tmpdir(), 'yardcall-lighthouse-'));
   const child = spawn(
-    process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+    CHROMIUM_PATH,
     [
       '--headless=new',
       `--remote-debugging-port=${port}`,
@@ -114,7 +105,7 @@ async function signInAndWarm(baseUrl: string, port: number): Promise<void> {
   }
 }
 
-function summarize(name: string, values: number[], goal: number): LighthouseFigure {
+function summarize(name: string, values: number[], goal: number): BenchFigure {
   const sorted = [...values].sort((a, b) => a - b);
   const round = (n: number) => Math.round(n);
   const median = sorted[Math.floor(sorted.length / 2)] ?? Number.NaN;
@@ -123,7 +114,7 @@ function summarize(name: string, values: number[], goal: number): LighthouseFigu
 }
 
 // `runs` Lighthouse runs of each page (3 by default); the median is judged, the worst shown as p95/p99.
-export async function measureLighthouse(baseUrl: string, runs = 3): Promise<LighthouseFigure[]> {
+export async function measureLighthouse(baseUrl: string, runs = 3): Promise<BenchFigure[]> {
   const signInLcp: number[] = [];
   const startTbt: number[] = [];
   for (let run = 0; run < runs; run += 1) {

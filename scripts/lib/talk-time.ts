@@ -6,7 +6,8 @@
 import { chromium } from '@playwright/test';
 import type { InspectionPage, InspectionResponse } from '@yardcall/shared';
 import { installFakeSpeech } from '../../client/e2e/fake-speech.js';
-import { CHROMIUM_ARGS, signInToken } from './first-load.js';
+import { CHROMIUM_ARGS, CHROMIUM_PATH } from '../../client/e2e/chromium.js';
+import { signInToken } from './first-load.js';
 
 export const WORDS_PER_SECOND = 2.8;
 export const SECONDS_PER_ANSWER = 2.0;
@@ -36,7 +37,7 @@ export function modelledMinutes(words: number, answers: number): number {
 
 export async function measureTalkTime(baseUrl: string): Promise<TalkTime> {
   const browser = await chromium.launch({
-    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+    executablePath: CHROMIUM_PATH,
     args: CHROMIUM_ARGS,
   });
   try {

@@ -5,27 +5,15 @@ import { join } from 'node:path';
 import { chromium } from '@playwright/test';
 import type { InspectionPage, InspectionResponse } from '@yardcall/shared';
 import { installFakeSpeech } from '../../client/e2e/fake-speech.js';
-import { CHROMIUM_ARGS, signInToken, type SizeFigure } from './first-load.js';
+import { singleFigure, timingFigure, type BenchFigure } from '../../shared/src/bench/index.js';
+import { CHROMIUM_ARGS, CHROMIUM_PATH } from '../../client/e2e/chromium.js';
+import { signInToken } from './first-load.js';
 import { projectRoot } from './run.js';
 
 const NOTE_WAV = join(projectRoot, 'test-audio', 'fixtures', 'en-note-cracked-marker-lens.wav');
 // A straight truck: no trailer question, so one tap starts the walk-around.
 const UNIT = 'KV-S31';
 const NOTE_MS = 20_000;
-
-export interface LatencyFigure {
-  name: string;
-  unit: 'ms' | 'KB';
-  p50: number;
-  p95: number;
-  p99: number;
-  goal: number;
-}
-
-function percentile(sorted: readonly number[], p: number): number {
-  if (sorted.length === 0) return Number.NaN;
-  return sorted[Math.min(sorted.length - 1, Math.ceil((p / 100) * sorted.length) - 1)] ?? Number.NaN;
-}
 
 // Each answer pairs with the first prompt that starts after it and before the next answer; an
 // answer that starts a note (no prompt follows until the note ends) has no pair.
@@ -41,9 +29,9 @@ export function answerToPromptLatencies(answeredAt: readonly number[], promptedA
   return latencies;
 }
 
-export async function measureVoiceLoop(baseUrl: string): Promise<(LatencyFigure | SizeFigure)[]> {
+export async function measureVoiceLoop(baseUrl: string): Promise<BenchFigure[]> {
   const browser = await chromium.launch({
-    executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
+    executablePath: CHROMIUM_PATH,
     args: [
       ...CHROMIUM_ARGS,
       '--use-fake-ui-for-media-stream',
@@ -70,17 +58,13 @@ export async function measureVoiceLoop(baseUrl: string): Promise<(LatencyFigure 
       const w = window as unknown as { __answeredAt: number[]; __promptedAt: number[] };
       return { answeredAt: w.__answeredAt, promptedAt: w.__promptedAt };
     });
-    const latencies = answerToPromptLatencies(answeredAt, promptedAt).sort((a, b) => a - b);
-    const round = (n: number) => Math.round(n * 100) / 100;
-    const figures: (LatencyFigure | SizeFigure)[] = [
-      {
-        name: `voice loop in Chromium, end of answer to next prompt (${latencies.length} turns, scripted engine)`,
-        unit: 'ms',
-        p50: round(percentile(latencies, 50)),
-        p95: round(percentile(latencies, 95)),
-        p99: round(percentile(latencies, 99)),
-        goal: 50,
-      },
+    const latencies = answerToPromptLatencies(answeredAt, promptedAt);
+    const figures = [
+      timingFigure(
+        `voice loop in Chromium, end of answer to next prompt (${latencies.length} turns, scripted engine)`,
+        latencies,
+        50,
+      ),
     ];
 
     // The note syncs in the background; read its size and length off the server.
@@ -99,14 +83,14 @@ export async function measureVoiceLoop(baseUrl: string): Promise<(LatencyFigure 
     }
     if (!note) throw new Error('The voice note did not reach the server within 60 s.');
     const kbPerMinute = Math.round((note.sizeBytes / 1024 / (note.durationMs / 60_000)) * 10) / 10;
-    figures.push({
-      name: `voice-note bytes a minute (${note.mimeType}, ${(note.durationMs / 1000).toFixed(1)} s note)`,
-      unit: 'KB',
-      p50: kbPerMinute,
-      p95: kbPerMinute,
-      p99: kbPerMinute,
-      goal: 250,
-    });
+    figures.push(
+      singleFigure(
+        `voice-note bytes a minute (${note.mimeType}, ${(note.durationMs / 1000).toFixed(1)} s note)`,
+        'KB',
+        kbPerMinute,
+        250,
+      ),
+    );
     await context.close();
     return figures;
   } finally {

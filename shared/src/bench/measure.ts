@@ -1,15 +1,28 @@
-// Timing for the benchmarks: run a function many times and report its percentiles in milliseconds.
+// The figures every benchmark reports (shared's, the server's, the browser's), and timing: run a
+// function many times and report its percentiles in milliseconds.
 import { performance } from 'node:perf_hooks';
 
-export interface BenchResult {
+export interface BenchFigure {
   name: string;
-  unit: 'ms';
+  unit: string;
   p50: number;
   p95: number;
   p99: number;
   goal: number;
-  // The percentile the goal is judged at.
+  // The percentile the goal is judged at; p95 when not said.
+  judgedAt?: 'p50' | 'p95' | 'p99';
+  // A server figure's throughput as a share of /api/health's on the same machine.
+  ratioToHealth?: number;
+}
+
+export interface BenchResult extends BenchFigure {
+  unit: 'ms';
   judgedAt: 'p50' | 'p95' | 'p99';
+}
+
+// A figure measured once (a size, a modelled time): the same value at every percentile.
+export function singleFigure(name: string, unit: string, value: number, goal: number): BenchFigure {
+  return { name, unit, p50: value, p95: value, p99: value, goal };
 }
 
 export interface MeasureOptions {
@@ -27,6 +40,23 @@ export function percentile(sorted: readonly number[], p: number): number {
 
 function round3(value: number): number {
   return Math.round(value * 1000) / 1000;
+}
+
+function round2(value: number): number {
+  return Math.round(value * 100) / 100;
+}
+
+// Timings taken elsewhere (a browser, a server round trip), in any order, as one figure judged at p95.
+export function timingFigure(name: string, timings: readonly number[], goal: number): BenchFigure {
+  const sorted = [...timings].sort((a, b) => a - b);
+  return {
+    name,
+    unit: 'ms',
+    p50: round2(percentile(sorted, 50)),
+    p95: round2(percentile(sorted, 95)),
+    p99: round2(percentile(sorted, 99)),
+    goal,
+  };
 }
 
 // `fn` gets the run's number, counting warm-up runs first, so callers can cycle through inputs.
