@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { measure, percentile } from './measure.js';
+import { measure, percentile, singleFigure, timingFigure } from './measure.js';
 
 describe('benchmark timing', () => {
   it('takes the nearest-rank percentile of sorted timings', () => {
@@ -18,5 +18,29 @@ describe('benchmark timing', () => {
     expect(result).toMatchObject({ name: 'count', unit: 'ms', goal: 1 });
     expect(result.p50).toBeLessThanOrEqual(result.p95);
     expect(result.p95).toBeLessThanOrEqual(result.p99);
+  });
+
+  it('turns timings taken elsewhere, in any order, into percentiles rounded to hundredths', () => {
+    const timings = [3.456, 1, 2.5, 10.004];
+    expect(timingFigure('loop', timings, 50)).toEqual({
+      name: 'loop',
+      unit: 'ms',
+      p50: 2.5,
+      p95: 10,
+      p99: 10,
+      goal: 50,
+    });
+    expect(timings).toEqual([3.456, 1, 2.5, 10.004]);
+  });
+
+  it('reports a value measured once at every percentile', () => {
+    expect(singleFigure('size', 'KB', 148.2, 150)).toEqual({
+      name: 'size',
+      unit: 'KB',
+      p50: 148.2,
+      p95: 148.2,
+      p99: 148.2,
+      goal: 150,
+    });
   });
 });
