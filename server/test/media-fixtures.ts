@@ -1,4 +1,4 @@
-import { crc32, deflateSync } from 'node:zlib';
+import { PNG } from 'pngjs';
 
 // Tiny media files made in the test, so no binary fixture is kept or downloaded.
 
@@ -42,27 +42,9 @@ export function makeOggOpusHead(): Buffer {
   return Buffer.concat([page, Buffer.from([head.length]), head]);
 }
 
-function pngChunk(type: string, data: Buffer): Buffer {
-  const length = Buffer.alloc(4);
-  length.writeUInt32BE(data.length);
-  const body = Buffer.concat([Buffer.from(type, 'ascii'), data]);
-  const crc = Buffer.alloc(4);
-  crc.writeUInt32BE(crc32(body));
-  return Buffer.concat([length, body, crc]);
-}
-
-// A 2×2 grey PNG (ISO/IEC 15948).
+// A 2×2 grey PNG.
 export function makePng(): Buffer {
-  const ihdr = Buffer.alloc(13);
-  ihdr.writeUInt32BE(2, 0);
-  ihdr.writeUInt32BE(2, 4);
-  ihdr.writeUInt8(8, 8); // bit depth
-  ihdr.writeUInt8(0, 9); // greyscale
-  const rows = Buffer.from([0, 128, 128, 0, 128, 128]);
-  return Buffer.concat([
-    Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]),
-    pngChunk('IHDR', ihdr),
-    pngChunk('IDAT', deflateSync(rows)),
-    pngChunk('IEND', Buffer.alloc(0)),
-  ]);
+  const image = new PNG({ width: 2, height: 2 });
+  for (let pixel = 0; pixel < 4; pixel += 1) image.data.set([128, 128, 128, 255], pixel * 4);
+  return PNG.sync.write(image, { colorType: 0 });
 }
