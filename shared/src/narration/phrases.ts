@@ -2,8 +2,9 @@
 // become cues, filler is dropped, and every other word stays as its stem.
 import type { Locale } from '../checklist/index.js';
 import { CONCEPTS, CUES, STOP_WORDS, type CueKind } from './lexicon.js';
-import { PhraseMatcher, toWords, type CompiledPhrase, type PhraseGroup, type Word } from '../text/index.js';
+import { PhraseMatcher, type CompiledPhrase, type PhraseGroup } from '../text/index.js';
 import { isPluralWord, withinOneEdit } from './word-match.js';
+import { narrationWords, type Word } from './words.js';
 
 export interface Term {
   // "#concept" for a trade phrase, the stem for any other word; empty for a cue.
@@ -34,14 +35,14 @@ interface PhraseIndex {
 
 const indexes = new Map<Locale, PhraseIndex>();
 
-// Narration reads phrases as it reads what was said: through toWords (spoken numbers as digits).
+// Narration reads phrases as it reads what was said: through narrationWords (spoken numbers as digits).
 function compileNarrationPhrase(phrase: string, locale: Locale): CompiledPhrase {
-  return { keys: toWords(phrase, locale).map((word) => word.stem), anchored: false };
+  return { keys: narrationWords(phrase, locale).map((word) => word.stem), anchored: false };
 }
 
 // The lexicon's words, for mending a recogniser's near miss; a phrase whose stems came earlier adds none.
 function addVocabulary(index: PhraseIndex, phrase: string, locale: Locale, seen: Set<string>): void {
-  const words = toWords(phrase, locale);
+  const words = narrationWords(phrase, locale);
   const stems = words.map((word) => word.stem).join(' ');
   if (seen.has(stems)) return;
   seen.add(stems);
@@ -63,7 +64,7 @@ function buildIndex(locale: Locale): PhraseIndex {
   const index: PhraseIndex = {
     phrases: new PhraseMatcher(locale, groups, compileNarrationPhrase),
     stopSurfaces: new Set(STOP_WORDS[locale]),
-    stopStems: new Set(STOP_WORDS[locale].map((word) => toWords(word, locale)[0]?.stem ?? word)),
+    stopStems: new Set(STOP_WORDS[locale].map((word) => narrationWords(word, locale)[0]?.stem ?? word)),
     vocabulary: new Map(),
     known: new Set(),
     mended: new Map(),
@@ -116,7 +117,7 @@ export function toTerms(text: string, locale: Locale): TermsOfText {
 }
 
 function termsOf(text: string, locale: Locale, index: PhraseIndex): TermsOfText {
-  const words = toWords(text, locale);
+  const words = narrationWords(text, locale);
   const stems = words.map((word) => mendStem(word, index));
   const stemmed = { tokens: words.map((word) => word.surface), stems };
   const terms: Term[] = [];

@@ -2,7 +2,6 @@
 export { normaliseText, sliceText, type NormalisedText } from './normalise-text.js';
 export { originalWords } from './original-words.js';
 export { stemWord } from './stem-word.js';
-export { toWords, type Word } from './to-words.js';
 export {
   PhraseMatcher,
   type CompiledPhrase,

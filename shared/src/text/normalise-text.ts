@@ -1,7 +1,6 @@
 // Tokens of what a recogniser heard, for the interpreter and the number parser: case, accents,
 // punctuation, number formats and pause marks, with the shared stems.
 import type { Locale } from '../checklist/types.js';
-import { foldAccents } from './fold-text.js';
 import { NUMBER_WORDS } from './number-words.js';
 import { stemWord } from './stem-word.js';
 
@@ -14,6 +13,13 @@ export interface NormalisedText {
   stems: string[];
   // True where the recogniser put a pause mark (comma, full stop...) after the token.
   pauseAfter: boolean[];
+}
+
+// Recognisers, typed input and lexicons disagree on accents: all are folded alike.
+const COMBINING_MARKS = /\p{M}/gu;
+
+function foldAccents(text: string): string {
+  return text.normalize('NFD').replace(COMBINING_MARKS, '').normalize('NFC');
 }
 
 // Spanish fraction words are often run together with their number ("treintaidosavos", "32avos").
@@ -51,8 +57,12 @@ function prepare(text: string, locale: Locale): string {
 // Pause marks become their own marker so the tokeniser can note them.
 const PAUSE_MARK = /[,;:!?.…]+(?=\s|$)|[¡¿]/g;
 
+// Recognisers mostly give plain lower-case words, which need no preparing, and plain tokens no folding.
+const PLAIN_TEXT = /^[a-z ]*$/;
+const PLAIN_TOKEN = /^[a-z0-9]+$/;
+
 export function normaliseText(text: string, locale: Locale): NormalisedText {
-  const prepared = prepare(text, locale).replace(PAUSE_MARK, ' \u0001 ');
+  const prepared = PLAIN_TEXT.test(text) ? text : prepare(text, locale).replace(PAUSE_MARK, ' \u0001 ');
   const tokens: string[] = [];
   const surface: string[] = [];
   const pauseAfter: boolean[] = [];
@@ -62,9 +72,10 @@ export function normaliseText(text: string, locale: Locale): NormalisedText {
       continue;
     }
     // Letters, digits, the decimal point, the fraction slash and the n/a marker survive.
-    const kept = raw.replace(/[^\p{L}\p{N}./_]/gu, '').replace(/^[./]+|[./]+$/g, '');
+    const plain = PLAIN_TOKEN.test(raw);
+    const kept = plain ? raw : raw.replace(/[^\p{L}\p{N}./_]/gu, '').replace(/^[./]+|[./]+$/g, '');
     if (kept === '') continue;
-    const folded = foldAccents(kept);
+    const folded = plain ? kept : foldAccents(kept);
     const parts = locale === 'es' ? splitSpanishAvos(folded) : [folded];
     for (const part of parts) {
       tokens.push(part);

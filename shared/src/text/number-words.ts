@@ -1,4 +1,4 @@
-// Number words per locale, as data: the number parser and toWords read the same tables so they agree.
+// Number words per locale, as data: what the normaliser splits and the number reader reads.
 import type { Locale } from '../checklist/types.js';
 
 export interface NumberWords {
