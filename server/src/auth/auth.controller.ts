@@ -1,15 +1,8 @@
 import { Body, Controller, Get, HttpCode, HttpStatus, Ip, Patch, Post } from '@nestjs/common';
-import {
-  ApiBearerAuth,
-  ApiOkResponse,
-  ApiOperation,
-  ApiTags,
-  ApiTooManyRequestsResponse,
-  ApiUnauthorizedResponse,
-} from '@nestjs/swagger';
+import { ApiBearerAuth, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
 import type { LoginResponse, UserSummary } from '@yardcall/shared';
-import { ApiErrorBodyDto } from '../common/dto/api-error-body.dto';
 import { UserSummaryDto } from '../users/dto/user-summary.dto';
+import { ApiErrors } from '../common/api-docs';
 import type { AuthUser } from './auth-user';
 import { AuthService } from './auth.service';
 import { CurrentUser } from './decorators/current-user.decorator';
@@ -28,10 +21,9 @@ export class AuthController {
   @HttpCode(HttpStatus.OK)
   @ApiOperation({ summary: 'Sign in with e-mail and password; answers an access token and the user.' })
   @ApiOkResponse({ type: LoginResponseDto })
-  @ApiUnauthorizedResponse({ type: ApiErrorBodyDto, description: 'Email or password is wrong.' })
-  @ApiTooManyRequestsResponse({
-    type: ApiErrorBodyDto,
-    description: 'Too many failed attempts for this e-mail address, or from this client, in the last minute.',
+  @ApiErrors({
+    unauthorized: 'Email or password is wrong.',
+    tooManyRequests: 'Too many failed attempts for this e-mail address, or from this client, in the last minute.',
   })
   login(@Body() body: LoginDto, @Ip() client: string): Promise<LoginResponse> {
     return this.auth.login(body.email, body.password, client);
@@ -41,7 +33,7 @@ export class AuthController {
   @Get('me')
   @ApiOperation({ summary: 'The signed-in user.' })
   @ApiOkResponse({ type: UserSummaryDto })
-  @ApiUnauthorizedResponse({ type: ApiErrorBodyDto })
+  @ApiErrors({ unauthorized: true })
   me(@CurrentUser() user: AuthUser): Promise<UserSummary> {
     return this.auth.me(user.id);
   }
@@ -50,7 +42,7 @@ export class AuthController {
   @Patch('me/settings')
   @ApiOperation({ summary: "Change the signed-in user's display settings (only the fields sent)." })
   @ApiOkResponse({ type: UserSummaryDto })
-  @ApiUnauthorizedResponse({ type: ApiErrorBodyDto })
+  @ApiErrors({ unauthorized: true })
   updateSettings(@CurrentUser() user: AuthUser, @Body() body: UpdateDisplaySettingsDto): Promise<UserSummary> {
     return this.auth.updateSettings(user.id, body);
   }

@@ -1,26 +1,15 @@
-import { Body, Controller, Get, Post, Query } from '@nestjs/common';
-import {
-  ApiBadRequestResponse,
-  ApiBearerAuth,
-  ApiConflictResponse,
-  ApiCreatedResponse,
-  ApiNotFoundResponse,
-  ApiOkResponse,
-  ApiOperation,
-  ApiTags,
-} from '@nestjs/swagger';
+import { Body, Get, Post, Query } from '@nestjs/common';
+import { ApiCreatedResponse, ApiOkResponse, ApiOperation } from '@nestjs/swagger';
 import type { DefectResponse } from '@yardcall/shared';
+import { ApiErrors, SignedInController } from '../common/api-docs';
 import type { AuthUser } from '../auth/auth-user';
 import { CurrentUser } from '../auth/decorators/current-user.decorator';
 import { Roles } from '../auth/decorators/roles.decorator';
-import { ApiErrorBodyDto } from '../common/dto/api-error-body.dto';
 import { UuidParam } from '../common/uuid-param';
 import { DefectsService } from './defects.service';
 import { DefectResponseDto, ListDefectsQuery, RepairRequestDto } from './dto/defect.dto';
 
-@ApiTags('defects')
-@ApiBearerAuth()
-@Controller('defects')
+@SignedInController('defects')
 export class DefectsController {
   constructor(private readonly defects: DefectsService) {}
 
@@ -28,7 +17,7 @@ export class DefectsController {
   @Roles('mechanic', 'supervisor', 'admin')
   @ApiOperation({ summary: "The organisation's defects, safety ones first, newest first; ?status= and ?vehicleId=." })
   @ApiOkResponse({ type: [DefectResponseDto] })
-  @ApiBadRequestResponse({ type: ApiErrorBodyDto })
+  @ApiErrors({ badRequest: true })
   list(@CurrentUser() user: AuthUser, @Query() query: ListDefectsQuery): Promise<DefectResponse[]> {
     return this.defects.list(user, query);
   }
@@ -40,9 +29,11 @@ export class DefectsController {
       'Certify a defect as repaired, as needing no repair, or (when it does not affect safe operation) deferred; signed by the mechanic.',
   })
   @ApiCreatedResponse({ type: DefectResponseDto })
-  @ApiBadRequestResponse({ type: ApiErrorBodyDto, description: 'A deferral needs a reason and a future date.' })
-  @ApiNotFoundResponse({ type: ApiErrorBodyDto })
-  @ApiConflictResponse({ type: ApiErrorBodyDto, description: 'Already certified.' })
+  @ApiErrors({
+    badRequest: 'A deferral needs a reason and a future date.',
+    notFound: true,
+    conflict: 'Already certified.',
+  })
   repair(
     @CurrentUser() user: AuthUser,
     @UuidParam('id') id: string,

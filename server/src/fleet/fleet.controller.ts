@@ -1,15 +1,14 @@
-import { Controller, Get } from '@nestjs/common';
-import { ApiBearerAuth, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
+import { Get } from '@nestjs/common';
+import { ApiOkResponse, ApiOperation } from '@nestjs/swagger';
 import type { FleetBoard } from '@yardcall/shared';
+import { SignedInController } from '../common/api-docs';
 import type { AuthUser } from '../auth/auth-user';
 import { CurrentUser } from '../auth/decorators/current-user.decorator';
 import { Roles } from '../auth/decorators/roles.decorator';
 import { FleetBoardDto } from './dto/fleet-board.dto';
 import { FleetService } from './fleet.service';
 
-@ApiTags('fleet')
-@ApiBearerAuth()
-@Controller('fleet')
+@SignedInController('fleet')
 export class FleetController {
   constructor(private readonly fleet: FleetService) {}
 

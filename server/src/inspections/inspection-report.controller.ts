@@ -1,18 +1,16 @@
-import { Controller, Get, Res, StreamableFile } from '@nestjs/common';
-import { ApiBearerAuth, ApiNotFoundResponse, ApiOkResponse, ApiOperation, ApiProduces, ApiTags } from '@nestjs/swagger';
+import { Get, Res, StreamableFile } from '@nestjs/common';
+import { ApiOkResponse, ApiOperation, ApiProduces } from '@nestjs/swagger';
 import type { Response } from 'express';
+import { ApiErrors, SignedInController } from '../common/api-docs';
 import type { AuthUser } from '../auth/auth-user';
 import { CurrentUser } from '../auth/decorators/current-user.decorator';
-import { ApiErrorBodyDto } from '../common/dto/api-error-body.dto';
 import { UuidParam } from '../common/uuid-param';
 import { ReportsService } from '../reports/reports.service';
 import { InspectionsService } from './inspections.service';
 
 // The PDF of an inspection: InspectionsService finds one the caller may read, ReportsService draws it
 // (tagged "reports" in the API document, as it always was).
-@ApiTags('reports')
-@ApiBearerAuth()
-@Controller('inspections')
+@SignedInController('inspections', 'reports')
 export class InspectionReportController {
   constructor(
     private readonly inspections: InspectionsService,
@@ -28,7 +26,7 @@ export class InspectionReportController {
   })
   @ApiProduces('application/pdf')
   @ApiOkResponse({ description: 'The PDF.' })
-  @ApiNotFoundResponse({ type: ApiErrorBodyDto })
+  @ApiErrors({ notFound: true })
   async report(
     @CurrentUser() user: AuthUser,
     @UuidParam('id') id: string,

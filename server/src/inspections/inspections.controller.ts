@@ -1,22 +1,12 @@
-import { Body, Controller, Get, HttpCode, Post, Put, Query, Res } from '@nestjs/common';
-import {
-  ApiBadRequestResponse,
-  ApiBearerAuth,
-  ApiConflictResponse,
-  ApiCreatedResponse,
-  ApiNotFoundResponse,
-  ApiOkResponse,
-  ApiOperation,
-  ApiProduces,
-  ApiTags,
-} from '@nestjs/swagger';
+import { Body, Get, HttpCode, Post, Put, Query, Res } from '@nestjs/common';
+import { ApiCreatedResponse, ApiOkResponse, ApiOperation, ApiProduces } from '@nestjs/swagger';
 import { INSPECTION_CSV_COLUMNS, INSPECTION_CSV_MAX_ROWS } from '@yardcall/shared';
 import type { InspectionPage, InspectionResponse, PutResultsResponse, SignatureResponse } from '@yardcall/shared';
 import type { Response } from 'express';
+import { ApiErrors, SignedInController } from '../common/api-docs';
 import type { AuthUser } from '../auth/auth-user';
 import { CurrentUser } from '../auth/decorators/current-user.decorator';
 import { Roles } from '../auth/decorators/roles.decorator';
-import { ApiErrorBodyDto } from '../common/dto/api-error-body.dto';
 import { UuidParam } from '../common/uuid-param';
 import { AcknowledgementsService } from './acknowledgements.service';
 import {
@@ -35,9 +25,7 @@ import { InspectionResultsService } from './inspection-results.service';
 import { InspectionsService } from './inspections.service';
 import { answerIdempotentCreate } from '../common/idempotent-status';
 
-@ApiTags('inspections')
-@ApiBearerAuth()
-@Controller('inspections')
+@SignedInController('inspections')
 export class InspectionsController {
   constructor(
     private readonly inspections: InspectionsService,
@@ -54,9 +42,11 @@ export class InspectionsController {
   })
   @ApiCreatedResponse({ type: InspectionResponseDto })
   @ApiOkResponse({ type: InspectionResponseDto, description: 'This clientId was already used: the same inspection.' })
-  @ApiBadRequestResponse({ type: ApiErrorBodyDto, description: 'Each wrong field is named; a wrong combination too.' })
-  @ApiNotFoundResponse({ type: ApiErrorBodyDto })
-  @ApiConflictResponse({ type: ApiErrorBodyDto, description: 'The last report waits for the next driver’s review.' })
+  @ApiErrors({
+    badRequest: 'Each wrong field is named; a wrong combination too.',
+    notFound: true,
+    conflict: 'The last report waits for the next driver’s review.',
+  })
   async create(
     @CurrentUser() user: AuthUser,
     @Body() body: CreateInspectionDto,
@@ -73,7 +63,7 @@ export class InspectionsController {
       'Inspections newest first unless sorted otherwise, one page at a time (cursor), with filters. Drivers see their own, trainers practice ones, the others all of the organisation.',
   })
   @ApiOkResponse({ type: InspectionPageDto })
-  @ApiBadRequestResponse({ type: ApiErrorBodyDto })
+  @ApiErrors({ badRequest: true })
   list(@CurrentUser() user: AuthUser, @Query() query: ListInspectionsQuery): Promise<InspectionPage> {
     return this.listing.list(user, query);
   }
@@ -85,7 +75,7 @@ export class InspectionsController {
   })
   @ApiProduces('text/csv')
   @ApiOkResponse({ description: 'An attachment: inspections-<date>.csv.' })
-  @ApiBadRequestResponse({ type: ApiErrorBodyDto })
+  @ApiErrors({ badRequest: true })
   async exportCsv(
     @CurrentUser() user: AuthUser,
     @Query() query: ListInspectionsQuery,
@@ -114,7 +104,7 @@ export class InspectionsController {
   @Get(':id')
   @ApiOperation({ summary: 'One inspection: checklist, answers, notes, photos, defects, signatures and summary.' })
   @ApiOkResponse({ type: InspectionResponseDto })
-  @ApiNotFoundResponse({ type: ApiErrorBodyDto })
+  @ApiErrors({ notFound: true })
   get(@CurrentUser() user: AuthUser, @UuidParam('id') id: string): Promise<InspectionResponse> {
     return this.inspections.get(user, id);
   }
@@ -126,9 +116,11 @@ export class InspectionsController {
       'Store a batch of answers (idempotent on clientId; the latest answeredAt of an item wins). The server re-evaluates every measurement.',
   })
   @ApiOkResponse({ type: PutResultsResponseDto })
-  @ApiBadRequestResponse({ type: ApiErrorBodyDto, description: 'Item keys not on the checklist are named.' })
-  @ApiNotFoundResponse({ type: ApiErrorBodyDto })
-  @ApiConflictResponse({ type: ApiErrorBodyDto, description: 'The report is submitted.' })
+  @ApiErrors({
+    badRequest: 'Item keys not on the checklist are named.',
+    notFound: true,
+    conflict: 'The report is submitted.',
+  })
   async putResults(
     @CurrentUser() user: AuthUser,
     @UuidParam('id') id: string,
@@ -145,9 +137,7 @@ export class InspectionsController {
       'Sign and submit the report: opens a defect per finding and takes vehicles with a safety defect out of service.',
   })
   @ApiOkResponse({ type: InspectionResponseDto })
-  @ApiBadRequestResponse({ type: ApiErrorBodyDto })
-  @ApiNotFoundResponse({ type: ApiErrorBodyDto })
-  @ApiConflictResponse({ type: ApiErrorBodyDto, description: 'Already submitted.' })
+  @ApiErrors({ badRequest: true, notFound: true, conflict: 'Already submitted.' })
   submit(
     @CurrentUser() user: AuthUser,
     @UuidParam('id') id: string,
@@ -160,9 +150,7 @@ export class InspectionsController {
   @Roles('driver')
   @ApiOperation({ summary: "The next driver's signature: they reviewed the report and its repair certifications." })
   @ApiCreatedResponse({ type: SignatureResponseDto })
-  @ApiBadRequestResponse({ type: ApiErrorBodyDto })
-  @ApiNotFoundResponse({ type: ApiErrorBodyDto })
-  @ApiConflictResponse({ type: ApiErrorBodyDto, description: 'Nothing waits for an acknowledgement.' })
+  @ApiErrors({ badRequest: true, notFound: true, conflict: 'Nothing waits for an acknowledgement.' })
   acknowledge(
     @CurrentUser() user: AuthUser,
     @UuidParam('id') id: string,

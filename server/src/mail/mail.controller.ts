@@ -1,16 +1,14 @@
-import { Controller, Get } from '@nestjs/common';
-import { ApiBearerAuth, ApiNotFoundResponse, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
+import { Get } from '@nestjs/common';
+import { ApiOkResponse, ApiOperation } from '@nestjs/swagger';
 import type { CaughtMail } from '@yardcall/shared';
+import { ApiErrors, SignedInController } from '../common/api-docs';
 import type { AuthUser } from '../auth/auth-user';
 import { CurrentUser } from '../auth/decorators/current-user.decorator';
 import { Roles } from '../auth/decorators/roles.decorator';
-import { ApiErrorBodyDto } from '../common/dto/api-error-body.dto';
 import { CaughtMailDto } from './dto/caught-mail.dto';
 import { MailService } from './mail.service';
 
-@ApiTags('mail')
-@ApiBearerAuth()
-@Controller('mail')
+@SignedInController('mail')
 export class MailController {
   constructor(private readonly mail: MailService) {}
 
@@ -18,7 +16,7 @@ export class MailController {
   @Roles('admin')
   @ApiOperation({ summary: "E-mail caught by the built-in catcher for this organisation's users, newest first." })
   @ApiOkResponse({ type: [CaughtMailDto] })
-  @ApiNotFoundResponse({ type: ApiErrorBodyDto, description: 'Real SMTP is configured: nothing is caught.' })
+  @ApiErrors({ notFound: 'Real SMTP is configured: nothing is caught.' })
   outbox(@CurrentUser() user: AuthUser): Promise<CaughtMail[]> {
     return this.mail.outboxFor(user.organizationId);
   }

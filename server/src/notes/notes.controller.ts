@@ -1,27 +1,16 @@
-import { Controller, Get, Inject, Req, Res, StreamableFile } from '@nestjs/common';
-import {
-  ApiBearerAuth,
-  ApiNotFoundResponse,
-  ApiOkResponse,
-  ApiOperation,
-  ApiPartialContentResponse,
-  ApiProduces,
-  ApiResponse,
-  ApiTags,
-} from '@nestjs/swagger';
+import { Get, Inject, Req, Res, StreamableFile } from '@nestjs/common';
+import { ApiOkResponse, ApiOperation, ApiPartialContentResponse, ApiProduces } from '@nestjs/swagger';
 import { NOTE_AUDIO_TYPES, PHOTO_TYPES } from '@yardcall/shared';
 import type { Request, Response } from 'express';
+import { ApiErrors, SignedInController } from '../common/api-docs';
 import type { AuthUser } from '../auth/auth-user';
 import { CurrentUser } from '../auth/decorators/current-user.decorator';
-import { ApiErrorBodyDto } from '../common/dto/api-error-body.dto';
 import { UuidParam } from '../common/uuid-param';
 import { OBJECT_STORAGE, type ObjectStorage } from '../storage/object-storage';
 import { serveObject } from '../uploads/serve-object';
 import { NotesService } from './notes.service';
 
-@ApiTags('notes')
-@ApiBearerAuth()
-@Controller()
+@SignedInController('', 'notes')
 export class NotesController {
   constructor(
     private readonly notes: NotesService,
@@ -33,8 +22,7 @@ export class NotesController {
   @ApiProduces(...NOTE_AUDIO_TYPES)
   @ApiOkResponse({ description: 'The whole recording.' })
   @ApiPartialContentResponse({ description: 'The byte range asked for, with Content-Range.' })
-  @ApiResponse({ status: 416, type: ApiErrorBodyDto, description: 'The range lies outside the recording.' })
-  @ApiNotFoundResponse({ type: ApiErrorBodyDto })
+  @ApiErrors({ rangeNotSatisfiable: 'The range lies outside the recording.', notFound: true })
   async noteAudio(
     @CurrentUser() user: AuthUser,
     @UuidParam('id') id: string,
@@ -48,7 +36,7 @@ export class NotesController {
   @ApiOperation({ summary: 'A photo for anyone in its organisation, with HTTP Range support.' })
   @ApiProduces(...PHOTO_TYPES)
   @ApiOkResponse({ description: 'The image.' })
-  @ApiNotFoundResponse({ type: ApiErrorBodyDto })
+  @ApiErrors({ notFound: true })
   async photo(
     @CurrentUser() user: AuthUser,
     @UuidParam('id') id: string,

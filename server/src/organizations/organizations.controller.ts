@@ -1,15 +1,15 @@
-import { Body, Controller, Get, HttpCode, Patch, Post } from '@nestjs/common';
-import { ApiBadRequestResponse, ApiBearerAuth, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
+import { Body, Get, HttpCode, Patch, Post } from '@nestjs/common';
+import { ApiOkResponse, ApiOperation } from '@nestjs/swagger';
 import type {
   OrganizationSummary,
   OrganizationTimeZone,
   RetentionPurgeResult,
   RetentionSettings,
 } from '@yardcall/shared';
+import { ApiErrors, SignedInController } from '../common/api-docs';
 import type { AuthUser } from '../auth/auth-user';
 import { CurrentUser } from '../auth/decorators/current-user.decorator';
 import { Roles } from '../auth/decorators/roles.decorator';
-import { ApiErrorBodyDto } from '../common/dto/api-error-body.dto';
 import { OrganizationSummaryDto } from './dto/organization-summary.dto';
 import { UpdateRequiredReadingsDto } from './dto/required-readings.dto';
 import { RetentionPurgeResultDto, RetentionSettingsDto, UpdateRetentionDto } from './dto/retention.dto';
@@ -17,9 +17,7 @@ import { OrganizationTimeZoneDto, UpdateTimeZoneDto } from './dto/time-zone.dto'
 import { OrganizationsService } from './organizations.service';
 import { RetentionService } from './retention.service';
 
-@ApiTags('organizations')
-@ApiBearerAuth()
-@Controller('organizations')
+@SignedInController('organizations')
 export class OrganizationsController {
   constructor(
     private readonly organizations: OrganizationsService,
@@ -40,7 +38,7 @@ export class OrganizationsController {
       'Choose the readings every walk-around must take (by default none). Walk-arounds already begun keep theirs; a driver may still answer "no gauge".',
   })
   @ApiOkResponse({ type: OrganizationSummaryDto })
-  @ApiBadRequestResponse({ type: ApiErrorBodyDto, description: 'Not a list, or a reading the app does not know.' })
+  @ApiErrors({ badRequest: 'Not a list, or a reading the app does not know.' })
   updateReadings(@CurrentUser() user: AuthUser, @Body() body: UpdateRequiredReadingsDto): Promise<OrganizationSummary> {
     return this.organizations.updateRequiredReadings(user.organizationId, body.requiredReadings);
   }
@@ -56,7 +54,7 @@ export class OrganizationsController {
   @Roles('admin')
   @ApiOperation({ summary: "Set the organisation's time zone (an IANA name, e.g. America/Chicago)." })
   @ApiOkResponse({ type: OrganizationTimeZoneDto })
-  @ApiBadRequestResponse({ type: ApiErrorBodyDto, description: 'Not a time zone name the server knows.' })
+  @ApiErrors({ badRequest: 'Not a time zone name the server knows.' })
   updateTimeZone(@CurrentUser() user: AuthUser, @Body() body: UpdateTimeZoneDto): Promise<OrganizationTimeZone> {
     return this.organizations.updateTimeZone(user.organizationId, body.timeZone);
   }
@@ -73,7 +71,7 @@ export class OrganizationsController {
   @Roles('admin')
   @ApiOperation({ summary: 'Keep records longer (never below 3 months).' })
   @ApiOkResponse({ type: RetentionSettingsDto })
-  @ApiBadRequestResponse({ type: ApiErrorBodyDto, description: 'Below the minimum, or not a whole number.' })
+  @ApiErrors({ badRequest: 'Below the minimum, or not a whole number.' })
   updateRetention(@CurrentUser() user: AuthUser, @Body() body: UpdateRetentionDto): Promise<RetentionSettings> {
     return this.retention.update(user.organizationId, body.months);
   }

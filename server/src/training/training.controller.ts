@@ -1,6 +1,5 @@
 import {
   Body,
-  Controller,
   Get,
   HttpCode,
   HttpStatus,
@@ -12,24 +11,13 @@ import {
   Res,
   StreamableFile,
   UploadedFile,
-  UseInterceptors,
 } from '@nestjs/common';
 import {
-  ApiBadRequestResponse,
-  ApiBearerAuth,
-  ApiBody,
-  ApiConflictResponse,
-  ApiConsumes,
   ApiCreatedResponse,
-  ApiForbiddenResponse,
-  ApiNotFoundResponse,
   ApiOkResponse,
   ApiOperation,
   ApiPartialContentResponse,
-  ApiPayloadTooLargeResponse,
   ApiProduces,
-  ApiResponse,
-  ApiTags,
 } from '@nestjs/swagger';
 import {
   NOTE_AUDIO_TYPES,
@@ -39,13 +27,13 @@ import {
   type TrainingProgress,
 } from '@yardcall/shared';
 import type { Request, Response } from 'express';
+import { ApiErrors, SignedInController } from '../common/api-docs';
 import type { AuthUser } from '../auth/auth-user';
 import { CurrentUser } from '../auth/decorators/current-user.decorator';
 import { Roles } from '../auth/decorators/roles.decorator';
-import { ApiErrorBodyDto } from '../common/dto/api-error-body.dto';
 import { UuidParam } from '../common/uuid-param';
 import { serveObject } from '../uploads/serve-object';
-import { formatBytes, multipartBody, UploadInterceptor } from '../uploads/upload.interceptor';
+import { formatBytes, UploadRoute } from '../uploads/upload.interceptor';
 import { OBJECT_STORAGE, type ObjectStorage } from '../storage/object-storage';
 import {
   CreateTrainingAttemptDto,
@@ -61,9 +49,7 @@ import { answerIdempotentCreate } from '../common/idempotent-status';
 
 const STUDENT_ONLY = 'A driver marked as a student, on their own attempt.';
 
-@ApiTags('training')
-@ApiBearerAuth()
-@Controller('training')
+@SignedInController('training')
 export class TrainingController {
   constructor(
     private readonly training: TrainingService,
@@ -76,9 +62,11 @@ export class TrainingController {
     summary: `Start a narrated practice walk-around. ${STUDENT_ONLY} Sent again with the same clientId, it answers the stored attempt (200).`,
   })
   @ApiCreatedResponse({ description: 'The new attempt; 200 with the same body when sent again.' })
-  @ApiBadRequestResponse({ type: ApiErrorBodyDto })
-  @ApiForbiddenResponse({ type: ApiErrorBodyDto, description: 'The driver is not marked as a student.' })
-  @ApiNotFoundResponse({ type: ApiErrorBodyDto, description: 'A vehicle is not in your organisation.' })
+  @ApiErrors({
+    badRequest: true,
+    forbidden: 'The driver is not marked as a student.',
+    notFound: 'A vehicle is not in your organisation.',
+  })
   async create(
     @CurrentUser() user: AuthUser,
     @Body() body: CreateTrainingAttemptDto,
@@ -95,9 +83,7 @@ export class TrainingController {
     summary: `Add what the recogniser heard, in batches; segments are merged by seq, so a batch sent again changes nothing. ${STUDENT_ONLY}`,
   })
   @ApiOkResponse({ description: 'How many segments the attempt now holds.' })
-  @ApiBadRequestResponse({ type: ApiErrorBodyDto })
-  @ApiNotFoundResponse({ type: ApiErrorBodyDto })
-  @ApiConflictResponse({ type: ApiErrorBodyDto, description: 'The attempt is finished and the batch changes it.' })
+  @ApiErrors({ badRequest: true, notFound: true, conflict: 'The attempt is finished and the batch changes it.' })
   putSegments(
     @CurrentUser() user: AuthUser,
     @UuidParam('id') id: string,
@@ -108,17 +94,16 @@ export class TrainingController {
 
   @Post('attempts/:id/audio')
   @Roles('driver')
-  @UseInterceptors(UploadInterceptor(PRACTICE_AUDIO_MEDIA))
+  @UploadRoute(PRACTICE_AUDIO_MEDIA, { durationMs: { type: 'integer' } }, ['durationMs'])
   @ApiOperation({
     summary: `Add the attempt's recording. ${STUDENT_ONLY} Judged by its content (${PRACTICE_AUDIO_MEDIA.acceptedNames}, at most ${formatBytes(PRACTICE_AUDIO_MEDIA.maxBytes)}); the same file sent again answers 200.`,
   })
-  @ApiConsumes('multipart/form-data')
-  @ApiBody(multipartBody({ durationMs: { type: 'integer' } }, ['durationMs']))
   @ApiCreatedResponse({ description: 'Stored; 200 with the same body when sent again.' })
-  @ApiBadRequestResponse({ type: ApiErrorBodyDto, description: 'Empty, not audio, or a field is wrong.' })
-  @ApiPayloadTooLargeResponse({ type: ApiErrorBodyDto })
-  @ApiNotFoundResponse({ type: ApiErrorBodyDto })
-  @ApiConflictResponse({ type: ApiErrorBodyDto, description: 'The attempt already has another recording.' })
+  @ApiErrors({
+    badRequest: 'Empty, not audio, or a field is wrong.',
+    notFound: true,
+    conflict: 'The attempt already has another recording.',
+  })
   async addAudio(
     @CurrentUser() user: AuthUser,
     @UuidParam('id') id: string,
@@ -138,8 +123,7 @@ export class TrainingController {
     summary: `Finish the attempt: the server scores the narration against the checklist (any score a client sends is refused). ${STUDENT_ONLY} Finishing again answers the stored attempt.`,
   })
   @ApiOkResponse({ description: 'The finished attempt with its score.' })
-  @ApiBadRequestResponse({ type: ApiErrorBodyDto })
-  @ApiNotFoundResponse({ type: ApiErrorBodyDto })
+  @ApiErrors({ badRequest: true, notFound: true })
   finish(
     @CurrentUser() user: AuthUser,
     @UuidParam('id') id: string,
@@ -162,7 +146,7 @@ export class TrainingController {
     summary: 'One attempt with its checklist, segments, score and review: a trainer, or the student who made it.',
   })
   @ApiOkResponse({ description: 'The attempt.' })
-  @ApiNotFoundResponse({ type: ApiErrorBodyDto })
+  @ApiErrors({ notFound: true })
   get(@CurrentUser() user: AuthUser, @UuidParam('id') id: string): Promise<TrainingAttemptResponse> {
     return this.training.get(user, id);
   }
@@ -173,8 +157,7 @@ export class TrainingController {
   @ApiProduces(...NOTE_AUDIO_TYPES)
   @ApiOkResponse({ description: 'The whole recording.' })
   @ApiPartialContentResponse({ description: 'The byte range asked for, with Content-Range.' })
-  @ApiResponse({ status: 416, type: ApiErrorBodyDto, description: 'The range lies outside the recording.' })
-  @ApiNotFoundResponse({ type: ApiErrorBodyDto })
+  @ApiErrors({ rangeNotSatisfiable: 'The range lies outside the recording.', notFound: true })
   async audio(
     @CurrentUser() user: AuthUser,
     @UuidParam('id') id: string,
@@ -190,9 +173,7 @@ export class TrainingController {
     summary: 'Mark and comment each item, grade the attempt and comment it; saved again, it replaces the review.',
   })
   @ApiOkResponse({ description: 'The attempt with its review.' })
-  @ApiBadRequestResponse({ type: ApiErrorBodyDto })
-  @ApiNotFoundResponse({ type: ApiErrorBodyDto })
-  @ApiConflictResponse({ type: ApiErrorBodyDto, description: 'The attempt is not finished yet.' })
+  @ApiErrors({ badRequest: true, notFound: true, conflict: 'The attempt is not finished yet.' })
   putReview(
     @CurrentUser() user: AuthUser,
     @UuidParam('id') id: string,
@@ -205,8 +186,7 @@ export class TrainingController {
   @Roles('trainer', 'driver')
   @ApiOperation({ summary: "A student's finished attempts over time: a student their own, a trainer with ?studentId." })
   @ApiOkResponse({ description: 'Coverage and grade per finished attempt, oldest first.' })
-  @ApiBadRequestResponse({ type: ApiErrorBodyDto })
-  @ApiNotFoundResponse({ type: ApiErrorBodyDto })
+  @ApiErrors({ badRequest: true, notFound: true })
   progress(@CurrentUser() user: AuthUser, @Query() query: TrainingProgressQuery): Promise<TrainingProgress> {
     return this.training.progress(user, query);
   }

@@ -5,9 +5,14 @@ import {
   TRAINING_AUDIO_MAX_BYTES,
   scoreNarration,
   type Checklist,
+  type CreateTrainingAttemptRequest,
   type FieldProblem,
+  type FinishTrainingAttemptRequest,
+  type PutTrainingReviewRequest,
+  type PutTrainingSegmentsRequest,
   type TrainingAttemptListItem,
   type TrainingAttemptResponse,
+  type TrainingAudioUpload,
   type TrainingProgress,
 } from '@yardcall/shared';
 import { DataSource, In, Repository, type EntityManager } from 'typeorm';
@@ -21,15 +26,7 @@ import { OBJECT_STORAGE, type ObjectStorage } from '../storage/object-storage';
 import { User } from '../users/entities/user.entity';
 import { Vehicle } from '../vehicles/entities/vehicle.entity';
 import { ChecklistCache, checklistOfSnapshot, snapshotVehicles } from '../vehicles/vehicle-checklist';
-import type {
-  CreateTrainingAttemptDto,
-  FinishTrainingAttemptDto,
-  ListTrainingAttemptsQuery,
-  PutTrainingReviewDto,
-  PutTrainingSegmentsDto,
-  TrainingAudioUploadDto,
-  TrainingProgressQuery,
-} from './dto/training.dto';
+import type { ListTrainingAttemptsQuery, TrainingProgressQuery } from './dto/training.dto';
 import { TrainingAttempt } from './entities/training-attempt.entity';
 import { TrainingReview } from './entities/training-review.entity';
 import { orderedSegments, toAttemptListItem, toAttemptResponse, toProgressPoint } from './training-view';
@@ -66,7 +63,7 @@ export class TrainingService {
 
   async create(
     user: AuthUser,
-    dto: CreateTrainingAttemptDto,
+    dto: CreateTrainingAttemptRequest,
   ): Promise<{ created: boolean; attempt: TrainingAttemptResponse }> {
     const existing = await this.attempts.findOneBy({ studentId: user.id, clientId: dto.clientId });
     if (existing) return { created: false, attempt: await this.assemble(existing) };
@@ -113,7 +110,7 @@ export class TrainingService {
   }
 
   // Segments are merged by number: a batch sent again writes the same rows.
-  async putSegments(user: AuthUser, id: string, dto: PutTrainingSegmentsDto): Promise<{ segmentCount: number }> {
+  async putSegments(user: AuthUser, id: string, dto: PutTrainingSegmentsRequest): Promise<{ segmentCount: number }> {
     const problems: FieldProblem[] = [];
     const seen = new Set<number>();
     dto.segments.forEach((segment, index) => {
@@ -147,7 +144,7 @@ export class TrainingService {
   async addAudio(
     user: AuthUser,
     id: string,
-    dto: TrainingAudioUploadDto,
+    dto: TrainingAudioUpload,
     file: Express.Multer.File | undefined,
   ): Promise<{ created: boolean; attempt: TrainingAttemptResponse }> {
     const attempt = await this.ownAttempt(this.dataSource.manager, user, id, false);
@@ -189,7 +186,7 @@ export class TrainingService {
   }
 
   // The server scores the narration; finishing again answers the stored attempt.
-  async finish(user: AuthUser, id: string, dto: FinishTrainingAttemptDto): Promise<TrainingAttemptResponse> {
+  async finish(user: AuthUser, id: string, dto: FinishTrainingAttemptRequest): Promise<TrainingAttemptResponse> {
     const attempt = await this.dataSource.transaction(async (manager) => {
       const own = await this.ownAttempt(manager, user, id, true);
       if (own.status === 'finished') return own;
@@ -253,7 +250,7 @@ export class TrainingService {
     };
   }
 
-  async putReview(user: AuthUser, id: string, dto: PutTrainingReviewDto): Promise<TrainingAttemptResponse> {
+  async putReview(user: AuthUser, id: string, dto: PutTrainingReviewRequest): Promise<TrainingAttemptResponse> {
     const attempt = await this.readable(user, id);
     if (attempt.status !== 'finished') {
       throw new ConflictException('The student has not finished this attempt yet: review it once it is finished.');

@@ -1,22 +1,26 @@
 import {
+  applyDecorators,
   BadRequestException,
   Injectable,
   mixin,
   PayloadTooLargeException,
+  UseInterceptors,
   type CallHandler,
   type ExecutionContext,
   type NestInterceptor,
   type Type,
 } from '@nestjs/common';
+import { ApiBody, ApiConsumes } from '@nestjs/swagger';
 import type { Request, Response } from 'express';
 import multer, { MulterError } from 'multer';
 import type { Observable } from 'rxjs';
+import { ApiErrors } from '../common/api-docs';
 import type { MediaKind } from './media-types';
 
 export const UPLOAD_FIELD = 'file';
 
 // The OpenAPI body of an upload: the file under UPLOAD_FIELD and the form fields sent with it.
-export function multipartBody(fields: Record<string, { type: string }>, required: string[]) {
+function multipartBody(fields: Record<string, { type: string }>, required: string[]) {
   return {
     schema: {
       type: 'object',
@@ -81,4 +85,15 @@ export function UploadInterceptor(kind: MediaKind<string>): Type<NestInterceptor
     }
   }
   return mixin(Upload);
+}
+
+// A route that takes one file of the kind as multipart/form-data, with the form fields sent beside it:
+// read by the kind's interceptor, and documented with its body and the answer to a file too large.
+export function UploadRoute(kind: MediaKind<string>, fields: Record<string, { type: string }>, required: string[]) {
+  return applyDecorators(
+    UseInterceptors(UploadInterceptor(kind)),
+    ApiConsumes('multipart/form-data'),
+    ApiBody(multipartBody(fields, required)),
+    ApiErrors({ payloadTooLarge: true }),
+  );
 }

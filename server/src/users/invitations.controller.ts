@@ -1,9 +1,9 @@
 import { Body, Controller, Get, HttpCode, HttpStatus, Param, Post } from '@nestjs/common';
-import { ApiGoneResponse, ApiNotFoundResponse, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
+import { ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
+import { ApiErrors } from '../common/api-docs';
 import type { InvitationSummary, LoginResponse } from '@yardcall/shared';
 import { Public } from '../auth/decorators/public.decorator';
 import { LoginResponseDto } from '../auth/dto/login-response.dto';
-import { ApiErrorBodyDto } from '../common/dto/api-error-body.dto';
 import { AcceptInvitationDto, InvitationSummaryDto } from './dto/invitation.dto';
 import { InvitationsService } from './invitations.service';
 
@@ -16,8 +16,7 @@ export class InvitationsController {
   @Get(':token')
   @ApiOperation({ summary: 'Who an invitation link is for, before they choose a password.' })
   @ApiOkResponse({ type: InvitationSummaryDto })
-  @ApiNotFoundResponse({ type: ApiErrorBodyDto, description: 'No such invitation.' })
-  @ApiGoneResponse({ type: ApiErrorBodyDto, description: 'Used or expired.' })
+  @ApiErrors({ notFound: 'No such invitation.', gone: 'Used or expired.' })
   summary(@Param('token') token: string): Promise<InvitationSummary> {
     return this.invitations.summary(token);
   }
@@ -26,8 +25,7 @@ export class InvitationsController {
   @HttpCode(HttpStatus.OK)
   @ApiOperation({ summary: 'Choose a password, activate the account and sign in.' })
   @ApiOkResponse({ type: LoginResponseDto })
-  @ApiNotFoundResponse({ type: ApiErrorBodyDto, description: 'No such invitation.' })
-  @ApiGoneResponse({ type: ApiErrorBodyDto, description: 'Used or expired.' })
+  @ApiErrors({ notFound: 'No such invitation.', gone: 'Used or expired.' })
   accept(@Param('token') token: string, @Body() body: AcceptInvitationDto): Promise<LoginResponse> {
     return this.invitations.accept(token, body.password);
   }

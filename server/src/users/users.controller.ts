@@ -1,18 +1,10 @@
-import { Body, Controller, Get, Patch, Post, Query } from '@nestjs/common';
-import {
-  ApiBearerAuth,
-  ApiConflictResponse,
-  ApiCreatedResponse,
-  ApiNotFoundResponse,
-  ApiOkResponse,
-  ApiOperation,
-  ApiTags,
-} from '@nestjs/swagger';
+import { Body, Get, Patch, Post, Query } from '@nestjs/common';
+import { ApiCreatedResponse, ApiOkResponse, ApiOperation } from '@nestjs/swagger';
 import type { UserSummary } from '@yardcall/shared';
+import { ApiErrors, SignedInController } from '../common/api-docs';
 import type { AuthUser } from '../auth/auth-user';
 import { CurrentUser } from '../auth/decorators/current-user.decorator';
 import { Roles } from '../auth/decorators/roles.decorator';
-import { ApiErrorBodyDto } from '../common/dto/api-error-body.dto';
 import { UuidParam } from '../common/uuid-param';
 import { InviteUserDto } from './dto/invite-user.dto';
 import { ListUsersQuery } from './dto/list-users.query';
@@ -20,9 +12,7 @@ import { UpdateUserDto } from './dto/update-user.dto';
 import { UserSummaryDto } from './dto/user-summary.dto';
 import { UsersService } from './users.service';
 
-@ApiTags('users')
-@ApiBearerAuth()
-@Controller('users')
+@SignedInController('users')
 export class UsersController {
   constructor(private readonly users: UsersService) {}
 
@@ -38,7 +28,7 @@ export class UsersController {
   @Roles('admin')
   @ApiOperation({ summary: 'Invite a person by e-mail: they get a link to choose their password.' })
   @ApiCreatedResponse({ type: UserSummaryDto })
-  @ApiConflictResponse({ type: ApiErrorBodyDto, description: 'The e-mail address is taken.' })
+  @ApiErrors({ conflict: 'The e-mail address is taken.' })
   invite(@CurrentUser() user: AuthUser, @Body() body: InviteUserDto): Promise<UserSummary> {
     return this.users.invite(user, body);
   }
@@ -47,7 +37,7 @@ export class UsersController {
   @Roles('admin')
   @ApiOperation({ summary: "Change a user's role, name or student flag." })
   @ApiOkResponse({ type: UserSummaryDto })
-  @ApiNotFoundResponse({ type: ApiErrorBodyDto })
+  @ApiErrors({ notFound: true })
   update(
     @CurrentUser() user: AuthUser,
     @UuidParam('id') id: string,

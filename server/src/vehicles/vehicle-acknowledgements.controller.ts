@@ -1,27 +1,18 @@
-import { Controller, Get, Res } from '@nestjs/common';
-import {
-  ApiBearerAuth,
-  ApiNoContentResponse,
-  ApiNotFoundResponse,
-  ApiOkResponse,
-  ApiOperation,
-  ApiTags,
-} from '@nestjs/swagger';
+import { Get, Res } from '@nestjs/common';
+import { ApiNoContentResponse, ApiOkResponse, ApiOperation } from '@nestjs/swagger';
 import type { PendingAcknowledgement } from '@yardcall/shared';
 import type { Response } from 'express';
+import { ApiErrors, SignedInController } from '../common/api-docs';
 import type { AuthUser } from '../auth/auth-user';
 import { CurrentUser } from '../auth/decorators/current-user.decorator';
 import { Roles } from '../auth/decorators/roles.decorator';
-import { ApiErrorBodyDto } from '../common/dto/api-error-body.dto';
 import { UuidParam } from '../common/uuid-param';
 import { AcknowledgementsService } from '../inspections/acknowledgements.service';
 import { PendingAcknowledgementDto } from '../inspections/dto/inspection.dto';
 
 // A vehicle's report waiting for the next driver's acknowledgement: a /vehicles route, answered by the
 // inspections module's AcknowledgementsService (tagged "inspections" in the API document, as it always was).
-@ApiTags('inspections')
-@ApiBearerAuth()
-@Controller('vehicles')
+@SignedInController('vehicles', 'inspections')
 export class VehicleAcknowledgementsController {
   constructor(private readonly acknowledgements: AcknowledgementsService) {}
 
@@ -33,7 +24,7 @@ export class VehicleAcknowledgementsController {
   })
   @ApiOkResponse({ type: PendingAcknowledgementDto })
   @ApiNoContentResponse({ description: 'Nothing waits for an acknowledgement.' })
-  @ApiNotFoundResponse({ type: ApiErrorBodyDto })
+  @ApiErrors({ notFound: true })
   async pending(
     @CurrentUser() user: AuthUser,
     @UuidParam('id') id: string,

@@ -1,26 +1,15 @@
-import { Body, Controller, Get, Patch, Post, Query } from '@nestjs/common';
-import {
-  ApiBadRequestResponse,
-  ApiBearerAuth,
-  ApiConflictResponse,
-  ApiCreatedResponse,
-  ApiNotFoundResponse,
-  ApiOkResponse,
-  ApiOperation,
-  ApiTags,
-} from '@nestjs/swagger';
+import { Body, Get, Patch, Post, Query } from '@nestjs/common';
+import { ApiCreatedResponse, ApiOkResponse, ApiOperation } from '@nestjs/swagger';
 import type { VehicleResponse } from '@yardcall/shared';
+import { ApiErrors, SignedInController } from '../common/api-docs';
 import type { AuthUser } from '../auth/auth-user';
 import { CurrentUser } from '../auth/decorators/current-user.decorator';
 import { Roles } from '../auth/decorators/roles.decorator';
-import { ApiErrorBodyDto } from '../common/dto/api-error-body.dto';
 import { UuidParam } from '../common/uuid-param';
 import { CreateVehicleDto, ListVehiclesQuery, UpdateVehicleDto, VehicleResponseDto } from './dto/vehicle.dto';
 import { VehiclesService } from './vehicles.service';
 
-@ApiTags('vehicles')
-@ApiBearerAuth()
-@Controller('vehicles')
+@SignedInController('vehicles')
 export class VehiclesController {
   constructor(private readonly vehicles: VehiclesService) {}
 
@@ -34,7 +23,7 @@ export class VehiclesController {
   @Get(':id')
   @ApiOperation({ summary: 'One vehicle with its configuration.' })
   @ApiOkResponse({ type: VehicleResponseDto })
-  @ApiNotFoundResponse({ type: ApiErrorBodyDto })
+  @ApiErrors({ notFound: true })
   get(@CurrentUser() user: AuthUser, @UuidParam('id') id: string): Promise<VehicleResponse> {
     return this.vehicles.get(user.organizationId, id);
   }
@@ -43,8 +32,7 @@ export class VehiclesController {
   @Roles('admin', 'supervisor')
   @ApiOperation({ summary: 'Add a vehicle; its configuration is checked by the shared vehicle rules.' })
   @ApiCreatedResponse({ type: VehicleResponseDto })
-  @ApiBadRequestResponse({ type: ApiErrorBodyDto, description: 'Each wrong field is named in `fields`.' })
-  @ApiConflictResponse({ type: ApiErrorBodyDto, description: 'The unit number is taken.' })
+  @ApiErrors({ badRequest: 'Each wrong field is named in `fields`.', conflict: 'The unit number is taken.' })
   create(@CurrentUser() user: AuthUser, @Body() body: CreateVehicleDto): Promise<VehicleResponse> {
     return this.vehicles.create(user.organizationId, body);
   }
@@ -53,9 +41,7 @@ export class VehiclesController {
   @Roles('admin', 'supervisor')
   @ApiOperation({ summary: 'Change a vehicle; a config sent replaces the whole configuration.' })
   @ApiOkResponse({ type: VehicleResponseDto })
-  @ApiBadRequestResponse({ type: ApiErrorBodyDto })
-  @ApiNotFoundResponse({ type: ApiErrorBodyDto })
-  @ApiConflictResponse({ type: ApiErrorBodyDto })
+  @ApiErrors({ badRequest: true, notFound: true, conflict: true })
   update(
     @CurrentUser() user: AuthUser,
     @UuidParam('id') id: string,
