@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import type { TrainingSegmentUpsert } from '@yardcall/shared';
 import { ScriptedEngine, speechError } from '@/lib/speech';
-import { cleanTranscript, estimateStartMs, startNarrationLoop } from './narration-loop';
+import { estimateStartMs, startNarrationLoop } from './narration-loop';
 
 describe('narration loop', () => {
   it('turns each heard phrase into a numbered, timed segment in lower case without punctuation', async () => {
@@ -48,6 +48,19 @@ describe('narration loop', () => {
   it('places a phrase start back by the words said, never before the turn began', () => {
     expect(estimateStartMs(0, 10_000, 'one two three four')).toBe(10_000 - 4 * 450 - 500);
     expect(estimateStartMs(9_000, 10_000, 'one two three four')).toBe(9_000);
-    expect(cleanTranscript('  Glad-hands, OK?  ')).toBe('glad-hands ok');
+  });
+
+  it('sends the words as the scorer reads them: hyphens and marks go, accents and fractions stay', async () => {
+    const engine = new ScriptedEngine(['  Glad-hands, OK?  ', 'Cámara de freno: 4/32', '¿?']);
+    const segments: TrainingSegmentUpsert[] = [];
+    const loop = startNarrationLoop({
+      engine,
+      locale: 'es',
+      startedAt: performance.now(),
+      onSegment: (s) => segments.push(s),
+    });
+    await new Promise((resolve) => setTimeout(resolve, 20));
+    await loop.stop();
+    expect(segments.map((s) => s.text)).toEqual(['glad hands ok', 'cámara de freno 4/32']);
   });
 });

@@ -1,6 +1,6 @@
 // Narration mode: the student talks freely while the engine listens turn after turn; every turn
 // heard becomes a timed segment for the scorer. No prompts are spoken: the student leads.
-import type { Locale, TrainingSegmentUpsert } from '@yardcall/shared';
+import { normaliseText, type Locale, type TrainingSegmentUpsert } from '@yardcall/shared';
 import type { SpeechEngine, SpeechError } from '@/lib/speech';
 
 // One listening turn; the engine restarts after silences within it.
@@ -28,15 +28,6 @@ export interface NarrationLoop {
   readonly done: Promise<void>;
 }
 
-// The recogniser's text as the scorer reads it: lower case, no punctuation.
-export function cleanTranscript(text: string): string {
-  return text
-    .toLocaleLowerCase()
-    .replace(/[^\p{L}\p{N}\s'/-]+/gu, ' ')
-    .replace(/\s+/g, ' ')
-    .trim();
-}
-
 export function estimateStartMs(turnStartMs: number, endMs: number, text: string): number {
   const words = text.split(' ').filter(Boolean).length;
   return Math.max(0, Math.round(Math.max(turnStartMs, endMs - words * MS_PER_WORD - START_MARGIN_MS)));
@@ -57,7 +48,8 @@ export function startNarrationLoop(options: NarrationLoopOptions): NarrationLoop
       const turnStart = now();
       const result = await engine.listen({ locale, timeoutMs: NARRATION_TURN_MS });
       if (result.kind === 'heard') {
-        const text = cleanTranscript(result.alternatives[0]?.transcript ?? '');
+        // The words as the scorer reads them (lower case, no punctuation), accents kept for the trainer.
+        const text = normaliseText(result.alternatives[0]?.transcript ?? '', locale).surface.join(' ');
         if (text) {
           const endMs = Math.max(0, Math.round(result.endedAt - startedAt));
           const startMs = Math.min(endMs, estimateStartMs(turnStart - startedAt, endMs, text));
