@@ -172,5 +172,25 @@ export default tseslint.config(
       '@typescript-eslint/unbound-method': 'off',
     },
   },
+  {
+    // Sample vehicles and hand-built checklists stay out of what ships: tests, browser flows, benchmarks
+    // and scripts take them from @yardcall/shared/testing; screens, routes and services never do.
+    files: ['client/src/**/*.{ts,tsx}', 'server/src/**/*.ts'],
+    ignores: ['**/*.test.{ts,tsx}', '**/*.spec.ts', '**/*.bench.ts', 'client/src/testing/**'],
+    rules: {
+      'no-restricted-imports': [
+        'error',
+        {
+          paths: [
+            {
+              name: '@yardcall/shared/testing',
+              message:
+                'Test fixtures are for tests, e2e, benchmarks and scripts; production code uses @yardcall/shared.',
+            },
+          ],
+        },
+      ],
+    },
+  },
   prettier,
 );

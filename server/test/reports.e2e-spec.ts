@@ -2,8 +2,6 @@ import {
   buildChecklist,
   formatZonedTime,
   safetyCaution,
-  sampleTractor,
-  sampleTrailer,
   summarizeInspection,
   type Checklist,
   type ChecklistItem,
@@ -15,6 +13,7 @@ import {
   type Role,
   type VoiceNoteResponse,
 } from '@yardcall/shared';
+import { sampleTractor, sampleTrailer } from '@yardcall/shared/testing';
 import { randomInt, randomUUID } from 'node:crypto';
 import request from 'supertest';
 import { renderInspectionReport, type InspectionReport } from '../src/reports/inspection-report';

@@ -1,7 +1,8 @@
 // Benchmark: a 15-minute narration of about 300 segments scored against the generated
 // tractor-and-trailer checklist. Goal: well under 100 ms a scoring (our own target).
 import { measure, type BenchResult } from '../bench/index.js';
-import { buildChecklist, sampleCombination, type Checklist } from '../checklist/index.js';
+import { buildChecklist, type Checklist } from '../checklist/index.js';
+import { sampleCombination } from '../testing.js';
 import { scoreNarration } from './score-narration.js';
 import type { NarrationSegment } from './types.js';
 

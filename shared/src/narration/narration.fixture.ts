@@ -1,11 +1,6 @@
 // A small hand-built tractor walk-around (invented fleet), independent of the checklist generator's words.
-import {
-  stopPerItem,
-  type Checklist,
-  type ChecklistItem,
-  type Locale,
-  type WheelPosition,
-} from '../checklist/index.js';
+import type { Checklist, ChecklistItem, Locale, WheelPosition } from '../checklist/index.js';
+import { stopPerItem } from '../testing.js';
 
 interface Draft {
   key: string;

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { buildChecklist, sampleCombination } from '../checklist/index.js';
+import { buildChecklist } from '../checklist/index.js';
+import { sampleCombination } from '../testing.js';
 import { handBuiltChecklist, spoken } from './narration.fixture.js';
 import { scoreNarration } from './score-narration.js';
 import type { NarrationScore } from './types.js';

@@ -1,55 +1,19 @@
 import { describe, expect, it } from 'vitest';
-import {
-  buildChecklist,
-  sampleCombination,
-  stopPerItem,
-  type Checklist,
-  type ChecklistItem,
-  type ItemResult,
-} from '../checklist/index.js';
+import { buildChecklist, type ChecklistItem, type ItemResult } from '../checklist/index.js';
 import { RUSHED_RULE, summarizeInspection } from '../summary/index.js';
+import { handItem, sampleCombination, threeZoneChecklist } from '../testing.js';
 import { RECURRING_RULE, findRecurringDefects, rushedFlag, walkedRoute, type EarlierDefect } from './index.js';
 import { itemKeyOnUnit } from './recurring.js';
 
-function item(key: string, zone: string): ChecklistItem {
-  return {
-    key,
-    zone,
-    stopKey: key,
-    name: key,
-    names: [key],
-    unitIndex: 0,
-    unitKind: 'tractor',
-    category: 'lights',
-    safety: false,
-    title: key,
-    positionLabel: `Tractor, ${key}`,
-    prompt: key,
-    shortPrompt: key,
-    expects: { type: 'check' },
-    points: [],
-  };
-}
-
 // An invented three-zone tractor walk-around.
 const checklistItems: ChecklistItem[] = [
-  item('u0.front.a', 'front'),
-  item('u0.front.b', 'front'),
-  item('u0.left.a', 'left'),
-  item('u0.left.b', 'left'),
-  item('u0.cab.a', 'cab'),
+  handItem('u0.front.a', 'front'),
+  handItem('u0.front.b', 'front'),
+  handItem('u0.left.a', 'left'),
+  handItem('u0.left.b', 'left'),
+  handItem('u0.cab.a', 'cab'),
 ];
-const checklist: Checklist = {
-  kind: 'pre_trip',
-  locale: 'en',
-  zones: [
-    { key: 'front', title: 'Front' },
-    { key: 'left', title: 'Left side' },
-    { key: 'cab', title: 'In the cab' },
-  ],
-  stops: stopPerItem(checklistItems),
-  items: checklistItems,
-};
+const checklist = threeZoneChecklist(checklistItems);
 
 const START = '2026-11-30T06:00:00.000Z';
 function at(seconds: number): string {

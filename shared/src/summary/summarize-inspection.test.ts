@@ -1,59 +1,22 @@
 import { describe, expect, it } from 'vitest';
-import {
-  buildChecklist,
-  sampleCombination,
-  stopPerItem,
-  type Checklist,
-  type ChecklistItem,
-  type ItemResult,
-} from '../checklist/index.js';
+import { buildChecklist, type Checklist, type ChecklistItem, type ItemResult } from '../checklist/index.js';
+import { handItem, sampleCombination, stopPerItem, threeZoneChecklist } from '../testing.js';
 import { RUSHED_RULE, summarizeInspection } from './summarize-inspection.js';
-
-function item(key: string, zone: string, overrides: Partial<ChecklistItem> = {}): ChecklistItem {
-  return {
-    key,
-    zone,
-    stopKey: key,
-    name: key,
-    names: [key],
-    unitIndex: 0,
-    unitKind: 'tractor',
-    category: 'lights',
-    safety: false,
-    title: key,
-    positionLabel: `Tractor, ${key}`,
-    prompt: key,
-    shortPrompt: key,
-    expects: { type: 'check' },
-    points: [],
-    ...overrides,
-  };
-}
 
 // An invented three-zone tractor walk-around.
 const checklistItems: ChecklistItem[] = [
-  item('front.headlights', 'front'),
-  item('front.steer.left.tread', 'front', {
+  handItem('front.headlights', 'front'),
+  handItem('front.steer.left.tread', 'front', {
     category: 'tires',
     safety: true,
     expects: { type: 'measure', quantity: 'tread_depth' },
     position: { unitIndex: 0, axleIndex: 0, side: 'left' },
   }),
-  item('left.mudflap', 'left', { category: 'body' }),
-  item('left.slack', 'left', { category: 'brakes', safety: true }),
-  item('cab.horn', 'cab', { category: 'horn' }),
+  handItem('left.mudflap', 'left', { category: 'body' }),
+  handItem('left.slack', 'left', { category: 'brakes', safety: true }),
+  handItem('cab.horn', 'cab', { category: 'horn' }),
 ];
-const checklist: Checklist = {
-  kind: 'pre_trip',
-  locale: 'en',
-  zones: [
-    { key: 'front', title: 'Front' },
-    { key: 'left', title: 'Left side' },
-    { key: 'cab', title: 'In the cab' },
-  ],
-  stops: stopPerItem(checklistItems),
-  items: checklistItems,
-};
+const checklist = threeZoneChecklist(checklistItems);
 
 const START = Date.parse('2026-03-02T06:00:00.000Z');
 const at = (seconds: number): string => new Date(START + seconds * 1000).toISOString();
@@ -260,7 +223,7 @@ describe('summarizeInspection: gaps and timing', () => {
 describe('summarizeInspection: rushed walk-around (our own practice)', () => {
   // A checklist of count items in one zone.
   function oneZone(count: number): Checklist {
-    const items = Array.from({ length: count }, (_, i) => item(`zone.item${i}`, 'zone'));
+    const items = Array.from({ length: count }, (_, i) => handItem(`zone.item${i}`, 'zone'));
     return {
       kind: 'pre_trip',
       locale: 'en',
@@ -382,14 +345,14 @@ describe('summarizeInspection: rushed, judged per stop on a tractor and 2-axle t
 
 describe('summarizeInspection: fixed on the spot', () => {
   // A steer tire's pressure and a tail lamp, as a driver fixes them at the air line and with a spare bulb.
-  const pressureItem = item('front.steer.left.pressure', 'front', {
+  const pressureItem = handItem('front.steer.left.pressure', 'front', {
     category: 'tires',
     safety: true,
     expects: { type: 'measure', quantity: 'tire_pressure' },
     limitContext: { axle: 'steer', specPsi: 110, sidewallMaxPsi: 120 },
   });
-  const items = [pressureItem, item('left.tail', 'left'), item('cab.horn', 'cab', { category: 'horn' })];
-  const list: Checklist = { ...checklist, stops: stopPerItem(items), items };
+  const items = [pressureItem, handItem('left.tail', 'left'), handItem('cab.horn', 'cab', { category: 'horn' })];
+  const list = threeZoneChecklist(items);
   const low = { quantity: 'tire_pressure', value: 95, unit: 'psi' } as const;
   const lowDefect = (fixed?: ItemResult['fixed']): ItemResult =>
     answered(pressureItem.key, 10, {
@@ -495,15 +458,15 @@ describe('summarizeInspection: fixed on the spot', () => {
 
 describe('summarizeInspection: measured checks passed without a reading', () => {
   const measured = (key: string, quantity: 'tread_depth' | 'tire_pressure') =>
-    item(key, 'front', { category: 'tires', safety: true, expects: { type: 'measure', quantity } });
+    handItem(key, 'front', { category: 'tires', safety: true, expects: { type: 'measure', quantity } });
   const items = [
     measured('steer.tread', 'tread_depth'),
     measured('steer.pressure', 'tire_pressure'),
     measured('drive.pressure', 'tire_pressure'),
     measured('drive.tread', 'tread_depth'),
-    item('front.headlights', 'front'),
+    handItem('front.headlights', 'front'),
   ];
-  const list: Checklist = { ...checklist, stops: stopPerItem(items), items };
+  const list = threeZoneChecklist(items);
 
   it('counts passes by eye apart from required readings with no gauge, and neither for a number or a plain check', () => {
     const summary = summarizeInspection(list, [
@@ -537,7 +500,7 @@ describe('summarizeInspection: measured checks passed without a reading', () => 
 describe('summarizeInspection: one answer for a whole stop', () => {
   it('times the gaps between answers, not between the items one answer covered', () => {
     // Twelve stops of five items, each stop answered at once every 10 s: not rushed, though most items share a time.
-    const items = Array.from({ length: 60 }, (_, i) => item(`zone.stop${Math.floor(i / 5)}.item${i % 5}`, 'zone'));
+    const items = Array.from({ length: 60 }, (_, i) => handItem(`zone.stop${Math.floor(i / 5)}.item${i % 5}`, 'zone'));
     for (const entry of items) entry.stopKey = entry.key.replace(/\.item\d$/, '');
     const stops = Array.from({ length: 12 }, (_, n) => ({
       key: `zone.stop${n}`,

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { sampleTractor, sampleTrailer } from '../checklist/fixtures.js';
+import { sampleTractor, sampleTrailer } from '../testing.js';
 import { validateVehicle, type VehicleInput } from './index.js';
 
 const fields = (input: VehicleInput) => validateVehicle(input).map((problem) => problem.field);

@@ -1,5 +1,6 @@
 // The interpreter's corpus: what recognisers return for drivers' answers, with the meaning expected.
-import { buildChecklist, sampleCombination, type Expectation, type Locale } from '../../checklist/index.js';
+import { buildChecklist, type Expectation, type Locale } from '../../checklist/index.js';
+import { sampleCombination } from '../../testing.js';
 import type { Alternative, Command, Interpretation, StopInterpretation, StopItemRef } from '../types.js';
 import en from './en.json' with { type: 'json' };
 import es from './es.json' with { type: 'json' };

@@ -1,7 +1,8 @@
 import 'fake-indexeddb/auto';
 import { screen, waitFor } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import { buildChecklist, sampleCombination, type Checklist } from '@yardcall/shared';
+import { buildChecklist, type Checklist } from '@yardcall/shared';
+import { sampleCombination } from '@yardcall/shared/testing';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { getOfflineRuntime } from '@/lib/offline';
 import { ScriptedEngine, TypedInputEngine, type SpeechEngine } from '@/lib/speech';

@@ -1,4 +1,5 @@
-import { buildChecklist, sampleCombination, type Checklist, type ItemResult } from '@yardcall/shared';
+import { buildChecklist, type Checklist, type ItemResult } from '@yardcall/shared';
+import { sampleCombination } from '@yardcall/shared/testing';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { ScriptedEngine, type ScriptedReply, type ScriptedTurn } from '@/lib/speech';
 import { runVoiceLoop, summarizeTimings, type VoiceLoopRunner } from './run-voice-loop';

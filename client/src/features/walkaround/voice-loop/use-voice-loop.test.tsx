@@ -1,5 +1,6 @@
 import { act, renderHook, waitFor } from '@testing-library/react';
-import { buildChecklist, sampleCombination, type ItemResult } from '@yardcall/shared';
+import { buildChecklist, type ItemResult } from '@yardcall/shared';
+import { sampleCombination } from '@yardcall/shared/testing';
 import { describe, expect, it } from 'vitest';
 import { ScriptedEngine } from '@/lib/speech';
 import { useVoiceLoop } from './use-voice-loop';

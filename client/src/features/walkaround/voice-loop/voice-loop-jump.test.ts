@@ -1,4 +1,5 @@
-import { buildChecklist, sampleCombination, type Checklist } from '@yardcall/shared';
+import { buildChecklist, type Checklist } from '@yardcall/shared';
+import { sampleCombination } from '@yardcall/shared/testing';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { initialVoiceLoopState, reduceVoiceLoop, type VoiceLoopState } from './voice-loop';
 import { contextFor } from './voice-loop.testing';

@@ -1,4 +1,5 @@
-import { buildChecklist, sampleCombination, verdictWords, type Checklist, type ChecklistStop } from '@yardcall/shared';
+import { buildChecklist, verdictWords, type Checklist, type ChecklistStop } from '@yardcall/shared';
+import { sampleCombination } from '@yardcall/shared/testing';
 import { beforeAll, describe, expect, it } from 'vitest';
 import {
   MAX_UNCLEAR,
