@@ -5,6 +5,7 @@ import tseslint from 'typescript-eslint';
 import importX from 'eslint-plugin-import-x';
 import { createTypeScriptImportResolver } from 'eslint-import-resolver-typescript';
 import reactHooks from 'eslint-plugin-react-hooks';
+import jsxA11y from 'eslint-plugin-jsx-a11y-x';
 import vitest from '@vitest/eslint-plugin';
 import jest from 'eslint-plugin-jest';
 import playwright from 'eslint-plugin-playwright';
@@ -129,10 +130,12 @@ export default tseslint.config(
   },
   {
     files: ['client/src/**/*.{ts,tsx}'],
-    plugins: { 'react-hooks': reactHooks },
+    plugins: { 'react-hooks': reactHooks, 'jsx-a11y-x': jsxA11y },
     languageOptions: { globals: { ...globals.browser } },
     rules: {
       ...reactHooks.configs.recommended.rules,
+      // The maintained fork of jsx-a11y: the original has no release for ESLint 10.
+      ...jsxA11y.configs.strict.rules,
       // app -> features -> lib/components; no feature imports another feature.
       'import-x/no-restricted-paths': [
         'error',

@@ -75,15 +75,17 @@ export function SignaturePad({ onChange, label, clearLabel, error }: SignaturePa
       <p className="font-bold" id={labelId}>
         {label}
       </p>
-      {/* White like paper in every theme, so the ink shows and the PNG reads on the report. */}
+      {/* White like paper in every theme, so the ink shows and the PNG reads on the report. The error
+          is told through the description: an img cannot carry aria-invalid. */}
       <canvas
         ref={canvasRef}
         width={600}
         height={200}
+        // A canvas is a picture to assistive technology; this one is the drawn signature, named by the label.
+        // eslint-disable-next-line jsx-a11y-x/no-interactive-element-to-noninteractive-role
         role="img"
         aria-labelledby={labelId}
         aria-describedby={error ? errorId : undefined}
-        aria-invalid={error ? true : undefined}
         data-testid="signature-pad"
         className={`h-40 w-full touch-none rounded-lg bg-white ${error ? 'border-4 border-danger' : 'border-2 border-line'}`}
         onPointerDown={down}

@@ -213,6 +213,9 @@ export function WaveformPlayer({ audio, label, ref, clip, onClipChange, onDurati
 
   return (
     <div className="flex flex-col gap-2" data-testid="waveform-player" data-playing={playing} data-ready={ready}>
+      {/* Never shown: the waveform plays it. A voice note has no captions; what was heard of it, where
+          anything was, is shown by the page beside the player. */}
+      {/* eslint-disable-next-line jsx-a11y-x/media-has-caption */}
       <audio ref={audioRef} preload="auto" className="hidden" data-testid="waveform-audio" />
       <div
         ref={waveRef}

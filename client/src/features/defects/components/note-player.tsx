@@ -1,4 +1,4 @@
-import { useEffect, useRef } from 'react';
+import { useEffect, useId, useRef } from 'react';
 import { useTranslation } from 'react-i18next';
 import type { VoiceNoteResponse } from '@yardcall/shared';
 import { ErrorAlert } from '@/components/ui/alert';
@@ -10,6 +10,7 @@ function NoteAudio({ note }: { note: VoiceNoteResponse }) {
   const { t } = useTranslation();
   const audio = useNoteAudio(note.id);
   const element = useRef<HTMLAudioElement>(null);
+  const heardId = useId();
   const blob = audio.data;
 
   // An object URL for the fetched audio, freed when the player goes away.
@@ -29,15 +30,19 @@ function NoteAudio({ note }: { note: VoiceNoteResponse }) {
       <figcaption className="font-bold">
         {t('mechanic.note.title', { seconds: Math.max(1, Math.round(note.durationMs / 1000)) })}
       </figcaption>
-      {note.heard ? <p>{t('mechanic.note.heard', { text: note.heard })}</p> : null}
+      {note.heard ? <p id={heardId}>{t('mechanic.note.heard', { text: note.heard })}</p> : null}
       {audio.isError ? (
         <ErrorAlert>{describeError(audio.error)}</ErrorAlert>
       ) : (
+        // A driver's voice note has no captions to offer: what was heard of it, when anything was, is its
+        // text alternative, shown above and tied to the player as its description.
+        // eslint-disable-next-line jsx-a11y-x/media-has-caption
         <audio
           ref={element}
           controls
           preload="metadata"
           aria-label={t('mechanic.note.play')}
+          aria-describedby={note.heard ? heardId : undefined}
           aria-busy={blob ? undefined : true}
           className="w-full max-w-md"
           data-testid="defect-note-audio"

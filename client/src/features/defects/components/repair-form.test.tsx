@@ -105,7 +105,9 @@ describe('RepairForm', () => {
 
     await userEvent.click(screen.getByRole('button', { name: 'Sign and certify' }));
     expect(screen.getByText('Draw your signature in the box to certify.')).toBeInTheDocument();
-    expect(screen.getByTestId('signature-pad')).toHaveAttribute('aria-invalid', 'true');
+    expect(screen.getByTestId('signature-pad')).toHaveAccessibleDescription(
+      /Draw your signature in the box to certify\./,
+    );
     expect(calls).toHaveLength(0);
 
     drawSignature();

@@ -23,20 +23,20 @@ function AppUpdateOffer() {
   );
 }
 
-// Every home: an h1 naming it and a stable test id per role.
+// Every home: an h1 naming it and a stable test id per role (`forRole`: `role` is ARIA's word).
 export function HomePage({
-  role,
+  forRole,
   title,
   lead,
   children,
 }: {
-  role: Role;
+  forRole: Role;
   title: string;
   lead?: ReactNode;
   children: ReactNode;
 }) {
   return (
-    <div data-testid={`home-${role}`}>
+    <div data-testid={`home-${forRole}`}>
       <AppUpdateOffer />
       <PageHeading title={title} lead={lead} />
       {children}

@@ -13,7 +13,7 @@ export function AdminHome() {
     { to: '/admin/readings', label: t('readings.homeLink'), hint: t('readings.homeHint') },
   ];
   return (
-    <HomePage role="admin" title={t('admin.title')} lead={t('admin.lead')}>
+    <HomePage forRole="admin" title={t('admin.title')} lead={t('admin.lead')}>
       <nav aria-label={t('admin.title')}>
         <ul className="grid grid-cols-1 gap-tap-gap md:grid-cols-2 lg:grid-cols-4">
           {links.map((link) => (

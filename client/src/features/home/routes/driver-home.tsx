@@ -55,7 +55,7 @@ function RecentReports() {
 export function DriverHome({ onThisPhone }: { onThisPhone?: ReactNode }) {
   const { t } = useTranslation();
   return (
-    <HomePage role="driver" title={t('driver.title')} lead={t('driver.lead')}>
+    <HomePage forRole="driver" title={t('driver.title')} lead={t('driver.lead')}>
       <div className="mb-8">
         <LinkButton to={START_INSPECTION_PATH} size="large" data-testid="start-inspection">
           {t('driver.start')}

@@ -7,7 +7,7 @@ import { HomePage } from '../components/home-page';
 export function MechanicHome({ openDefects, recentRepairs }: { openDefects: ReactNode; recentRepairs: ReactNode }) {
   const { t } = useTranslation();
   return (
-    <HomePage role="mechanic" title={t('mechanic.title')} lead={t('mechanic.lead')}>
+    <HomePage forRole="mechanic" title={t('mechanic.title')} lead={t('mechanic.lead')}>
       <Section title={t('mechanic.openDefects')} id="open-defects">
         {openDefects}
       </Section>

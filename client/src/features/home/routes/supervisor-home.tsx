@@ -6,7 +6,7 @@ import { HomePage } from '../components/home-page';
 export function SupervisorHome({ board }: { board: ReactNode }) {
   const { t } = useTranslation();
   return (
-    <HomePage role="supervisor" title={t('supervisor.title')} lead={t('supervisor.lead')}>
+    <HomePage forRole="supervisor" title={t('supervisor.title')} lead={t('supervisor.lead')}>
       <Section title={t('supervisor.vehicles')} id="fleet-status">
         {board}
       </Section>

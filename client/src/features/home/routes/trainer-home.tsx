@@ -15,7 +15,7 @@ export function TrainerHome({
 }) {
   const { t } = useTranslation();
   return (
-    <HomePage role="trainer" title={t('trainer.title')} lead={t('trainer.lead')}>
+    <HomePage forRole="trainer" title={t('trainer.title')} lead={t('trainer.lead')}>
       {waiting ? (
         <Section title={t('training.home.waiting')} id="attempts-waiting">
           {waiting}

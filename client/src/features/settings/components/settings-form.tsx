@@ -128,7 +128,7 @@ export function SettingsForm({ initial, saveToAccount }: SettingsFormProps) {
           {THEMES.map((theme: Theme) => (
             <label
               key={theme}
-              className="flex min-h-tap cursor-pointer items-start gap-3 rounded-xl border-2 border-line bg-surface p-3 has-[:checked]:border-4 has-[:checked]:border-primary"
+              className="grid min-h-tap cursor-pointer grid-cols-[auto_1fr] items-start gap-x-3 rounded-xl border-2 border-line bg-surface p-3 has-[:checked]:border-4 has-[:checked]:border-primary"
             >
               <input
                 type="radio"
@@ -136,12 +136,10 @@ export function SettingsForm({ initial, saveToAccount }: SettingsFormProps) {
                 value={theme}
                 checked={settings.theme === theme}
                 onChange={() => change({ theme })}
-                className="mt-1 size-7 shrink-0 accent-primary"
+                className="row-span-2 mt-1 size-7 shrink-0 accent-primary"
               />
-              <span>
-                <span className="block font-bold">{t(`settings.theme.${theme}.name`)}</span>
-                <span className="block text-muted">{t(`settings.theme.${theme}.description`)}</span>
-              </span>
+              <span className="font-bold">{t(`settings.theme.${theme}.name`)}</span>
+              <span className="text-muted">{t(`settings.theme.${theme}.description`)}</span>
             </label>
           ))}
         </fieldset>

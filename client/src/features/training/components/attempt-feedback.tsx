@@ -40,7 +40,7 @@ export function AttemptFeedback({ attempt }: { attempt: TrainingAttemptResponse 
         )}
       </Section>
       <Section title={t('training.attempt.recording')} id="feedback-recording">
-        <AttemptAudio ref={audioRef} attemptId={attempt.id} hasAudio={attempt.audio !== null} />
+        <AttemptAudio ref={audioRef} attempt={attempt} />
         {playingFrom !== null ? (
           <p role="status" className="mt-2">
             {t('training.attempt.playingFrom', { time: formatClock(playingFrom) })}

@@ -82,7 +82,7 @@ export function AttemptReview({ attempt }: { attempt: TrainingAttemptResponse })
     <div data-testid="attempt-review">
       <AttemptSummary attempt={attempt} />
       <Section title={t('training.attempt.recording')} id="attempt-recording">
-        <AttemptAudio ref={audioRef} attemptId={attempt.id} hasAudio={attempt.audio !== null} />
+        <AttemptAudio ref={audioRef} attempt={attempt} />
         {playingFrom !== null ? (
           <p role="status" className="mt-2" data-testid="playing-from">
             {t('training.attempt.playingFrom', { time: formatClock(playingFrom) })}
