@@ -11,7 +11,7 @@ import { InspectionVehicle } from './entities/inspection-vehicle.entity';
 import { Inspection } from './entities/inspection.entity';
 import { Signature } from './entities/signature.entity';
 import { toSignatureResponse } from './inspection-view';
-import { nextDriverStatement, signerColumns } from './statements';
+import { reportSignature } from './statements';
 
 // Before driving, the next driver reviews the last report and signs that its repairs were certified (49 CFR 396.13).
 @Injectable()
@@ -91,18 +91,14 @@ export class AcknowledgementsService {
       }
       const signedAt = new Date();
       const signature = await manager.save(
-        manager.create(Signature, {
-          inspectionId: inspection.id,
-          defectId: null,
-          role: 'next_driver',
-          ...signerColumns(user, dto.signature),
-          statement: nextDriverStatement(inspection.locale, {
-            name: dto.signature.name,
-            units: inspection.vehicles.map((v) => v.unitNumber),
+        manager.create(
+          Signature,
+          reportSignature(inspection, user, dto.signature, {
+            role: 'next_driver',
             date: inspection.submittedAt ?? inspection.startedAt,
+            signedAt,
           }),
-          signedAt,
-        }),
+        ),
       );
       const signer = await manager.findOne(User, { select: { id: true, name: true }, where: { id: user.id } });
       return toSignatureResponse(signature, signer?.name ?? '');

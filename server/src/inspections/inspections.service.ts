@@ -29,7 +29,7 @@ import { assertEditable, findReadableInspection, INSPECTION_NOT_FOUND } from './
 import { InspectionChecklists } from './inspection-checklists';
 import { toListItem, toResultResponse, toSharedResult, toSignatureResponse } from './inspection-view';
 import { recurringDefectsOf } from './review';
-import { driverStatement, signerColumns } from './statements';
+import { reportSignature } from './statements';
 
 // A signature cannot come before the walk-around began (the future is the DTO's to refuse).
 function signedTimeOf(dto: SubmitInspectionDto, startedAt: Date, now: Date): Date {
@@ -52,7 +52,6 @@ export class InspectionsService {
   constructor(
     @InjectRepository(Inspection) private readonly inspections: Repository<Inspection>,
     @InjectRepository(Vehicle) private readonly vehicles: Repository<Vehicle>,
-    @InjectRepository(User) private readonly users: Repository<User>,
     private readonly dataSource: DataSource,
     private readonly checklists: InspectionChecklists,
     private readonly notes: NotesService,
@@ -69,7 +68,7 @@ export class InspectionsService {
 
     const snapshot = await snapshotVehicles(this.vehicles, user.organizationId, dto.vehicleIds);
     const [driver, organization] = await Promise.all([
-      this.users.findOne({ select: { id: true, settings: true }, where: { id: user.id } }),
+      this.dataSource.manager.findOne(User, { select: { id: true, settings: true }, where: { id: user.id } }),
       this.dataSource.manager.findOne(Organization, {
         select: { id: true, requiredReadings: true },
         where: { id: user.organizationId },
@@ -163,19 +162,15 @@ export class InspectionsService {
       // when it was signed on the phone, which may be hours earlier with no signal.
       const now = new Date();
       const signedAt = signedTimeOf(dto, inspection.startedAt, now);
-      await manager.insert(Signature, {
-        inspectionId: id,
-        defectId: null,
-        role: 'driver',
-        ...signerColumns(user, dto.signature),
-        statement: driverStatement(inspection.locale, {
-          name: dto.signature.name,
-          units: inspection.vehicles.map((v) => v.unitNumber),
+      await manager.insert(
+        Signature,
+        reportSignature(inspection, user, dto.signature, {
+          role: 'driver',
           date: inspection.startedAt,
           defectCount: summary.defects.length,
+          signedAt,
         }),
-        signedAt,
-      });
+      );
       const defects = await this.defects.openFromReport(manager, { inspection, summary, byKey, results: rows });
       const recurring = await recurringDefectsOf(manager, inspection, checklist, summary);
       await manager.update(Inspection, id, {

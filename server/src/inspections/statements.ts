@@ -71,3 +71,30 @@ export function signerColumns(
 ): { signerId: string; name: string; drawing: string | null } {
   return { signerId: user.id, name: signature.name, drawing: signature.drawing ?? null };
 }
+
+// Who signs a whole report and when: the driver over the defects it lists, or the next driver.
+export type ReportSigning =
+  | { role: 'driver'; date: Date; defectCount: number; signedAt: Date }
+  | { role: 'next_driver'; date: Date; signedAt: Date };
+
+// The row of a signature on a whole report (no defect of its own), with the statement the signer's role
+// certifies over the report's units, in the report's language.
+export function reportSignature(
+  inspection: { id: string; locale: Locale; vehicles: { unitNumber: string }[] },
+  user: AuthUser,
+  signature: SignatureInput,
+  signing: ReportSigning,
+) {
+  const input = { name: signature.name, units: inspection.vehicles.map((v) => v.unitNumber), date: signing.date };
+  return {
+    inspectionId: inspection.id,
+    defectId: null,
+    role: signing.role,
+    ...signerColumns(user, signature),
+    statement:
+      signing.role === 'driver'
+        ? driverStatement(inspection.locale, { ...input, defectCount: signing.defectCount })
+        : nextDriverStatement(inspection.locale, input),
+    signedAt: signing.signedAt,
+  };
+}
