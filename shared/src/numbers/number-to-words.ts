@@ -1,103 +1,37 @@
-// Says a number in words, for read-backs; the parser reads every form this writes.
+// Says a number in words, for read-backs, from the words the parser reads: it reads every form this writes.
 import type { Locale } from '../checklist/index.js';
+import { SAID_NUMBERS } from '../text/index.js';
 
-const EN_UNITS = [
-  'zero',
-  'one',
-  'two',
-  'three',
-  'four',
-  'five',
-  'six',
-  'seven',
-  'eight',
-  'nine',
-  'ten',
-  'eleven',
-  'twelve',
-  'thirteen',
-  'fourteen',
-  'fifteen',
-  'sixteen',
-  'seventeen',
-  'eighteen',
-  'nineteen',
-] as const;
-const EN_TENS = ['', '', 'twenty', 'thirty', 'forty', 'fifty', 'sixty', 'seventy', 'eighty', 'ninety'] as const;
+const EN = SAID_NUMBERS.en;
+const ES = SAID_NUMBERS.es;
 
-const ES_SMALL = [
-  'cero',
-  'uno',
-  'dos',
-  'tres',
-  'cuatro',
-  'cinco',
-  'seis',
-  'siete',
-  'ocho',
-  'nueve',
-  'diez',
-  'once',
-  'doce',
-  'trece',
-  'catorce',
-  'quince',
-  'dieciséis',
-  'diecisiete',
-  'dieciocho',
-  'diecinueve',
-  'veinte',
-  'veintiuno',
-  'veintidós',
-  'veintitrés',
-  'veinticuatro',
-  'veinticinco',
-  'veintiséis',
-  'veintisiete',
-  'veintiocho',
-  'veintinueve',
-] as const;
-const ES_TENS = ['', '', '', 'treinta', 'cuarenta', 'cincuenta', 'sesenta', 'setenta', 'ochenta', 'noventa'] as const;
-const ES_HUNDREDS = [
-  '',
-  'ciento',
-  'doscientos',
-  'trescientos',
-  'cuatrocientos',
-  'quinientos',
-  'seiscientos',
-  'setecientos',
-  'ochocientos',
-  'novecientos',
-] as const;
-
-function pick<T extends string>(list: readonly T[], index: number): T {
+function pick(list: readonly string[], index: number): string {
   const word = list[index];
   if (word === undefined) throw new RangeError(`No word for ${index}`);
   return word;
 }
 
 function englishBelowThousand(n: number): string {
-  if (n < 20) return pick(EN_UNITS, n);
+  if (n < 20) return pick(EN.small, n);
   if (n < 100) {
     const unit = n % 10;
-    return unit === 0 ? pick(EN_TENS, n / 10) : `${pick(EN_TENS, Math.floor(n / 10))}-${pick(EN_UNITS, unit)}`;
+    return unit === 0 ? pick(EN.tens, n / 10) : `${pick(EN.tens, Math.floor(n / 10))}-${pick(EN.small, unit)}`;
   }
   const rest = n % 100;
-  const head = `${pick(EN_UNITS, Math.floor(n / 100))} hundred`;
+  const head = `${pick(EN.small, Math.floor(n / 100))} hundred`;
   return rest === 0 ? head : `${head} ${englishBelowThousand(rest)}`;
 }
 
 function spanishBelowThousand(n: number): string {
-  if (n < 30) return pick(ES_SMALL, n);
+  if (n < 30) return pick(ES.small, n);
   if (n < 100) {
     const unit = n % 10;
-    const tens = pick(ES_TENS, Math.floor(n / 10));
-    return unit === 0 ? tens : `${tens} y ${pick(ES_SMALL, unit)}`;
+    const tens = pick(ES.tens, Math.floor(n / 10));
+    return unit === 0 ? tens : `${tens} y ${pick(ES.small, unit)}`;
   }
   if (n === 100) return 'cien';
   const rest = n % 100;
-  const head = pick(ES_HUNDREDS, Math.floor(n / 100));
+  const head = pick(ES.hundreds, Math.floor(n / 100));
   return rest === 0 ? head : `${head} ${spanishBelowThousand(rest)}`;
 }
 

@@ -9,4 +9,4 @@ export {
   type PhraseMatch,
   type StemmedWords,
 } from './phrase-matcher.js';
-export { NUMBER_WORDS, type NumberWords } from './number-words.js';
+export { NUMBER_WORDS, SAID_NUMBERS, type NumberWords } from './number-words.js';

@@ -1,6 +1,7 @@
 // Tokens of what a recogniser heard, for the interpreter and the number parser: case, accents,
 // punctuation, number formats and pause marks, with the shared stems.
 import type { Locale } from '../checklist/types.js';
+import { foldAccents } from './fold-accents.js';
 import { NUMBER_WORDS } from './number-words.js';
 import { stemWord } from './stem-word.js';
 
@@ -13,13 +14,6 @@ export interface NormalisedText {
   stems: string[];
   // True where the recogniser put a pause mark (comma, full stop...) after the token.
   pauseAfter: boolean[];
-}
-
-// Recognisers, typed input and lexicons disagree on accents: all are folded alike.
-const COMBINING_MARKS = /\p{M}/gu;
-
-function foldAccents(text: string): string {
-  return text.normalize('NFD').replace(COMBINING_MARKS, '').normalize('NFC');
 }
 
 // Spanish fraction words are often run together with their number ("treintaidosavos", "32avos").

@@ -1,5 +1,52 @@
-// Number words per locale, as data: what the normaliser splits and the number reader reads.
+// Number words per locale, as data: what the normaliser splits, the number reader reads and the
+// read-backs say. The words are written once, as said (SAID_NUMBERS); the reading tables fold them.
 import type { Locale } from '../checklist/types.js';
+import { foldAccents } from './fold-accents.js';
+
+export interface SaidNumbers {
+  // By value: 0..19 in English, 0..29 in Spanish (which runs 21..29 together).
+  small: readonly string[];
+  // By their digit: "twenty" at 2; empty where no tens word is said.
+  tens: readonly string[];
+  // By their digit: Spanish "ciento", "doscientos"; English says "hundred" instead.
+  hundreds: readonly string[];
+}
+
+function said(...lines: string[]): string[] {
+  return lines.join(' ').split(' ');
+}
+
+export const SAID_NUMBERS: Readonly<Record<Locale, SaidNumbers>> = {
+  en: {
+    small: said(
+      'zero one two three four five six seven eight nine ten',
+      'eleven twelve thirteen fourteen fifteen sixteen seventeen eighteen nineteen',
+    ),
+    tens: ['', '', ...said('twenty thirty forty fifty sixty seventy eighty ninety')],
+    hundreds: [],
+  },
+  es: {
+    small: said(
+      'cero uno dos tres cuatro cinco seis siete ocho nueve diez',
+      'once doce trece catorce quince dieciséis diecisiete dieciocho diecinueve veinte',
+      'veintiuno veintidós veintitrés veinticuatro veinticinco veintiséis veintisiete veintiocho veintinueve',
+    ),
+    tens: ['', '', '', ...said('treinta cuarenta cincuenta sesenta setenta ochenta noventa')],
+    hundreds: [
+      '',
+      ...said('ciento doscientos trescientos cuatrocientos quinientos seiscientos setecientos ochocientos novecientos'),
+    ],
+  },
+};
+
+// The reading side: each word said (accents folded) with its value times `scale`.
+function valuesOf(words: readonly string[], scale = 1): Record<string, number> {
+  const values: Record<string, number> = {};
+  words.forEach((word, index) => {
+    if (word !== '') values[foldAccents(word)] = index * scale;
+  });
+  return values;
+}
 
 export interface NumberWords {
   // Single tokens worth 0..29 (Spanish runs 21..29 together; English stops at 19).
@@ -31,29 +78,8 @@ export interface NumberWords {
 }
 
 const EN: NumberWords = {
-  small: {
-    zero: 0,
-    one: 1,
-    two: 2,
-    three: 3,
-    four: 4,
-    five: 5,
-    six: 6,
-    seven: 7,
-    eight: 8,
-    nine: 9,
-    ten: 10,
-    eleven: 11,
-    twelve: 12,
-    thirteen: 13,
-    fourteen: 14,
-    fifteen: 15,
-    sixteen: 16,
-    seventeen: 17,
-    eighteen: 18,
-    nineteen: 19,
-  },
-  tens: { twenty: 20, thirty: 30, forty: 40, fourty: 40, fifty: 50, sixty: 60, seventy: 70, eighty: 80, ninety: 90 },
+  small: valuesOf(SAID_NUMBERS.en.small),
+  tens: { ...valuesOf(SAID_NUMBERS.en.tens, 10), fourty: 40 },
   hundreds: {},
   hundredWord: 'hundred',
   thousandWord: 'thousand',
@@ -94,52 +120,15 @@ const EN: NumberWords = {
   bareFractions: { half: 0.5, quarter: 0.25 },
 };
 
+// "un", "una" and "veintiún" are said before a noun (and an article as often as a number).
 const ES_SMALL: Record<string, number> = {
-  cero: 0,
-  uno: 1,
+  ...valuesOf(SAID_NUMBERS.es.small),
   un: 1,
   una: 1,
-  dos: 2,
-  tres: 3,
-  cuatro: 4,
-  cinco: 5,
-  seis: 6,
-  siete: 7,
-  ocho: 8,
-  nueve: 9,
-  diez: 10,
-  once: 11,
-  doce: 12,
-  trece: 13,
-  catorce: 14,
-  quince: 15,
-  dieciseis: 16,
-  diecisiete: 17,
-  dieciocho: 18,
-  diecinueve: 19,
-  veinte: 20,
-  veintiuno: 21,
   veintiun: 21,
   veintiuna: 21,
-  veintidos: 22,
-  veintitres: 23,
-  veinticuatro: 24,
-  veinticinco: 25,
-  veintiseis: 26,
-  veintisiete: 27,
-  veintiocho: 28,
-  veintinueve: 29,
 };
-
-const ES_TENS: Record<string, number> = {
-  treinta: 30,
-  cuarenta: 40,
-  cincuenta: 50,
-  sesenta: 60,
-  setenta: 70,
-  ochenta: 80,
-  noventa: 90,
-};
+const ES_TENS: Record<string, number> = valuesOf(SAID_NUMBERS.es.tens, 10);
 
 // Recognisers sometimes run "treinta y dos" together as "treintaidos" or "treintaydos".
 for (const [tensWord, tensValue] of Object.entries(ES_TENS)) {
@@ -154,25 +143,14 @@ const ES: NumberWords = {
   small: ES_SMALL,
   tens: ES_TENS,
   tensJoiner: 'y',
+  // "cien" alone; the feminine forms count feminine nouns ("doscientas libras").
   hundreds: {
     cien: 100,
-    ciento: 100,
-    doscientos: 200,
-    doscientas: 200,
-    trescientos: 300,
-    trescientas: 300,
-    cuatrocientos: 400,
-    cuatrocientas: 400,
-    quinientos: 500,
-    quinientas: 500,
-    seiscientos: 600,
-    seiscientas: 600,
-    setecientos: 700,
-    setecientas: 700,
-    ochocientos: 800,
-    ochocientas: 800,
-    novecientos: 900,
-    novecientas: 900,
+    ...valuesOf(SAID_NUMBERS.es.hundreds, 100),
+    ...valuesOf(
+      SAID_NUMBERS.es.hundreds.map((word) => word.replace(/os$/, 'as')),
+      100,
+    ),
   },
   thousandWord: 'mil',
   articles: ['un', 'una'],
