@@ -2,7 +2,7 @@ import type { QueryClient } from '@tanstack/react-query';
 import { redirect, type LoaderFunctionArgs } from 'react-router';
 import type { Role, UserSummary } from '@yardcall/shared';
 import { ApiError } from '@/lib/api-client';
-import { meQueryOptions } from '@/lib/session';
+import { meQueryOptions } from '@/lib/api/auth';
 import { hasSession, signInPath } from '@/lib/sign-in';
 import { homePathFor } from './role-homes';
 

@@ -7,7 +7,7 @@ import { BrandMark } from '@/components/ui/brand-mark';
 import { Loading } from '@/components/ui/alert';
 import { UserMenu } from '@/features/auth/components/user-menu';
 import { showDisplaySettings } from '@/lib/display-settings';
-import { meQueryOptions } from '@/lib/session';
+import { meQueryOptions } from '@/lib/api/auth';
 import { hasSession, SIGN_IN_PATH } from '@/lib/sign-in';
 import { homePathFor } from '../role-homes';
 import { useFocusedScreen } from './shell-handle';

@@ -1,10 +1,9 @@
 import { useQueryClient, type QueryClient } from '@tanstack/react-query';
-import { defectsQueryOptions } from '@/features/defects/api/get-defects';
+import { defectsQueryOptions } from '@/lib/api/defects';
 import { OpenDefects } from '@/features/defects/components/open-defects';
 import { RecentRepairs } from '@/features/defects/components/recent-repairs';
 import { MechanicHome } from '@/features/home/routes/mechanic-home';
-import { useVehicles, vehiclesQueryOptions } from '@/features/vehicles/api/get-vehicles';
-import { vehicleKeys } from '@/features/vehicles/api/vehicle-keys';
+import { useVehicles, vehicleKeys, vehiclesQueryOptions } from '@/lib/api/vehicles';
 import { StatusBadge } from '@/features/vehicles/components/status-badge';
 
 export function mechanicHomeLoader(queryClient: QueryClient) {

@@ -1,7 +1,7 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { startDataQueryOptions } from '@/features/walkaround/api/get-start-data';
 import { StartWalkaround } from '@/features/walkaround/components/start-walkaround';
-import { useVehicles, vehiclesQueryOptions } from '@/features/vehicles/api/get-vehicles';
+import { useVehicles, vehiclesQueryOptions } from '@/lib/api/vehicles';
 import { VehiclePicker } from '@/features/vehicles/components/vehicle-picker';
 
 // The units come with the start data, which the phone keeps for a start with no signal: the

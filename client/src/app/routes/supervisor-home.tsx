@@ -1,6 +1,6 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { SupervisorHome } from '@/features/home/routes/supervisor-home';
-import { fleetBoardQueryOptions } from '@/features/vehicles/api/get-fleet-board';
+import { fleetBoardQueryOptions } from '@/lib/api/fleet';
 import { FleetBoard } from '@/features/vehicles/components/fleet-board';
 
 export function supervisorHomeLoader(queryClient: QueryClient) {

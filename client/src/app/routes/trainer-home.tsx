@@ -2,11 +2,11 @@ import type { QueryClient } from '@tanstack/react-query';
 import { useTranslation } from 'react-i18next';
 import { ErrorAlert, Loading } from '@/components/ui/alert';
 import { TrainerHome } from '@/features/home/routes/trainer-home';
-import { attemptsQueryOptions } from '@/features/training/api/get-attempts';
+import { attemptsQueryOptions } from '@/lib/api/training';
 import { AttemptList } from '@/features/training/components/attempt-list';
 import { StudentsOverview } from '@/features/training/components/students-overview';
 import { reviewPath } from '@/features/training/paths';
-import { useUsers, usersQueryOptions } from '@/features/users/api/get-users';
+import { useUsers, usersQueryOptions } from '@/lib/api/users';
 import { describeError } from '@/lib/errors';
 
 export function trainerHomeLoader(queryClient: QueryClient) {

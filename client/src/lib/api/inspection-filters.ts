@@ -8,7 +8,7 @@ import {
   type InspectionSortField,
   type SortDirection,
 } from '@yardcall/shared';
-import type { QueryParams } from '@/lib/api-client';
+import type { QueryParams } from '../api-client';
 
 const DATE = /^\d{4}-\d{2}-\d{2}$/;
 

@@ -6,8 +6,7 @@ import { ErrorAlert, Loading } from '@/components/ui/alert';
 import { TextField } from '@/components/ui/field';
 import { Card, Stack } from '@/components/ui/layout';
 import { describeError, fieldErrors } from '@/lib/errors';
-import { useAcceptInvitation } from '../api/accept-invitation';
-import { useInvitation } from '../api/get-invitation';
+import { useAcceptInvitation, useInvitation } from '@/lib/api/invitations';
 
 export function AcceptInvitationForm({ token, onAccepted }: { token: string; onAccepted: () => void }) {
   const { t } = useTranslation();

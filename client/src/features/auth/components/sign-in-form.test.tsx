@@ -2,7 +2,7 @@ import { screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it, vi } from 'vitest';
 import { tokenStore } from '@/lib/api-client';
-import { sessionKeys } from '@/lib/session';
+import { authKeys } from '@/lib/api/auth';
 import { makeUser } from '@/testing/fixtures';
 import { errorBody, mockApi } from '@/testing/mock-api';
 import { renderWithProviders } from '@/testing/render';
@@ -45,7 +45,7 @@ describe('SignInForm', () => {
 
     await vi.waitFor(() => expect(onSignedIn).toHaveBeenCalled());
     expect(tokenStore.get()).toBe('token-abc');
-    expect(queryClient.getQueryData(sessionKeys.me())).toEqual(user);
+    expect(queryClient.getQueryData(authKeys.me())).toEqual(user);
     // The account's display settings apply at once.
     expect(document.documentElement).toHaveClass('theme-night', 'glove');
     expect(document.documentElement.style.fontSize).toBe('150%');

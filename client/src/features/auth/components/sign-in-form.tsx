@@ -5,7 +5,7 @@ import { ErrorAlert } from '@/components/ui/alert';
 import { TextField } from '@/components/ui/field';
 import { Stack } from '@/components/ui/layout';
 import { describeError } from '@/lib/errors';
-import { useLogin } from '../api/login';
+import { useLogin } from '@/lib/api/auth';
 import { DemoSignIns, isDemoBuild } from './demo-sign-ins';
 
 export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {

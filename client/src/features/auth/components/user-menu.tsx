@@ -3,7 +3,7 @@ import { useTranslation } from 'react-i18next';
 import { useNavigate } from 'react-router';
 import type { UserSummary } from '@yardcall/shared';
 import { Button } from '@/components/ui/button';
-import { endSession } from '@/lib/session';
+import { endSession } from '@/lib/api/auth';
 import { SIGN_IN_PATH } from '@/lib/sign-in';
 import { tokenStore } from '@/lib/api-client';
 

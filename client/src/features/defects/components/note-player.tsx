@@ -1,9 +1,9 @@
 import { useEffect, useId, useRef } from 'react';
 import { useTranslation } from 'react-i18next';
-import type { VoiceNoteResponse } from '@yardcall/shared';
+import type { InspectionResponse, VoiceNoteResponse } from '@yardcall/shared';
 import { ErrorAlert } from '@/components/ui/alert';
 import { describeError } from '@/lib/errors';
-import { useInspectionNotes } from '../api/get-inspection-notes';
+import { useInspection } from '@/lib/api/inspections';
 import { useNoteAudio } from '@/lib/audio/get-note-audio';
 
 function NoteAudio({ note }: { note: VoiceNoteResponse }) {
@@ -53,10 +53,14 @@ function NoteAudio({ note }: { note: VoiceNoteResponse }) {
   );
 }
 
-// The driver's voice notes at this defect's item, from the report it came from.
+const notesOf = (inspection: InspectionResponse) => inspection.notes;
+// A submitted report's notes do not change.
+const NOTES_STALE_MS = 5 * 60_000;
+
+// The driver's voice notes at this defect's item, from the report it came from (the one query for it).
 export function NotePlayer({ inspectionId, itemKey }: { inspectionId: string; itemKey: string }) {
   const { t } = useTranslation();
-  const notes = useInspectionNotes(inspectionId);
+  const notes = useInspection(inspectionId, { select: notesOf, staleTime: NOTES_STALE_MS });
   if (notes.isPending) return <p className="text-muted">{t('mechanic.note.loading')}</p>;
   if (notes.isError) return <ErrorAlert>{describeError(notes.error)}</ErrorAlert>;
   const here = notes.data.filter((note) => note.itemKey === itemKey);

@@ -4,7 +4,7 @@ import type { DefectResponse, InspectionVehicle } from '@yardcall/shared';
 import { ErrorAlert, Loading, Notice } from '@/components/ui/alert';
 import { EmptyState } from '@/components/ui/layout';
 import { describeError } from '@/lib/errors';
-import { useDefects } from '../api/get-defects';
+import { useDefects } from '@/lib/api/defects';
 import { DefectCard } from './defect-card';
 
 interface VehicleGroup {

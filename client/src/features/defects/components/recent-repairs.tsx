@@ -4,7 +4,7 @@ import { ErrorAlert, Loading } from '@/components/ui/alert';
 import { Card, EmptyState } from '@/components/ui/layout';
 import { describeError } from '@/lib/errors';
 import { isLocale } from '@/lib/i18n';
-import { useDefects } from '../api/get-defects';
+import { useDefects } from '@/lib/api/defects';
 
 const SHOWN = 20;
 

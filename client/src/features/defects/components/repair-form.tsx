@@ -6,7 +6,7 @@ import { Button } from '@/components/ui/button';
 import { FieldError, TextField } from '@/components/ui/field';
 import { SignaturePad } from '@/components/ui/signature-pad';
 import { describeError, fieldErrors } from '@/lib/errors';
-import { useRepairDefect } from '../api/repair-defect';
+import { useRepairDefect } from '@/lib/api/defects';
 import {
   EMPTY_REPAIR_DRAFT,
   checkRepairDraft,

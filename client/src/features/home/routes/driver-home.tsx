@@ -5,7 +5,7 @@ import { Card, EmptyState, Section } from '@/components/ui/layout';
 import { LinkButton } from '@/components/ui/link-button';
 import { describeError } from '@/lib/errors';
 import { describeCopyAge } from '@/lib/offline';
-import { useRecentReports } from '../api/get-recent-reports';
+import { useRecentReports } from '@/lib/api/inspections';
 import { HomePage } from '../components/home-page';
 
 export const START_INSPECTION_PATH = '/driver/start';

@@ -2,8 +2,8 @@ import { useTranslation } from 'react-i18next';
 import { INSPECTION_KINDS, type InspectionKind, type InspectionListFilters } from '@yardcall/shared';
 import { Button } from '@/components/ui/button';
 import { CheckboxField, SelectField, TextField } from '@/components/ui/field';
-import { useDrivers } from '../api/get-drivers';
-import { useUnits } from '../api/get-units';
+import { driversOf, useUsers } from '@/lib/api/users';
+import { byUnitNumber, useVehicles } from '@/lib/api/vehicles';
 
 // A change to some filters; undefined removes one.
 export type FilterPatch = { [K in keyof InspectionListFilters]?: InspectionListFilters[K] | undefined };
@@ -17,8 +17,8 @@ export interface InspectionFiltersProps {
 // Each change applies at once (and lands in the address); no separate "apply" step.
 export function InspectionFilters({ filters, onChange, onClear }: InspectionFiltersProps) {
   const { t } = useTranslation();
-  const units = useUnits();
-  const drivers = useDrivers();
+  const units = useVehicles({}, byUnitNumber);
+  const drivers = useUsers({}, driversOf);
   const set = <K extends keyof InspectionListFilters>(key: K, value: InspectionListFilters[K] | undefined) =>
     onChange({ [key]: value === '' || value === false ? undefined : value });
   const hasAny = Object.keys(filters).some((key) => key !== 'sort' && key !== 'order');

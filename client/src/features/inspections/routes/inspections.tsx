@@ -8,11 +8,10 @@ import { Button } from '@/components/ui/button';
 import { EmptyState, PageHeading } from '@/components/ui/layout';
 import { saveBlob } from '@/lib/audio/save-blob';
 import { describeError } from '@/lib/errors';
-import { useExportInspectionsCsv } from '../api/export-inspections-csv';
-import { inspectionsQueryOptions, useInspections } from '../api/get-inspections';
+import { inspectionFiltersFromSearch, searchFromInspectionFilters } from '@/lib/api/inspection-filters';
+import { inspectionsQueryOptions, useExportInspectionsCsv, useInspections } from '@/lib/api/inspections';
 import { InspectionFilters, type FilterPatch } from '../components/inspection-filters';
 import { InspectionsTable, type TableSort } from '../components/inspections-table';
-import { inspectionFiltersFromSearch, searchFromInspectionFilters } from '../utils/inspection-filters';
 
 // The first visit starts the fetch early. Changing a filter does not wait for the rows: the
 // address (and so the filter's own control) updates at once and the old rows stay until the new come.

@@ -6,7 +6,7 @@ import { ErrorAlert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { describeError } from '@/lib/errors';
 import { isLocale } from '@/lib/i18n';
-import { usePurgeRetention } from '../api/purge-retention';
+import { usePurgeRetention } from '@/lib/api/organizations';
 
 const COUNTS = [
   'inspections',

@@ -5,7 +5,7 @@ import { ErrorAlert, Notice } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { CheckboxField } from '@/components/ui/field';
 import { describeError } from '@/lib/errors';
-import { useUpdateRequiredReadings } from '../api/update-required-readings';
+import { useUpdateRequiredReadings } from '@/lib/api/organizations';
 
 // One checkbox per reading the organisation may require, in plain words; none is checked by default.
 export function RequiredReadingsForm({ organization }: { organization: OrganizationSummary }) {

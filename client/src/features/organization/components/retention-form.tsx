@@ -6,7 +6,7 @@ import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { describeError, fieldErrors } from '@/lib/errors';
 import { isLocale } from '@/lib/i18n';
-import { useUpdateRetention } from '../api/update-retention';
+import { useUpdateRetention } from '@/lib/api/organizations';
 
 export type MonthsProblem = 'monthsWhole' | 'monthsTooFew' | 'monthsTooMany';
 

@@ -5,7 +5,7 @@ import { ErrorAlert, Notice } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { describeError, fieldErrors } from '@/lib/errors';
-import { useUpdateTimeZone } from '../api/update-time-zone';
+import { useUpdateTimeZone } from '@/lib/api/organizations';
 
 // The zone this device runs in, offered as a starting point.
 function deviceTimeZone(): string {

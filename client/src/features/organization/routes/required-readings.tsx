@@ -3,7 +3,7 @@ import { useTranslation } from 'react-i18next';
 import { ErrorAlert, Loading } from '@/components/ui/alert';
 import { PageHeading, Section } from '@/components/ui/layout';
 import { describeError } from '@/lib/errors';
-import { currentOrganizationQueryOptions, useCurrentOrganization } from '../api/get-current-organization';
+import { currentOrganizationQueryOptions, useCurrentOrganization } from '@/lib/api/organizations';
 import { RequiredReadingsForm } from '../components/required-readings-form';
 
 export function requiredReadingsLoader(queryClient: QueryClient) {

@@ -3,7 +3,7 @@ import { useTranslation } from 'react-i18next';
 import { ErrorAlert, Loading } from '@/components/ui/alert';
 import { PageHeading, Section } from '@/components/ui/layout';
 import { describeError } from '@/lib/errors';
-import { retentionQueryOptions, useRetention } from '../api/get-retention';
+import { retentionQueryOptions, useRetention } from '@/lib/api/organizations';
 import { PurgeRecords } from '../components/purge-dialog';
 import { RetentionForm } from '../components/retention-form';
 

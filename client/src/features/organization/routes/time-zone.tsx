@@ -3,7 +3,7 @@ import { useTranslation } from 'react-i18next';
 import { ErrorAlert, Loading } from '@/components/ui/alert';
 import { PageHeading, Section } from '@/components/ui/layout';
 import { describeError } from '@/lib/errors';
-import { timeZoneQueryOptions, useTimeZone } from '../api/get-time-zone';
+import { timeZoneQueryOptions, useTimeZone } from '@/lib/api/organizations';
 import { TimeZoneForm } from '../components/time-zone-form';
 
 export function timeZoneLoader(queryClient: QueryClient) {

@@ -15,7 +15,7 @@ import { CheckboxField } from '@/components/ui/field';
 import { Card, Section, Stack } from '@/components/ui/layout';
 import { clampTextScale, NIGHT_RED_MIN_TEXT_SCALE, showDisplaySettings } from '@/lib/display-settings';
 import { describeError } from '@/lib/errors';
-import { useUpdateSettings } from '../api/update-settings';
+import { useUpdateSettings } from '@/lib/api/auth';
 
 export const TEXT_SCALE_STEPS = [100, 125, 150, 175, 200] as const;
 const SLIDER_STEP = 5;

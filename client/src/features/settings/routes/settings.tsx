@@ -3,7 +3,7 @@ import { useTranslation } from 'react-i18next';
 import { Loading } from '@/components/ui/alert';
 import { PageHeading } from '@/components/ui/layout';
 import { readCachedDisplaySettings } from '@/lib/display-settings';
-import { meQueryOptions } from '@/lib/session';
+import { meQueryOptions } from '@/lib/api/auth';
 import { hasSession } from '@/lib/sign-in';
 import { SettingsForm } from '../components/settings-form';
 

@@ -4,7 +4,7 @@ import type { TrainingAttemptResponse } from '@yardcall/shared';
 import { ErrorAlert, Loading } from '@/components/ui/alert';
 import { captionsDataUrl } from '@/lib/audio/captions';
 import { describeError } from '@/lib/errors';
-import { useAttemptAudio } from '../api/get-attempt-audio';
+import { useAttemptAudio } from '@/lib/api/training';
 
 // The attempt's recording in a plain audio element, captioned with what was heard; the page seeks it through the ref.
 export const AttemptAudio = forwardRef<HTMLAudioElement, { attempt: TrainingAttemptResponse }>(function AttemptAudio(

@@ -4,8 +4,7 @@ import type { TrainingAttemptListItem } from '@yardcall/shared';
 import { ErrorAlert, Loading } from '@/components/ui/alert';
 import { EmptyState } from '@/components/ui/layout';
 import { describeError } from '@/lib/errors';
-import { useAttempts } from '../api/get-attempts';
-import type { AttemptFilters } from '../api/training-keys';
+import { type AttemptFilters, useAttempts } from '@/lib/api/training';
 import { formatDateTime, formatPercent } from './format';
 import { GradeBadge } from './mark-badge';
 

@@ -10,7 +10,7 @@ import { ErrorAlert, Notice } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { Section } from '@/components/ui/layout';
 import { describeError } from '@/lib/errors';
-import { usePutReview } from '../api/put-review';
+import { usePutReview } from '@/lib/api/training';
 import { AttemptAudio } from './attempt-audio';
 import { AttemptChecklist, type ItemDraft } from './attempt-checklist';
 import { AttemptSummary } from './attempt-summary';

@@ -3,7 +3,7 @@ import { Link } from 'react-router';
 import { ErrorAlert, Loading } from '@/components/ui/alert';
 import { EmptyState } from '@/components/ui/layout';
 import { describeError } from '@/lib/errors';
-import { useAttempts } from '../api/get-attempts';
+import { useAttempts } from '@/lib/api/training';
 import { formatPercent } from './format';
 
 export interface StudentRef {

@@ -4,13 +4,13 @@ import { ErrorAlert, Loading, Notice } from '@/components/ui/alert';
 import { PageHeading } from '@/components/ui/layout';
 import { describeError } from '@/lib/errors';
 import { isLocale } from '@/lib/i18n';
-import { useCurrentUser } from '@/lib/session';
-import { practiceUnitsQueryOptions, usePracticeUnits } from '../api/get-practice-units';
+import { useCurrentUser } from '@/lib/api/auth';
+import { useVehicles, vehiclesQueryOptions } from '@/lib/api/vehicles';
 import { PracticeSession } from '../components/practice-session';
 
 export function practiceLoader(queryClient: QueryClient) {
   return async () => {
-    await queryClient.ensureQueryData(practiceUnitsQueryOptions());
+    await queryClient.ensureQueryData(vehiclesQueryOptions());
     return null;
   };
 }
@@ -19,7 +19,8 @@ export function practiceLoader(queryClient: QueryClient) {
 export function PracticeRoute() {
   const { t, i18n } = useTranslation();
   const user = useCurrentUser();
-  const units = usePracticeUnits();
+  // The units a student may practise on: the organisation's.
+  const units = useVehicles();
   const locale = isLocale(i18n.language) ? i18n.language : 'en';
   return (
     <div data-testid="practice-screen">

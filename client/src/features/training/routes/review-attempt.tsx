@@ -5,7 +5,7 @@ import { ErrorAlert, Loading } from '@/components/ui/alert';
 import { LinkButton } from '@/components/ui/link-button';
 import { PageHeading } from '@/components/ui/layout';
 import { describeError } from '@/lib/errors';
-import { attemptQueryOptions, useAttempt } from '../api/get-attempt';
+import { attemptQueryOptions, useAttempt } from '@/lib/api/training';
 import { AttemptReview } from '../components/attempt-review';
 
 export function reviewAttemptLoader(queryClient: QueryClient) {

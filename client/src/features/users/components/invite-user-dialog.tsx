@@ -7,7 +7,7 @@ import { Button } from '@/components/ui/button';
 import { CheckboxField, SelectField, TextField } from '@/components/ui/field';
 import { Stack } from '@/components/ui/layout';
 import { describeError, fieldErrors } from '@/lib/errors';
-import { useInviteUser } from '../api/invite-user';
+import { useInviteUser } from '@/lib/api/users';
 
 const EMAIL_PATTERN = /^[^\s@]+@[^\s@]+\.[^\s@]+$/;
 

@@ -6,7 +6,7 @@ import { Button } from '@/components/ui/button';
 import { SelectField } from '@/components/ui/field';
 import { EmptyState } from '@/components/ui/layout';
 import { describeError } from '@/lib/errors';
-import { useUpdateUser } from '../api/update-user';
+import { useUpdateUser } from '@/lib/api/users';
 
 function RoleChanger({ user, isSelf }: { user: UserSummary; isSelf: boolean }) {
   const { t } = useTranslation();

@@ -4,7 +4,7 @@ import { ErrorAlert, Loading } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { PageHeading } from '@/components/ui/layout';
 import { describeError } from '@/lib/errors';
-import { outboxQueryOptions, useOutbox } from '../api/get-outbox';
+import { outboxQueryOptions, useOutbox } from '@/lib/api/mail';
 import { OutboxList } from '../components/outbox-list';
 
 export function outboxLoader(queryClient: QueryClient) {

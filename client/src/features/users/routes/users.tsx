@@ -6,8 +6,8 @@ import { Button } from '@/components/ui/button';
 import { LinkButton } from '@/components/ui/link-button';
 import { PageHeading } from '@/components/ui/layout';
 import { describeError } from '@/lib/errors';
-import { useCurrentUser } from '@/lib/session';
-import { useUsers, usersQueryOptions } from '../api/get-users';
+import { useCurrentUser } from '@/lib/api/auth';
+import { useUsers, usersQueryOptions } from '@/lib/api/users';
 import { InviteUserDialog } from '../components/invite-user-dialog';
 import { UserList } from '../components/user-list';
 

@@ -4,7 +4,7 @@ import type { FleetBoard as FleetBoardData, FleetBoardVehicle } from '@yardcall/
 import { ErrorAlert, Loading } from '@/components/ui/alert';
 import { LinkButton } from '@/components/ui/link-button';
 import { describeError } from '@/lib/errors';
-import { useFleetBoard } from '../api/get-fleet-board';
+import { useFleetBoard } from '@/lib/api/fleet';
 import { StatusBadge } from './status-badge';
 
 // Where a supervisor reads one inspection (the inspections feature's screen).

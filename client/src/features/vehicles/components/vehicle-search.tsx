@@ -1,7 +1,7 @@
 import { useTranslation } from 'react-i18next';
 import { VEHICLE_KINDS, type VehicleKind } from '@yardcall/shared';
 import { SelectField, TextField } from '@/components/ui/field';
-import type { VehicleFilters } from '../api/vehicle-keys';
+import type { VehicleFilters } from '@/lib/api/vehicles';
 
 export function VehicleSearch({
   filters,

@@ -1,7 +1,7 @@
 import { useTranslation } from 'react-i18next';
 import { useNavigate } from 'react-router';
 import { PageHeading } from '@/components/ui/layout';
-import { useCreateVehicle } from '../api/create-vehicle';
+import { useCreateVehicle } from '@/lib/api/vehicles';
 import { VehicleForm } from '../components/vehicle-form';
 import { newVehicleDraft } from '../components/vehicle-draft';
 

@@ -5,11 +5,11 @@ import { ErrorAlert, Loading } from '@/components/ui/alert';
 import { LinkButton } from '@/components/ui/link-button';
 import { PageHeading } from '@/components/ui/layout';
 import { describeError } from '@/lib/errors';
-import { useCurrentUser } from '@/lib/session';
-import { useVehicles, vehicleFiltersFromSearch, vehiclesQueryOptions } from '../api/get-vehicles';
-import type { VehicleFilters } from '../api/vehicle-keys';
+import { useCurrentUser } from '@/lib/api/auth';
+import { useVehicles, vehiclesQueryOptions, type VehicleFilters } from '@/lib/api/vehicles';
 import { VehicleList } from '../components/vehicle-list';
 import { VehicleSearch } from '../components/vehicle-search';
+import { vehicleFiltersFromSearch } from '../utils/vehicle-filters';
 
 export function vehiclesLoader(queryClient: QueryClient) {
   return async ({ request }: LoaderFunctionArgs) => {

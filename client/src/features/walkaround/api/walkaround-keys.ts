@@ -1,4 +1,5 @@
-// One key factory for the walk-around: local (this device's store) and server data.
+// One key factory for the walk-arounds on this device (its store) and the start data kept for them.
+// Server reports and a unit's pending review are lib/api's (inspectionKeys, vehicleKeys).
 export const walkaroundKeys = {
   all: ['walkaround'] as const,
   locals: () => [...walkaroundKeys.all, 'local'] as const,
@@ -7,8 +8,4 @@ export const walkaroundKeys = {
   localLists: () => [...walkaroundKeys.locals(), 'list'] as const,
   // Units, acknowledgements and required readings kept for a start with no signal.
   startData: () => [...walkaroundKeys.all, 'start-data'] as const,
-  details: () => [...walkaroundKeys.all, 'detail'] as const,
-  detail: (inspectionId: string) => [...walkaroundKeys.details(), inspectionId] as const,
-  pendingAcknowledgements: () => [...walkaroundKeys.all, 'pending-acknowledgement'] as const,
-  pendingAcknowledgement: (vehicleId: string) => [...walkaroundKeys.pendingAcknowledgements(), vehicleId] as const,
 };

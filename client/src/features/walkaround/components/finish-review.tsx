@@ -9,6 +9,7 @@ import { TextField } from '@/components/ui/field';
 import { SignaturePad } from '@/components/ui/signature-pad';
 import { Card, EmptyState, PageHeading, Section } from '@/components/ui/layout';
 import { describeError } from '@/lib/errors';
+import { inspectionKeys } from '@/lib/api/inspections';
 import { useSyncStatus, type LocalInspection, type LocalWalkaround } from '@/lib/offline';
 import { useSignWalkaround } from '../api/submit-inspection';
 import { walkaroundKeys } from '../api/walkaround-keys';
@@ -27,7 +28,7 @@ function SignedWaiting({ inspection }: { inspection: LocalInspection }) {
     // Each acknowledgement may be this report's: read the local copy and the server's report again.
     void queryClient.invalidateQueries({ queryKey: walkaroundKeys.local(inspection.clientId) });
     if (inspection.serverId) {
-      void queryClient.invalidateQueries({ queryKey: walkaroundKeys.detail(inspection.serverId) });
+      void queryClient.invalidateQueries({ queryKey: inspectionKeys.detail(inspection.serverId) });
     }
   }, [status.lastSyncedAt, queryClient, inspection.clientId, inspection.serverId]);
   const signedAt = new Date(inspection.signed?.signedAt ?? inspection.updatedAt).toLocaleString(i18n.language, {

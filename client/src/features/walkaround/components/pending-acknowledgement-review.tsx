@@ -8,7 +8,7 @@ import { Card } from '@/components/ui/layout';
 import { SignaturePad } from '@/components/ui/signature-pad';
 import { describeError } from '@/lib/errors';
 import { isLocale } from '@/lib/i18n';
-import { useAcknowledgeInspection } from '../api/acknowledge-inspection';
+import { useAcknowledgeInspection } from '@/lib/api/inspections';
 import { SafetyCaution } from '@/components/ui/safety-caution';
 
 // What was found and what the shop did about it, said plainly: action, note, who and when.

@@ -5,7 +5,7 @@ import { Button } from '@/components/ui/button';
 import { LinkButton } from '@/components/ui/link-button';
 import { Card, EmptyState, Section } from '@/components/ui/layout';
 import { describeError } from '@/lib/errors';
-import { useReportPdf } from '../api/get-report-pdf';
+import { useReportPdf } from '@/lib/api/inspections';
 import { SafetyCaution } from '@/components/ui/safety-caution';
 
 // The signed report as the server stored it: its defects and the PDF.

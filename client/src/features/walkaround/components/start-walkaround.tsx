@@ -11,7 +11,7 @@ import { describeError } from '@/lib/errors';
 import { isLocale } from '@/lib/i18n';
 import { describeCopyAge } from '@/lib/offline';
 import { useCreateLocalInspection } from '../api/create-local-inspection';
-import { pendingAcknowledgementQueryOptions } from '../api/get-pending-acknowledgement';
+import { pendingAcknowledgementQueryOptions } from '@/lib/api/vehicles';
 import { useStartData } from '../api/get-start-data';
 import { runPath } from '../walkaround-paths';
 

@@ -5,7 +5,7 @@ import { ErrorAlert, Loading } from '@/components/ui/alert';
 import { EmptyState } from '@/components/ui/layout';
 import { describeError } from '@/lib/errors';
 import { localInspectionQueryOptions } from '../api/get-local-inspection';
-import { useInspection } from '../api/get-inspection';
+import { useInspection } from '@/lib/api/inspections';
 import { FinishReview } from '../components/finish-review';
 import { ReportView } from '../components/report-view';
 import { runPath } from '../walkaround-paths';
