@@ -1,10 +1,3 @@
 // The numbers area's surface: spoken numbers read (interpreter) and said back (read-back).
 export { findNumbers, type NumberForm, type NumberOptions, type NumberSpan } from './parse-number.js';
-export {
-  apocopate,
-  denominatorWord,
-  fractionToWords,
-  integerToWords,
-  numberToWords,
-  toCommonFraction,
-} from './number-to-words.js';
+export { measurementToWords } from './measurement-to-words.js';

@@ -53,29 +53,25 @@ export function integerToWords(n: number, locale: Locale): string {
   return rest === 0 ? head : `${head} ${below(rest)}`;
 }
 
-const EN_DENOMINATORS: Record<number, [string, string]> = {
-  2: ['half', 'halves'],
-  3: ['third', 'thirds'],
-  4: ['quarter', 'quarters'],
-  8: ['eighth', 'eighths'],
-  16: ['sixteenth', 'sixteenths'],
-  32: ['thirty-second', 'thirty-seconds'],
-  64: ['sixty-fourth', 'sixty-fourths'],
-};
-const ES_DENOMINATORS: Record<number, [string, string]> = {
-  2: ['medio', 'medios'],
-  3: ['tercio', 'tercios'],
-  4: ['cuarto', 'cuartos'],
-  8: ['octavo', 'octavos'],
-  16: ['dieciseisavo', 'dieciseisavos'],
-  32: ['treintaidosavo', 'treintaidosavos'],
-  64: ['sesentaicuatroavo', 'sesentaicuatroavos'],
+// Denominators as said, in the singular; the plural adds an s ("halves" aside).
+const DENOMINATORS: Record<Locale, Record<number, string>> = {
+  en: { 2: 'half', 3: 'third', 4: 'quarter', 8: 'eighth', 16: 'sixteenth', 32: 'thirty-second', 64: 'sixty-fourth' },
+  es: {
+    2: 'medio',
+    3: 'tercio',
+    4: 'cuarto',
+    8: 'octavo',
+    16: 'dieciseisavo',
+    32: 'treintaidosavo',
+    64: 'sesentaicuatroavo',
+  },
 };
 
 export function denominatorWord(denominator: number, plural: boolean, locale: Locale): string {
-  const entry = (locale === 'en' ? EN_DENOMINATORS : ES_DENOMINATORS)[denominator];
-  if (!entry) throw new RangeError(`No word for a denominator of ${denominator}`);
-  return plural ? entry[1] : entry[0];
+  const word = DENOMINATORS[locale][denominator];
+  if (!word) throw new RangeError(`No word for a denominator of ${denominator}`);
+  if (!plural) return word;
+  return word === 'half' ? 'halves' : `${word}s`;
 }
 
 // "five thirty-seconds", "un cuarto", "tres dieciseisavos".
@@ -83,6 +79,13 @@ export function fractionToWords(numerator: number, denominator: number, locale: 
   const head = integerToWords(numerator, locale);
   const said = locale === 'es' && numerator === 1 ? 'un' : locale === 'es' ? apocopate(head) : head;
   return `${said} ${denominatorWord(denominator, numerator !== 1, locale)}`;
+}
+
+// The part of a mixed number after "and" in English: "a quarter", "an eighth", "three quarters"; before
+// a unit the denominator stays singular ("one and three quarter inches").
+export function englishPartToWords(numerator: number, denominator: number, beforeUnit: boolean): string {
+  const head = numerator === 1 ? (denominator === 8 ? 'an' : 'a') : integerToWords(numerator, 'en');
+  return `${head} ${denominatorWord(denominator, numerator !== 1 && !beforeUnit, 'en')}`;
 }
 
 function gcd(a: number, b: number): number {
@@ -134,8 +137,8 @@ export function numberToWords(n: number, locale: Locale): string {
   if (whole === 0) return fractionToWords(numerator, denominator, locale);
   const and = locale === 'en' ? 'and' : 'y';
   const part =
-    locale === 'en' && numerator === 1
-      ? `${denominator === 8 ? 'an' : 'a'} ${denominatorWord(denominator, false, locale)}`
+    locale === 'en'
+      ? englishPartToWords(numerator, denominator, false)
       : fractionToWords(numerator, denominator, locale);
   return `${integerToWords(whole, locale)} ${and} ${part}`;
 }
