@@ -32,6 +32,7 @@ import {
   Min,
   ValidateNested,
 } from 'class-validator';
+import { ItemRecordDto } from '../../common/dto/item-record.dto';
 import { NotInTheFuture } from '../../common/client-time';
 
 // One batch holds a whole walk-around of a tractor and two trailers with room to spare.
@@ -183,16 +184,7 @@ export class ResultLimitDto implements ResultLimit {
   source: string;
 }
 
-export class ItemResultResponseDto implements ItemResultResponse {
-  @ApiProperty({ format: 'uuid' })
-  id: string;
-
-  @ApiProperty()
-  clientId: string;
-
-  @ApiProperty()
-  itemKey: string;
-
+export class ItemResultResponseDto extends ItemRecordDto implements ItemResultResponse {
   @ApiProperty({ enum: ANSWERS })
   answer: Answer;
 

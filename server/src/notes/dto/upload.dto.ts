@@ -1,7 +1,9 @@
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import type { PhotoResponse, PhotoUpload, VoiceNoteResponse, VoiceNoteUpload } from '@yardcall/shared';
 import { Type } from 'class-transformer';
-import { IsInt, IsNotEmpty, IsOptional, IsString, Matches, Max, MaxLength, Min } from 'class-validator';
+import { IsNotEmpty, IsOptional, IsString, Matches, MaxLength } from 'class-validator';
+import { DurationMs } from '../../common/dto/duration-ms.decorator';
+import { ItemRecordDto } from '../../common/dto/item-record.dto';
 
 // The same bound as the column and as the inspections' own client ids.
 const CLIENT_ID_MAX = 64;
@@ -29,9 +31,7 @@ export class PhotoUploadDto implements PhotoUpload {
 export class VoiceNoteUploadDto extends PhotoUploadDto implements VoiceNoteUpload {
   @ApiProperty({ description: 'Length of the recording in milliseconds.', example: 4200 })
   @Type(() => Number)
-  @IsInt({ message: 'Send durationMs as a whole number of milliseconds.' })
-  @Min(0, { message: 'durationMs cannot be negative.' })
-  @Max(DURATION_MAX_MS, { message: `A voice note lasts at most ${DURATION_MAX_MS} ms (an hour).` })
+  @DurationMs(DURATION_MAX_MS, 'A voice note', 'an hour')
   durationMs: number;
 
   @ApiPropertyOptional({ description: 'What the speech engine heard while recording.' })
@@ -41,16 +41,7 @@ export class VoiceNoteUploadDto extends PhotoUploadDto implements VoiceNoteUploa
   heard?: string;
 }
 
-export class VoiceNoteResponseDto implements VoiceNoteResponse {
-  @ApiProperty({ format: 'uuid' })
-  id: string;
-
-  @ApiProperty()
-  clientId: string;
-
-  @ApiProperty()
-  itemKey: string;
-
+export class VoiceNoteResponseDto extends ItemRecordDto implements VoiceNoteResponse {
   @ApiProperty({ type: String, nullable: true })
   heard: string | null;
 
@@ -73,16 +64,7 @@ export class VoiceNoteResponseDto implements VoiceNoteResponse {
   audioUrl: string;
 }
 
-export class PhotoResponseDto implements PhotoResponse {
-  @ApiProperty({ format: 'uuid' })
-  id: string;
-
-  @ApiProperty()
-  clientId: string;
-
-  @ApiProperty()
-  itemKey: string;
-
+export class PhotoResponseDto extends ItemRecordDto implements PhotoResponse {
   @ApiProperty({ example: 'image/jpeg' })
   mimeType: string;
 

@@ -34,6 +34,7 @@ import {
   Min,
   ValidateNested,
 } from 'class-validator';
+import { DurationMs } from '../../common/dto/duration-ms.decorator';
 import { NotInTheFuture, WithinOfflineWindow } from '../../common/client-time';
 import { VehicleIds } from '../../common/dto/vehicle-ids.decorator';
 
@@ -106,9 +107,7 @@ export class PutTrainingSegmentsDto implements PutTrainingSegmentsRequest {
 export class TrainingAudioUploadDto implements TrainingAudioUpload {
   @ApiProperty({ description: 'Length of the recording in milliseconds.', example: 184000 })
   @Type(() => Number)
-  @IsInt({ message: 'Send durationMs as a whole number of milliseconds.' })
-  @Min(0, { message: 'durationMs cannot be negative.' })
-  @Max(DURATION_MAX_MS, { message: `A practice recording lasts at most ${DURATION_MAX_MS} ms (three hours).` })
+  @DurationMs(DURATION_MAX_MS, 'A practice recording', 'three hours')
   durationMs: number;
 }
 
@@ -119,9 +118,7 @@ export class FinishTrainingAttemptDto implements FinishTrainingAttemptRequest {
   finishedAt: string;
 
   @ApiProperty({ description: 'Length of the narration in milliseconds.' })
-  @IsInt({ message: 'Send durationMs as a whole number of milliseconds.' })
-  @Min(0, { message: 'durationMs cannot be negative.' })
-  @Max(DURATION_MAX_MS, { message: `A practice attempt lasts at most ${DURATION_MAX_MS} ms (three hours).` })
+  @DurationMs(DURATION_MAX_MS, 'A practice attempt', 'three hours')
   durationMs: number;
 }
 

@@ -6,24 +6,26 @@ import {
   CHAMBER_STROKES,
   STEERING_TYPES,
   TIRE_ARRANGEMENTS,
-  type AxleConfig,
-  type AxlePosition,
-  type BrakeChamber,
-  type BrakeType,
-  type ChamberSize,
-  type ChamberStroke,
-  type SteeringConfig,
-  type SteeringType,
-  type TireArrangement,
-  type TireSpec,
-  type VehicleConfig,
+} from '@yardcall/shared';
+import type {
+  AxleConfig,
+  AxlePosition,
+  BrakeChamber,
+  BrakeType,
+  ChamberSize,
+  ChamberStroke,
+  SteeringConfig,
+  SteeringType,
+  TireArrangement,
+  TireSpec,
+  VehicleConfig,
 } from '@yardcall/shared';
 import { Type } from 'class-transformer';
 import { IsArray, IsBoolean, IsNumber, IsObject, IsOptional, IsString, ValidateNested } from 'class-validator';
 
 // These classes check only the shape (types, no unknown fields). The vehicle rules themselves
 // (allowed values, ranges, which axle needs what) live in @yardcall/shared validateVehicle.
-const TEXT = { message: 'Enter this as text.' };
+export const TEXT = { message: 'Enter this as text.' };
 const NUMBER = { message: 'Enter this as a number.' };
 const OBJECT = { message: 'Send this as an object.' };
 

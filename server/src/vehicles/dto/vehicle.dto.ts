@@ -9,9 +9,8 @@ import {
 } from '@yardcall/shared';
 import { Type } from 'class-transformer';
 import { IsIn, IsObject, IsOptional, IsString, MaxLength, ValidateNested } from 'class-validator';
-import { VehicleConfigDto } from './vehicle-config.dto';
+import { TEXT, VehicleConfigDto } from './vehicle-config.dto';
 
-const TEXT = { message: 'Enter this as text.' };
 // Only a bound on the request's size; the real lengths (a 17-character VIN...) are the shared vehicle
 // rules' to check, with their own words.
 const SHORT_TEXT = { message: 'This text is far too long for this field: check what was pasted here.' };
