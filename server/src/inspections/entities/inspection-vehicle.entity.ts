@@ -9,12 +9,12 @@ export class InspectionVehicle {
   @PrimaryColumn({ name: 'inspection_id', type: 'uuid' })
   inspectionId: string;
 
-  @PrimaryColumn({ type: 'smallint' })
-  position: number;
-
   @ManyToOne(() => Inspection, { onDelete: 'CASCADE', nullable: false })
   @JoinColumn({ name: 'inspection_id' })
   inspection?: Inspection;
+
+  @PrimaryColumn({ type: 'smallint' })
+  position: number;
 
   @Column({ name: 'vehicle_id', type: 'uuid' })
   vehicleId: string;

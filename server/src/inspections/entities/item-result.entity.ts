@@ -8,25 +8,15 @@ import {
   type SpotFix,
   type Verdict,
 } from '@yardcall/shared';
-import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
-import { Inspection } from './inspection.entity';
+import { Column, Entity, Index } from 'typeorm';
+import { InspectionRow } from './inspection-row';
 
 // One answer per checklist item (the latest); the measurement is stored in its canonical unit with the
 // verdict and limit the server worked out, whatever the client said.
 @Index('UQ_item_results_inspection_item', ['inspectionId', 'itemKey'], { unique: true })
 @Index('UQ_item_results_inspection_client', ['inspectionId', 'clientId'], { unique: true })
 @Entity({ name: 'item_results' })
-export class ItemResult {
-  @PrimaryGeneratedColumn('uuid')
-  id: string;
-
-  @Column({ name: 'inspection_id', type: 'uuid' })
-  inspectionId: string;
-
-  @ManyToOne(() => Inspection, { onDelete: 'CASCADE', nullable: false })
-  @JoinColumn({ name: 'inspection_id' })
-  inspection?: Inspection;
-
+export class ItemResult extends InspectionRow {
   @Column({ name: 'item_key', type: 'varchar', length: 160 })
   itemKey: string;
 

@@ -1,24 +1,14 @@
 import { SIGNATURE_ROLES, type SignatureRole } from '@yardcall/shared';
-import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import { Column, Entity, Index, JoinColumn, ManyToOne } from 'typeorm';
 import { Defect } from '../../defects/entities/defect.entity';
 import { User } from '../../users/entities/user.entity';
-import { Inspection } from './inspection.entity';
+import { InspectionRow } from './inspection-row';
 
 // Electronic signatures and what each signer certified (49 CFR 390.32 allows electronic records).
 @Index('IDX_signatures_inspection', ['inspectionId', 'signedAt'])
 @Index('IDX_signatures_defect', ['defectId'])
 @Entity({ name: 'signatures' })
-export class Signature {
-  @PrimaryGeneratedColumn('uuid')
-  id: string;
-
-  @Column({ name: 'inspection_id', type: 'uuid' })
-  inspectionId: string;
-
-  @ManyToOne(() => Inspection, { onDelete: 'CASCADE', nullable: false })
-  @JoinColumn({ name: 'inspection_id' })
-  inspection?: Inspection;
-
+export class Signature extends InspectionRow {
   // Set for a mechanic's certification of one defect.
   @Column({ name: 'defect_id', type: 'uuid', nullable: true })
   defectId: string | null;
