@@ -1,15 +1,7 @@
 export { OFFLINE_DB_NAME, openOfflineDb } from './offline-db';
-export type {
-  JsonValue,
-  LocalInspection,
-  LocalNote,
-  LocalPhoto,
-  LocalResult,
-  OfflineDb,
-  OutboxEntry,
-  OutboxKind,
-  Refusal,
-} from './offline-db';
+export type { OfflineDb } from './offline-db';
+// The rows the phone keeps, as the screens and the sync engine read them.
+export type * from './records';
 export { createOfflineStore, SignedInspectionError } from './offline-store';
 export type { LocalWalkaround, NewInspection, NewNote, NewPhoto, OfflineStore, RefusedEntry } from './offline-store';
 export { getStartData, readKeptStartData, START_DATA_KEY } from './start-data';

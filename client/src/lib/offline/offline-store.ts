@@ -1,12 +1,6 @@
 import type { IDBPTransaction } from 'idb';
-import type {
-  Checklist,
-  CreateInspectionRequest,
-  InspectionVehicle,
-  ReadingRule,
-  ResultUpsert,
-  SubmitInspectionRequest,
-} from '@yardcall/shared';
+import type { ResultUpsert, SubmitInspectionRequest } from '@yardcall/shared';
+import type { OfflineDb, OfflineSchema, OfflineStoreName } from './offline-db';
 import type {
   CachedEntry,
   JsonValue,
@@ -14,23 +8,14 @@ import type {
   LocalNote,
   LocalPhoto,
   LocalResult,
-  OfflineDb,
-  OfflineSchema,
-  OfflineStoreName,
   OutboxEntry,
   OutboxKind,
   Refusal,
-} from './offline-db';
+} from './records';
 
-export interface NewInspection {
-  request: CreateInspectionRequest;
-  vehicles: InspectionVehicle[];
-  checklist: Checklist;
-  voiceState?: JsonValue;
-  requiredReadings?: ReadingRule[];
-  // Known when the inspection was created online; then nothing waits to be sent.
-  serverId?: string;
-}
+// serverId is known when the inspection was created online; then nothing waits to be sent.
+export type NewInspection = Pick<LocalInspection, 'request' | 'vehicles' | 'checklist' | 'voiceState' | 'serverId'> &
+  Partial<Pick<LocalInspection, 'requiredReadings'>>;
 
 // Thrown for a write to a walk-around that is signed: the phone keeps it as it was signed.
 export class SignedInspectionError extends Error {
@@ -48,30 +33,16 @@ export interface RefusedEntry {
   refusal: Refusal;
 }
 
-export interface NewNote {
-  clientId: string;
-  inspectionClientId: string;
-  itemKey: string;
-  audio: Blob;
-  // Defaults to the Blob's own type.
+// The row's fields as given by the caller: a Blob instead of bytes, and a type that defaults to the Blob's own.
+type Given<Row extends LocalNote | LocalPhoto> = Pick<Row, 'clientId' | 'inspectionClientId' | 'itemKey'> & {
   mimeType?: string;
-  durationMs: number;
-  heard?: string;
-}
+};
 
-export interface NewPhoto {
-  clientId: string;
-  inspectionClientId: string;
-  itemKey: string;
-  image: Blob;
-  mimeType?: string;
-}
+export type NewNote = Given<LocalNote> & Pick<LocalNote, 'durationMs' | 'heard'> & { audio: Blob };
 
-export interface PendingResult {
-  inspectionClientId: string;
-  upsert: ResultUpsert;
-  revision: number;
-}
+export type NewPhoto = Given<LocalPhoto> & { image: Blob };
+
+export type PendingResult = Pick<LocalResult, 'inspectionClientId' | 'upsert' | 'revision'>;
 
 // A walk-around as the glove screen resumes it: the inspection and every answer saved so far.
 export interface LocalWalkaround {
@@ -145,6 +116,35 @@ export function createOfflineStore(db: OfflineDb, now: () => Date = () => new Da
     const inspection = await requireInspection(tx, clientId);
     if (inspection.signed) throw new SignedInspectionError(clientId);
     return inspection;
+  }
+
+  // A photo's row, and the part of a note's it shares: the Blob's bytes (see LocalNote), its type unless given.
+  async function fileRow(input: Given<LocalNote | LocalPhoto>, blob: Blob): Promise<LocalPhoto> {
+    return {
+      clientId: input.clientId,
+      inspectionClientId: input.inspectionClientId,
+      itemKey: input.itemKey,
+      bytes: await blob.arrayBuffer(),
+      mimeType: input.mimeType ?? blob.type,
+      synced: 0,
+      createdAt: now().toISOString(),
+    };
+  }
+
+  // Kept and queued to send, unless the server already has it (a resend after an acknowledgement).
+  async function keepFile<Name extends 'notes' | 'photos'>(
+    name: Name,
+    kind: 'note' | 'photo',
+    row: OfflineSchema[Name]['value'],
+  ): Promise<void> {
+    await write(['inspections', name, 'outbox'], async (tx) => {
+      await requireOpen(tx, row.inspectionClientId);
+      const files = tx.objectStore(name);
+      if ((await files.get(row.clientId))?.synced === 1) return;
+      await files.put(row);
+      await enqueue(tx, kind, row.clientId, row.inspectionClientId);
+    });
+    notifyWrite();
   }
 
   // Outbox entries of a kind in the order they were written (the index keeps the key order); a
@@ -284,25 +284,12 @@ export function createOfflineStore(db: OfflineDb, now: () => Date = () => new Da
     },
 
     async saveNote(input: NewNote): Promise<void> {
-      const bytes = await input.audio.arrayBuffer();
       const note: LocalNote = {
-        clientId: input.clientId,
-        inspectionClientId: input.inspectionClientId,
-        itemKey: input.itemKey,
-        bytes,
-        mimeType: input.mimeType ?? input.audio.type,
+        ...(await fileRow(input, input.audio)),
         durationMs: input.durationMs,
         heard: input.heard,
-        synced: 0,
-        createdAt: now().toISOString(),
       };
-      await write(['inspections', 'notes', 'outbox'], async (tx) => {
-        await requireOpen(tx, input.inspectionClientId);
-        if ((await tx.objectStore('notes').get(note.clientId))?.synced === 1) return;
-        await tx.objectStore('notes').put(note);
-        await enqueue(tx, 'note', note.clientId, note.inspectionClientId);
-      });
-      notifyWrite();
+      await keepFile('notes', 'note', note);
     },
 
     async getNotes(inspectionClientId: string): Promise<LocalNote[]> {
@@ -310,23 +297,7 @@ export function createOfflineStore(db: OfflineDb, now: () => Date = () => new Da
     },
 
     async savePhoto(input: NewPhoto): Promise<void> {
-      const bytes = await input.image.arrayBuffer();
-      const photo: LocalPhoto = {
-        clientId: input.clientId,
-        inspectionClientId: input.inspectionClientId,
-        itemKey: input.itemKey,
-        bytes,
-        mimeType: input.mimeType ?? input.image.type,
-        synced: 0,
-        createdAt: now().toISOString(),
-      };
-      await write(['inspections', 'photos', 'outbox'], async (tx) => {
-        await requireOpen(tx, input.inspectionClientId);
-        if ((await tx.objectStore('photos').get(photo.clientId))?.synced === 1) return;
-        await tx.objectStore('photos').put(photo);
-        await enqueue(tx, 'photo', photo.clientId, photo.inspectionClientId);
-      });
-      notifyWrite();
+      await keepFile('photos', 'photo', await fileRow(input, input.image));
     },
 
     async getPhotos(inspectionClientId: string): Promise<LocalPhoto[]> {

@@ -1,7 +1,7 @@
 import type { InspectionResponse, ResultUpsert, SubmitInspectionRequest } from '@yardcall/shared';
 import { ApiError, NETWORK_ERROR_STATUS } from '../api-client';
 import { describeError } from '../errors';
-import type { LocalNote, LocalPhoto, OutboxKind } from './offline-db';
+import type { LocalNote, LocalPhoto, OutboxKind } from './records';
 import type { OfflineStore, PendingResult } from './offline-store';
 import { requestPersistentStorage, type PersistOutcome } from './persistent-storage';
 import { apiSyncTransport, type SyncTransport } from './sync-transport';
@@ -87,30 +87,18 @@ function fileExtension(mimeType: string): string {
   return known[base] ?? 'bin';
 }
 
-function noteForm(note: LocalNote): FormData {
+// The upload of a note or a photo: the file first, then its item, any fields of its own, and its client id.
+function uploadForm(row: LocalNote | LocalPhoto, fields: Record<string, string | undefined> = {}): FormData {
   const form = new FormData();
-  form.append(
-    'file',
-    new Blob([note.bytes], { type: note.mimeType }),
-    `${note.clientId}.${fileExtension(note.mimeType)}`,
-  );
-  form.append('itemKey', note.itemKey);
-  if (note.heard !== undefined) form.append('heard', note.heard);
-  form.append('durationMs', String(Math.round(note.durationMs)));
-  form.append('clientId', note.clientId);
+  form.append('file', new Blob([row.bytes], { type: row.mimeType }), `${row.clientId}.${fileExtension(row.mimeType)}`);
+  form.append('itemKey', row.itemKey);
+  for (const [name, value] of Object.entries(fields)) if (value !== undefined) form.append(name, value);
+  form.append('clientId', row.clientId);
   return form;
 }
 
-function photoForm(photo: LocalPhoto): FormData {
-  const form = new FormData();
-  form.append(
-    'file',
-    new Blob([photo.bytes], { type: photo.mimeType }),
-    `${photo.clientId}.${fileExtension(photo.mimeType)}`,
-  );
-  form.append('itemKey', photo.itemKey);
-  form.append('clientId', photo.clientId);
-  return form;
+function noteForm(note: LocalNote): FormData {
+  return uploadForm(note, { heard: note.heard, durationMs: String(Math.round(note.durationMs)) });
 }
 
 // Sends what the offline store holds, oldest first: creates, then results in batches, then notes
@@ -219,29 +207,30 @@ export function createSyncEngine(options: SyncEngineOptions) {
     }
   }
 
-  async function pushNotes(): Promise<void> {
-    for (const note of await store.pendingNotes()) {
-      const serverId = await store.serverIdOf(note.inspectionClientId);
+  const uploadNote = (serverId: string, note: LocalNote) => transport.uploadNote(serverId, noteForm(note));
+  const uploadPhoto = (serverId: string, photo: LocalPhoto) => transport.uploadPhoto(serverId, uploadForm(photo));
+
+  // Notes and photos, one upload each; one waits while its inspection's create is not through.
+  async function pushFiles<Row extends LocalNote | LocalPhoto>(
+    kind: 'note' | 'photo',
+    pending: Row[],
+    upload: (serverId: string, row: Row) => Promise<{ id: string }>,
+    markSynced: (clientId: string, serverId: string) => Promise<void>,
+  ): Promise<void> {
+    for (const row of pending) {
+      const serverId = await store.serverIdOf(row.inspectionClientId);
       if (!serverId) continue;
-      await settle('note', note.clientId, async () => {
-        const saved = await transport.uploadNote(serverId, noteForm(note));
-        await store.markNoteSynced(note.clientId, saved.id);
+      await settle(kind, row.clientId, async () => {
+        const saved = await upload(serverId, row);
+        await markSynced(row.clientId, saved.id);
         await acknowledged();
       });
     }
   }
 
-  async function pushPhotos(): Promise<void> {
-    for (const photo of await store.pendingPhotos()) {
-      const serverId = await store.serverIdOf(photo.inspectionClientId);
-      if (!serverId) continue;
-      await settle('photo', photo.clientId, async () => {
-        const saved = await transport.uploadPhoto(serverId, photoForm(photo));
-        await store.markPhotoSynced(photo.clientId, saved.id);
-        await acknowledged();
-      });
-    }
-  }
+  // The store's settle functions are arrow properties: they need no `this`.
+  const pushNotes = async () => pushFiles('note', await store.pendingNotes(), uploadNote, store.markNoteSynced);
+  const pushPhotos = async () => pushFiles('photo', await store.pendingPhotos(), uploadPhoto, store.markPhotoSynced);
 
   // A 409 on a submit whose answer was lost: the server already holds this report. Confirmed by
   // reading it back, so a report submitted from elsewhere is not taken for ours silently.
