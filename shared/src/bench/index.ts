@@ -1,1 +1,2 @@
-export * from './measure.js';
+// The bench harness's surface: what the areas' benchmarks and the scripts that report them use.
+export { measure, singleFigure, timingFigure, type BenchFigure, type BenchResult } from './measure.js';

@@ -1,10 +1,23 @@
-export * from './types.js';
-export { interpretFix, interpretTranscript, interpretUtterance } from './interpret-utterance.js';
-export { PLAUSIBLE_RANGES } from './read-measurement.js';
-export type { AnswerLexicon, SpokenCommand } from './lexicon/lexicon-types.js';
-export { EN_LEXICON } from './lexicon/en.js';
-export { ES_LEXICON } from './lexicon/es.js';
-export * from './read-back.js';
-export * from './interpret-confirmation.js';
-export { splitEndNote } from './split-end-note.js';
+// The interpreter's surface: what the walk-around's voice loop and the CLI use. The lexicons, the
+// measurement reader and its plausible ranges stay inside (the area's tests import the files).
+export type {
+  Alternative,
+  Command,
+  Interpretation,
+  SpokenFix,
+  SpokenMeasurement,
+  StopMark,
+  UnclearReason,
+} from './types.js';
+export { interpretFix, interpretUtterance } from './interpret-utterance.js';
 export { interpretStopAnswer, itemsNamedIn } from './interpret-stop-answer.js';
+export { interpretConfirmation } from './interpret-confirmation.js';
+export { splitEndNote } from './split-end-note.js';
+export {
+  confirmKeptPrompt,
+  confirmOutOfLimitPrompt,
+  languageSwitchedPrompt,
+  measurementToWords,
+  readBackMeasurement,
+  unclearPrompt,
+} from './read-back.js';

@@ -1,3 +1,9 @@
-// The table's rows are the evaluator's; other areas and the apps ask evaluateMeasurement and applicableLimits.
-export type { BoundKind, LimitBasis, LimitBound, LimitCondition, LimitRow, LimitValue } from './limits-table.js';
-export * from './evaluate-measurement.js';
+// The limits area's surface: other areas and the apps ask evaluateMeasurement and applicableLimits; the
+// table's rows are the evaluator's.
+export {
+  LimitError,
+  applicableLimits,
+  evaluateMeasurement,
+  safetyCaution,
+  type MeasurementVerdict,
+} from './evaluate-measurement.js';

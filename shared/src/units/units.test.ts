@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { UnitError, parseUnit, toCanonical } from './index.js';
+import { UnitError, parseUnit, toCanonical } from './units.js';
 
 describe('toCanonical', () => {
   it('turns millimetres of tread into 32nds of an inch', () => {

@@ -1,2 +1,27 @@
-export * from './vehicle.js';
-export * from './validate-vehicle.js';
+// The vehicle area's surface: the configuration's shapes and choices the forms and DTOs offer, and its rules.
+export {
+  AXLE_POSITIONS,
+  BRAKE_TYPES,
+  CHAMBER_SIZES,
+  CHAMBER_STROKES,
+  STEERING_TYPES,
+  TIRE_ARRANGEMENTS,
+  VEHICLE_KINDS,
+  VEHICLE_STATUSES,
+  isAirBraked,
+  isPowerUnit,
+  type AxleConfig,
+  type AxlePosition,
+  type BrakeChamber,
+  type BrakeType,
+  type ChamberSize,
+  type ChamberStroke,
+  type SteeringConfig,
+  type SteeringType,
+  type TireArrangement,
+  type TireSpec,
+  type VehicleConfig,
+  type VehicleKind,
+  type VehicleStatus,
+} from './vehicle.js';
+export { validateVehicle, validateVehicleConfig, type FieldProblem, type VehicleInput } from './validate-vehicle.js';

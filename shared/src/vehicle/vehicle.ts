@@ -60,16 +60,6 @@ export interface VehicleConfig {
   steering?: SteeringConfig;
 }
 
-export interface VehicleSummary {
-  id: string;
-  unitNumber: string;
-  kind: VehicleKind;
-  vin: string;
-  plate: string;
-  status: VehicleStatus;
-  config: VehicleConfig;
-}
-
 export function isPowerUnit(kind: VehicleKind): boolean {
   return kind !== 'trailer';
 }
