@@ -279,12 +279,28 @@ class NumberParser {
   }
 }
 
+// The words a number can start with (with any token holding a digit): every other word is passed over
+// without parsing, which is most of what is said.
+function startWordsOf(w: NumberWords): Set<string> {
+  const words = [w.small, w.tens, w.hundreds, w.bareFractions].flatMap((table) => Object.keys(table));
+  words.push(...w.articles, ...w.zeroDigits, ...w.decimalPoints, w.thousandWord);
+  if (w.hundredWord !== undefined) words.push(w.hundredWord);
+  return new Set(words);
+}
+
+const START_WORDS: Record<Locale, Set<string>> = {
+  en: startWordsOf(NUMBER_WORDS.en),
+  es: startWordsOf(NUMBER_WORDS.es),
+};
+
 export function findNumbers(tokens: readonly string[], locale: Locale, options: NumberOptions = {}): NumberSpan[] {
   const parser = new NumberParser(tokens, locale, options);
+  const startWords = START_WORDS[locale];
   const spans: NumberSpan[] = [];
   let i = 0;
   while (i < tokens.length) {
-    const span = parser.parseAt(i);
+    const token = tokens[i]!;
+    const span = startWords.has(token) || /\d/.test(token) ? parser.parseAt(i) : undefined;
     if (span && span.end > i) {
       spans.push(span);
       i = span.end;
