@@ -70,6 +70,22 @@ function trailerAxle(
   };
 }
 
+type UnitIds = Pick<SeedVehicle, 'unitNumber' | 'vin' | 'plate'>;
+
+// A tractor on a steer axle and two like drive axles, with 20 in power steering.
+function tandemTractor(unit: UnitIds, steerAxle: AxleConfig, driveAxle: AxleConfig): SeedVehicle {
+  return {
+    ...unit,
+    kind: 'tractor',
+    config: { axles: [steerAxle, driveAxle, structuredClone(driveAxle)], steering: STEERING_20_POWER },
+  };
+}
+
+// A trailer on two like axles.
+function tandemTrailer(unit: UnitIds, axle: AxleConfig): SeedVehicle {
+  return { ...unit, kind: 'trailer', config: { axles: [axle, structuredClone(axle)] } };
+}
+
 // VINs: 17 characters without I, O or Q and with a valid check digit (49 CFR 565.15); "7YC" is an invented maker code.
 export const SEED_ORGANIZATIONS: SeedOrganization[] = [
   {
@@ -87,86 +103,35 @@ export const SEED_ORGANIZATIONS: SeedOrganization[] = [
       { email: 'noor.haddad@yardcall.test', name: 'Noor Haddad', role: 'driver', isStudent: true },
     ],
     vehicles: [
-      {
-        unitNumber: 'KV-101',
-        kind: 'tractor',
-        vin: '7YCTA3K28SN100217',
-        plate: 'KVF 4417',
-        config: {
-          axles: [
-            steer({ size: 20, stroke: 'standard' }),
-            drive({ size: 30, stroke: 'long' }),
-            drive({ size: 30, stroke: 'long' }),
-          ],
-          steering: STEERING_20_POWER,
-        },
-      },
-      {
-        unitNumber: 'KV-102',
-        kind: 'tractor',
-        vin: '7YCTA3K2XSN100218',
-        plate: 'KVF 4418',
-        config: {
-          axles: [
-            steer({ size: 24, stroke: 'long' }, '295/75R22.5'),
-            drive({ size: 30, stroke: 'standard' }, '295/75R22.5'),
-            drive({ size: 30, stroke: 'standard' }, '295/75R22.5'),
-          ],
-          steering: STEERING_20_POWER,
-        },
-      },
-      {
-        unitNumber: 'KV-103',
-        kind: 'tractor',
-        vin: '7YCTB3L22TN100341',
-        plate: 'KVF 5102',
-        config: {
-          axles: [
-            steer({ size: 20, stroke: 'long', ratedStroke3In: true }),
-            drive({ size: 30, stroke: 'long' }),
-            drive({ size: 30, stroke: 'long' }),
-          ],
-          steering: STEERING_20_POWER,
-        },
-      },
-      {
-        // 53 ft dry van.
-        unitNumber: 'KV-T21',
-        kind: 'trailer',
-        vin: '7YCVD2F10SN200114',
-        plate: 'KVT 2114',
-        config: {
-          axles: [
-            trailerAxle('air_drum', { size: 30, stroke: 'long' }, '11R22.5', 100),
-            trailerAxle('air_drum', { size: 30, stroke: 'long' }, '11R22.5', 100),
-          ],
-        },
-      },
-      {
-        // Spread-axle flatbed with air disc brakes.
-        unitNumber: 'KV-T22',
-        kind: 'trailer',
-        vin: '7YCVF2S17RN200122',
-        plate: 'KVT 2122',
-        config: {
-          axles: [
-            trailerAxle('air_disc', { size: 24, stroke: 'standard' }, '295/75R22.5', 105),
-            trailerAxle('air_disc', { size: 24, stroke: 'standard' }, '295/75R22.5', 105),
-          ],
-        },
-      },
-      {
-        unitNumber: 'KV-T23',
-        kind: 'trailer',
-        vin: '7YCVD2F13TN200139',
-        plate: 'KVT 2139',
-        config: {
-          axles: [
-            trailerAxle('air_drum', { size: 30, stroke: 'standard' }, '11R22.5', 100),
-            trailerAxle('air_drum', { size: 30, stroke: 'standard' }, '11R22.5', 100),
-          ],
-        },
-      },
+      tandemTractor(
+        { unitNumber: 'KV-101', vin: '7YCTA3K28SN100217', plate: 'KVF 4417' },
+        steer({ size: 20, stroke: 'standard' }),
+        drive({ size: 30, stroke: 'long' }),
+      ),
+      tandemTractor(
+        { unitNumber: 'KV-102', vin: '7YCTA3K2XSN100218', plate: 'KVF 4418' },
+        steer({ size: 24, stroke: 'long' }, '295/75R22.5'),
+        drive({ size: 30, stroke: 'standard' }, '295/75R22.5'),
+      ),
+      tandemTractor(
+        { unitNumber: 'KV-103', vin: '7YCTB3L22TN100341', plate: 'KVF 5102' },
+        steer({ size: 20, stroke: 'long', ratedStroke3In: true }),
+        drive({ size: 30, stroke: 'long' }),
+      ),
+      // 53 ft dry van.
+      tandemTrailer(
+        { unitNumber: 'KV-T21', vin: '7YCVD2F10SN200114', plate: 'KVT 2114' },
+        trailerAxle('air_drum', { size: 30, stroke: 'long' }, '11R22.5', 100),
+      ),
+      // Spread-axle flatbed with air disc brakes.
+      tandemTrailer(
+        { unitNumber: 'KV-T22', vin: '7YCVF2S17RN200122', plate: 'KVT 2122' },
+        trailerAxle('air_disc', { size: 24, stroke: 'standard' }, '295/75R22.5', 105),
+      ),
+      tandemTrailer(
+        { unitNumber: 'KV-T23', vin: '7YCVD2F13TN200139', plate: 'KVT 2139' },
+        trailerAxle('air_drum', { size: 30, stroke: 'standard' }, '11R22.5', 100),
+      ),
       {
         // Box truck for local delivery, hydraulic brakes.
         unitNumber: 'KV-S31',
@@ -198,20 +163,11 @@ export const SEED_ORGANIZATIONS: SeedOrganization[] = [
     name: 'Tamarack Bay Haulers',
     users: [{ email: 'admin@tamarack-bay.test', name: 'Oskar Venn', role: 'admin' }],
     vehicles: [
-      {
-        unitNumber: 'TB-7',
-        kind: 'tractor',
-        vin: '7YCTA3K26RN400512',
-        plate: 'TBH 0007',
-        config: {
-          axles: [
-            steer({ size: 20, stroke: 'standard' }),
-            drive({ size: 30, stroke: 'long' }),
-            drive({ size: 30, stroke: 'long' }),
-          ],
-          steering: STEERING_20_POWER,
-        },
-      },
+      tandemTractor(
+        { unitNumber: 'TB-7', vin: '7YCTA3K26RN400512', plate: 'TBH 0007' },
+        steer({ size: 20, stroke: 'standard' }),
+        drive({ size: 30, stroke: 'long' }),
+      ),
     ],
   },
 ];
