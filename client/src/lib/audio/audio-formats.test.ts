@@ -6,8 +6,11 @@ import {
   buildTrimArgs,
   choosePlaybackFormat,
   clipFileName,
+  clipPlan,
+  conversionPlan,
   inputFileName,
   needsConversion,
+  originalFileName,
 } from './audio-formats';
 
 // What a browser without WebM (but with WAV and Ogg) answers.
@@ -100,5 +103,36 @@ describe('clipFileName', () => {
     expect(clipFileName('3a9f0c1e-aaaa-bbbb', 4.2, 67.8, AUDIO_FORMATS.ogg)).toBe(
       'note-3a9f0c1e-clip-0m04.2s-1m07.8s.ogg',
     );
+  });
+});
+
+describe('conversionPlan and clipPlan', () => {
+  it('names the input after the note type and the output after the format, with its type', () => {
+    expect(conversionPlan('audio/webm;codecs=opus', AUDIO_FORMATS.wav)).toEqual({
+      inputName: 'input.webm',
+      outputName: 'playable.wav',
+      outputType: 'audio/wav',
+      args: buildConvertArgs('input.webm', 'playable.wav', AUDIO_FORMATS.wav),
+    });
+  });
+
+  it('cuts the clip between its edges into the chosen format', () => {
+    expect(clipPlan('audio/ogg', 1.25, 3.5, AUDIO_FORMATS.webm)).toEqual({
+      inputName: 'input.ogg',
+      outputName: 'clip.webm',
+      outputType: 'audio/webm',
+      args: buildTrimArgs('input.ogg', 'clip.webm', 1.25, 3.5, AUDIO_FORMATS.webm),
+    });
+  });
+
+  it('refuses a clip that does not end after it starts', () => {
+    expect(() => clipPlan('audio/ogg', 2, 2, AUDIO_FORMATS.webm)).toThrow(RangeError);
+  });
+});
+
+describe('originalFileName', () => {
+  it('keeps the stored type as the extension', () => {
+    expect(originalFileName('3a9f0c1e-aaaa-bbbb', 'audio/mp4')).toBe('note-3a9f0c1e.m4a');
+    expect(originalFileName('3a9f0c1e-aaaa-bbbb', 'application/x-unknown')).toBe('note-3a9f0c1e.bin');
   });
 });

@@ -119,6 +119,42 @@ export function buildTrimArgs(
   ];
 }
 
+// One ffmpeg run over a note, all but the bytes: what the runner's job needs besides its input.
+export interface TranscodePlan {
+  inputName: string;
+  outputName: string;
+  outputType: string;
+  args: string[];
+}
+
+function plan(mimeType: string, format: AudioFormat, stem: string, args: (input: string, output: string) => string[]) {
+  const inputName = inputFileName(mimeType);
+  const outputName = outputFileName(format, stem);
+  return { inputName, outputName, outputType: format.mimeType, args: args(inputName, outputName) };
+}
+
+// The whole note as a copy this browser plays.
+export function conversionPlan(mimeType: string, format: AudioFormat): TranscodePlan {
+  return plan(mimeType, format, 'playable', (input, output) => buildConvertArgs(input, output, format));
+}
+
+// [start, end) of the note as a file to download.
+export function clipPlan(
+  mimeType: string,
+  startSeconds: number,
+  endSeconds: number,
+  format: AudioFormat,
+): TranscodePlan {
+  return plan(mimeType, format, 'clip', (input, output) =>
+    buildTrimArgs(input, output, startSeconds, endSeconds, format),
+  );
+}
+
+// The recording as it was stored: "note-3a9f0c12.webm".
+export function originalFileName(noteId: string, mimeType: string): string {
+  return `note-${noteId.slice(0, 8)}.${inputFileName(mimeType).split('.')[1] ?? 'bin'}`;
+}
+
 // "note-3a9f…-clip-0m04.2s-0m07.8s.webm": tells what the file is once it sits in Downloads.
 export function clipFileName(noteId: string, startSeconds: number, endSeconds: number, format: AudioFormat): string {
   const stamp = (seconds: number) => {

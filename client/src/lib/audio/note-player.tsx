@@ -2,17 +2,17 @@ import { useCallback, useEffect, useId, useImperativeHandle, useMemo, useRef, us
 import { useTranslation } from 'react-i18next';
 import { ErrorAlert, Loading } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
+import { SelectField } from '@/components/ui/field';
 import { describeError } from '@/lib/errors';
 import {
   AUDIO_FORMATS,
   CLIP_FORMATS,
-  buildConvertArgs,
-  buildTrimArgs,
   choosePlaybackFormat,
   clipFileName,
-  inputFileName,
+  clipPlan,
+  conversionPlan,
   needsConversion,
-  outputFileName,
+  originalFileName,
   type AudioFormat,
 } from './audio-formats';
 import { clampClip } from './format-time';
@@ -73,16 +73,7 @@ function usePlayableAudio(blob: Blob | undefined, mimeType: string) {
   useEffect(() => {
     if (!blob || !plan.convert || !plan.format) return;
     let cancelled = false;
-    const { format } = plan;
-    const input = inputFileName(mimeType);
-    const output = outputFileName(format, 'playable');
-    void run({
-      input: blob,
-      inputName: input,
-      outputName: output,
-      outputType: format.mimeType,
-      args: buildConvertArgs(input, output, format),
-    }).then((result) => {
+    void run({ input: blob, ...conversionPlan(mimeType, plan.format) }).then((result) => {
       if (result && !cancelled) setConverted({ from: blob, to: result });
     });
     return () => {
@@ -93,6 +84,8 @@ function usePlayableAudio(blob: Blob | undefined, mimeType: string) {
   const playable = !blob ? null : !plan.convert ? blob : converted?.from === blob ? converted.to : null;
   return { playable, unplayable: plan.convert && !plan.format, conversion: conversion.state };
 }
+
+const CLIP_EDGES = ['start', 'end'] as const;
 
 // One edge of the clip, in seconds with tenths.
 function SecondsField(props: {
@@ -140,11 +133,10 @@ function ClipTrimmer({
   onClipChange: (clip: ClipRange) => void;
 }) {
   const { t } = useTranslation();
-  const formatId = useId();
   const [formatIdValue, setFormatIdValue] = useState<AudioFormat['id']>('webm');
   const clipJob = useFfmpegJob();
 
-  const setEdge = (edge: 'start' | 'end', value: number) => {
+  const setEdge = (edge: (typeof CLIP_EDGES)[number], value: number) => {
     if (!Number.isFinite(value)) return;
     const next = edge === 'start' ? { ...clip, startSeconds: value } : { ...clip, endSeconds: value };
     onClipChange(clampClip(next.startSeconds, next.endSeconds, duration));
@@ -152,14 +144,9 @@ function ClipTrimmer({
 
   const download = async () => {
     const format = AUDIO_FORMATS[formatIdValue];
-    const input = inputFileName(mimeType);
-    const output = outputFileName(format, 'clip');
     const made = await clipJob.run({
       input: blob,
-      inputName: input,
-      outputName: output,
-      outputType: format.mimeType,
-      args: buildTrimArgs(input, output, clip.startSeconds, clip.endSeconds, format),
+      ...clipPlan(mimeType, clip.startSeconds, clip.endSeconds, format),
     });
     if (made) saveBlob(made, clipFileName(noteId, clip.startSeconds, clip.endSeconds, format));
   };
@@ -169,38 +156,28 @@ function ClipTrimmer({
       <legend className="px-1 font-bold">{t('audio.clip.title')}</legend>
       <p className="text-muted">{t('audio.clip.lead')}</p>
       <div className="flex flex-wrap items-end gap-tap-gap">
-        <SecondsField
-          label={t('audio.clip.start')}
-          max={duration}
-          value={clip.startSeconds}
-          onChange={(value) => setEdge('start', value)}
-          testId="clip-start"
-        />
-        <SecondsField
-          label={t('audio.clip.end')}
-          max={duration}
-          value={clip.endSeconds}
-          onChange={(value) => setEdge('end', value)}
-          testId="clip-end"
-        />
-        <div className="flex flex-col gap-1">
-          <label htmlFor={formatId} className="font-bold">
-            {t('audio.clip.format')}
-          </label>
-          <select
-            id={formatId}
-            value={formatIdValue}
-            onChange={(event) => setFormatIdValue(event.target.value as AudioFormat['id'])}
-            className="min-h-tap rounded-lg border-2 border-line bg-surface px-3 text-base text-ink"
-            data-testid="clip-format"
-          >
-            {CLIP_FORMATS.map((id) => (
-              <option key={id} value={id}>
-                {t(`audio.clip.formats.${id}`)}
-              </option>
-            ))}
-          </select>
-        </div>
+        {CLIP_EDGES.map((edge) => (
+          <SecondsField
+            key={edge}
+            label={t(`audio.clip.${edge}`)}
+            max={duration}
+            value={edge === 'start' ? clip.startSeconds : clip.endSeconds}
+            onChange={(value) => setEdge(edge, value)}
+            testId={`clip-${edge}`}
+          />
+        ))}
+        <SelectField
+          label={t('audio.clip.format')}
+          value={formatIdValue}
+          onChange={(event) => setFormatIdValue(event.target.value as AudioFormat['id'])}
+          data-testid="clip-format"
+        >
+          {CLIP_FORMATS.map((id) => (
+            <option key={id} value={id}>
+              {t(`audio.clip.formats.${id}`)}
+            </option>
+          ))}
+        </SelectField>
         <Button
           variant="secondary"
           onClick={() => void download()}
@@ -280,10 +257,7 @@ export function NotePlayer({ noteId, mimeType, durationMs, label, ref }: NotePla
         </>
       ) : null}
       <div>
-        <Button
-          variant="quiet"
-          onClick={() => saveBlob(audio.data, `note-${noteId.slice(0, 8)}.${inputFileName(mimeType).split('.')[1]}`)}
-        >
+        <Button variant="quiet" onClick={() => saveBlob(audio.data, originalFileName(noteId, mimeType))}>
           {t('audio.downloadOriginal')}
         </Button>
       </div>

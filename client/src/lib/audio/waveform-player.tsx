@@ -1,17 +1,9 @@
-import {
-  useCallback,
-  useEffect,
-  useId,
-  useImperativeHandle,
-  useRef,
-  useState,
-  type KeyboardEvent,
-  type Ref,
-} from 'react';
+import { useCallback, useEffect, useImperativeHandle, useRef, useState, type KeyboardEvent, type Ref } from 'react';
 import { useTranslation } from 'react-i18next';
 import WaveSurfer from 'wavesurfer.js';
 import RegionsPlugin, { type Region } from 'wavesurfer.js/dist/plugins/regions.esm.js';
 import { Button } from '@/components/ui/button';
+import { SelectField } from '@/components/ui/field';
 import { formatClock } from './format-time';
 
 export const PLAYBACK_RATES = [0.75, 1, 1.25, 1.5, 1.75, 2] as const;
@@ -49,7 +41,6 @@ function themeColor(name: string, fallback: string): string {
 
 export function WaveformPlayer({ audio, label, ref, clip, onClipChange, onDuration }: WaveformPlayerProps) {
   const { t } = useTranslation();
-  const speedId = useId();
   const waveRef = useRef<HTMLDivElement>(null);
   const audioRef = useRef<HTMLAudioElement>(null);
   const surferRef = useRef<WaveSurfer | null>(null);
@@ -246,24 +237,18 @@ export function WaveformPlayer({ audio, label, ref, clip, onClipChange, onDurati
         <p className="min-h-tap content-center font-mono text-lg tabular-nums" data-testid="audio-position">
           {position}
         </p>
-        <div className="flex flex-col gap-1">
-          <label htmlFor={speedId} className="font-bold">
-            {t('audio.speed')}
-          </label>
-          <select
-            id={speedId}
-            value={rate}
-            onChange={(event) => changeRate(Number(event.target.value))}
-            className="min-h-tap rounded-lg border-2 border-line bg-surface px-3 text-base text-ink"
-            data-testid="playback-speed"
-          >
-            {PLAYBACK_RATES.map((value) => (
-              <option key={value} value={value}>
-                {t('audio.rate', { rate: value })}
-              </option>
-            ))}
-          </select>
-        </div>
+        <SelectField
+          label={t('audio.speed')}
+          value={rate}
+          onChange={(event) => changeRate(Number(event.target.value))}
+          data-testid="playback-speed"
+        >
+          {PLAYBACK_RATES.map((value) => (
+            <option key={value} value={value}>
+              {t('audio.rate', { rate: value })}
+            </option>
+          ))}
+        </SelectField>
       </div>
       <p className="text-muted">{t('audio.keys')}</p>
     </div>
