@@ -72,6 +72,34 @@ export function percentile(sorted: readonly number[], p: number): number {
   return sorted[index] ?? Number.NaN;
 }
 
+const HEALTH_CALLS = 1000;
+
+// The same machine's floor in the same run, in calls a second: how much of a figure is the route and
+// how much the box.
+export async function healthPerSecond(url: string): Promise<number> {
+  const began = performance.now();
+  for (let call = 0; call < HEALTH_CALLS; call += 1) await (await fetch(`${url}/api/health`)).arrayBuffer();
+  return HEALTH_CALLS / ((performance.now() - began) / 1000);
+}
+
+const round = (n: number) => Math.round(n * 100) / 100;
+
+// One figure from a route's timings in ms: its percentiles beside the p95 goal, and its calls a second
+// as a share of the health floor.
+export function timingFigure(name: string, timings: readonly number[], goal: number, floor: number): BenchFigure {
+  const sorted = [...timings].sort((a, b) => a - b);
+  const perSecond = timings.length / (timings.reduce((sum, ms) => sum + ms, 0) / 1000);
+  return {
+    name,
+    unit: 'ms',
+    p50: round(percentile(sorted, 50)),
+    p95: round(percentile(sorted, 95)),
+    p99: round(percentile(sorted, 99)),
+    goal,
+    ratioToHealth: Math.round((perSecond / floor) * 1000) / 1000,
+  };
+}
+
 // Run on its own (`tsx bench/<name>.bench.ts`): one JSON line a figure, as `npm run bench` collects them.
 export function printFigures(run: () => Promise<BenchFigure[]>): void {
   run()

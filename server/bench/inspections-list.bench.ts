@@ -4,7 +4,7 @@
 // Run: npm run build -w shared && npm run build -w server && DATABASE_URL=... npx tsx server/bench/inspections-list.bench.ts
 import type { InspectionPage, LoginResponse } from '@yardcall/shared';
 import { Client } from 'pg';
-import { percentile, printFigures, runScript, startServer, type BenchFigure } from './bench-server';
+import { healthPerSecond, printFigures, runScript, startServer, timingFigure, type BenchFigure } from './bench-server';
 
 const INSPECTIONS = 100_000;
 // More units than the demo's seven: copies of the seeded configurations under their own numbers.
@@ -13,7 +13,6 @@ const CALLS = 150;
 const WARMUP = 20;
 const DEEP_PAGES = 150;
 const GOAL_P95_MS = 50;
-const HEALTH_CALLS = 1000;
 
 // Idempotent: a database that already holds the bench's rows is left as it is.
 async function fill(databaseUrl: string): Promise<{ organizationId: string; vehicleId: string; driverId: string }> {
@@ -180,24 +179,10 @@ export async function runInspectionsListBench(databaseUrl = process.env.DATABASE
       ['filter status=in_progress (40 of 100 000), first page', await firstPages('limit=25&status=in_progress')],
       ['first page of 100 rows', await firstPages('limit=100')],
     ];
-    // The same machine's floor in the same run: how much of a figure is the list and how much the box.
-    const healthBegan = performance.now();
-    for (let call = 0; call < HEALTH_CALLS; call += 1) await (await fetch(`${url}/api/health`)).arrayBuffer();
-    const healthPerSecond = HEALTH_CALLS / ((performance.now() - healthBegan) / 1000);
-    const round = (n: number) => Math.round(n * 100) / 100;
-    return runs.map(([what, timings]) => {
-      const sorted = [...timings].sort((a, b) => a - b);
-      const perSecond = timings.length / (timings.reduce((sum, ms) => sum + ms, 0) / 1000);
-      return {
-        name: `GET /api/inspections (${INSPECTIONS / 1000}k rows), ${what}`,
-        unit: 'ms',
-        p50: round(percentile(sorted, 50)),
-        p95: round(percentile(sorted, 95)),
-        p99: round(percentile(sorted, 99)),
-        goal: GOAL_P95_MS,
-        ratioToHealth: Math.round((perSecond / healthPerSecond) * 1000) / 1000,
-      };
-    });
+    const floor = await healthPerSecond(url);
+    return runs.map(([what, timings]) =>
+      timingFigure(`GET /api/inspections (${INSPECTIONS / 1000}k rows), ${what}`, timings, GOAL_P95_MS, floor),
+    );
   } finally {
     child.kill('SIGTERM');
   }

@@ -3,12 +3,11 @@
 // Run: npm run build -w shared && npm run build -w server && DATABASE_URL=... npx tsx server/bench/results-upsert.bench.ts
 import type { ChecklistItem, InspectionResponse, LoginResponse, ResultUpsert, VehicleResponse } from '@yardcall/shared';
 import { randomUUID } from 'node:crypto';
-import { percentile, printFigures, runScript, startServer, type BenchFigure } from './bench-server';
+import { healthPerSecond, printFigures, runScript, startServer, timingFigure, type BenchFigure } from './bench-server';
 
 const CALLS = 200;
 const WARMUP = 20;
 const ITEMS_PER_CALL = 150;
-const HEALTH_CALLS = 1000;
 const GOAL_P95_MS = 100;
 
 // Plausible readings: inside the limits, so the benchmark measures storing, not error paths.
@@ -110,23 +109,8 @@ export async function runResultsUpsertBench(databaseUrl = process.env.DATABASE_U
     const first: number[] = [];
     for (const [n, each] of fresh.entries()) first.push(await put(each, n));
 
-    const healthBegan = performance.now();
-    for (let call = 0; call < HEALTH_CALLS; call += 1) await (await fetch(`${url}/api/health`)).arrayBuffer();
-    const healthPerSecond = HEALTH_CALLS / ((performance.now() - healthBegan) / 1000);
-    const round = (n: number) => Math.round(n * 100) / 100;
-    const figure = (name: string, timings: readonly number[]): BenchFigure => {
-      const sorted = [...timings].sort((a, b) => a - b);
-      const perSecond = timings.length / (timings.reduce((sum, ms) => sum + ms, 0) / 1000);
-      return {
-        name,
-        unit: 'ms',
-        p50: round(percentile(sorted, 50)),
-        p95: round(percentile(sorted, 95)),
-        p99: round(percentile(sorted, 99)),
-        goal: GOAL_P95_MS,
-        ratioToHealth: Math.round((perSecond / healthPerSecond) * 1000) / 1000,
-      };
-    };
+    const floor = await healthPerSecond(url);
+    const figure = (name: string, timings: readonly number[]) => timingFigure(name, timings, GOAL_P95_MS, floor);
     return [
       figure(`PUT /api/inspections/:id/results, ${ITEMS_PER_CALL} items answered again`, again),
       figure(`PUT /api/inspections/:id/results, ${ITEMS_PER_CALL} first answers`, first),
