@@ -79,17 +79,44 @@ export const NEAR_MARGINS = {
 
 const OTHER_AXLES: readonly AxlePosition[] = ['drive', 'tag', 'trailer'];
 
+const atLeast = (value: LimitValue): LimitBound => ({ kind: 'at_least', value });
+const notGreaterThan = (value: LimitValue): LimitBound => ({ kind: 'not_greater_than', value });
+
+// A row of a published text; its near margin is its quantity's own.
+function publishedRow(
+  id: string,
+  quantity: Quantity & keyof typeof NEAR_MARGINS,
+  group: string,
+  when: LimitCondition,
+  bounds: readonly LimitBound[],
+  source: string,
+): LimitRow {
+  return { id, quantity, group, when, bounds, nearMargin: NEAR_MARGINS[quantity], basis: 'published', source };
+}
+
+// Lining or pad thickness, inches, 49 CFR 393.47(d); `where` completes the source.
+function liningRow(
+  axles: 'steer' | 'other',
+  brake: BrakeType,
+  bound: LimitBound,
+  where: string,
+  shoe?: BrakeShoe,
+): LimitRow {
+  const when: LimitCondition = { axle: axles === 'steer' ? ['steer'] : OTHER_AXLES, brake: [brake] };
+  if (shoe) when.shoe = [shoe];
+  const id = ['lining', axles, brake, ...(shoe ? [shoe] : [])].join('.');
+  return publishedRow(id, 'lining_thickness', 'lining', when, [bound], `49 CFR 393.47(d), ${where}`);
+}
+
 function strokeRow(chamber: ChamberCode, limitIn: number, source = '49 CFR 393.47(e)'): LimitRow {
-  return {
-    id: `stroke.${chamber}`,
-    quantity: 'pushrod_stroke',
-    group: 'stroke',
-    when: { chamber: [chamber] },
-    bounds: [{ kind: 'not_greater_than', value: limitIn }],
-    nearMargin: NEAR_MARGINS.pushrod_stroke,
-    basis: 'published',
+  return publishedRow(
+    `stroke.${chamber}`,
+    'pushrod_stroke',
+    'stroke',
+    { chamber: [chamber] },
+    [notGreaterThan(limitIn)],
     source,
-  };
+  );
 }
 
 function lashRow(
@@ -99,16 +126,31 @@ function lashRow(
   source = '49 CFR 393.209(b)',
 ): LimitRow {
   const at = diameter.equals !== undefined ? `${diameter.equals}` : `le${diameter.atMost}`;
-  return {
-    id: `lash.${steering}.${at}`,
-    quantity: 'steering_lash',
-    group: 'lash',
-    when: { steering: [steering], wheelDiameterIn: diameter },
-    bounds: [{ kind: 'not_greater_than', value: limitIn }],
-    nearMargin: NEAR_MARGINS.steering_lash,
-    basis: 'published',
-    source,
-  };
+  const when = { steering: [steering], wheelDiameterIn: diameter };
+  return publishedRow(`lash.${steering}.${at}`, 'steering_lash', 'lash', when, [notGreaterThan(limitIn)], source);
+}
+
+// Any other wheel diameter: the rim travel of the rotation 393.209(b)(2) allows.
+function lashFormulaRow(steering: SteeringType, degrees: number): LimitRow {
+  const source = `49 CFR 393.209(b)(2): ${degrees} degrees of rotation, ${steering} steering`;
+  const bound = notGreaterThan({ rimTravelDegrees: degrees });
+  return publishedRow(`lash.${steering}.formula`, 'steering_lash', 'lash', { steering: [steering] }, [bound], source);
+}
+
+// Air pressure on the dash gauge for one air-brake check, psi: [at least, at most].
+function airRow(check: AirCheck, [least, most]: [number, number?], source: string): LimitRow {
+  const bounds = most === undefined ? [atLeast(least)] : [atLeast(least), notGreaterThan(most)];
+  return publishedRow(`air.${check}`, 'air_pressure', 'air', { check: [check] }, bounds, source);
+}
+
+// Air loss over one minute, psi, engine off, from the CDL manual, section 5.
+function leakRow(brakes: 'released' | 'applied', vehicle: 'single' | 'combination', limit: number): LimitRow {
+  // Released: "under" the figure, so the figure itself fails. Applied: "more than" the figure is too
+  // much, so the figure itself passes.
+  const bound: LimitBound = { kind: brakes === 'released' ? 'less_than' : 'not_greater_than', value: limit };
+  const when: LimitCondition = { brakesApplied: brakes === 'applied', vehicle: [vehicle] };
+  const source = `CDL manual, section 5: brakes ${brakes}, ${vehicle === 'single' ? 'single vehicle' : 'combination'}`;
+  return publishedRow(`leak.${brakes}.${vehicle}`, 'leak_rate', 'leak', when, [bound], source);
 }
 
 // Type 36: the 2012 text of 393.47(e) says 2-1/4 in, the 2021 text 2-1/2 in. We use 2-1/4 in: it is the
@@ -132,100 +174,19 @@ export const TIRE_PRESSURE_TOLERANCE_PSI = 3;
 
 export const LIMITS: readonly LimitRow[] = [
   // Tread depth, 32nds of an inch, in a major groove.
-  {
-    id: 'tread.steer',
-    quantity: 'tread_depth',
-    group: 'tread',
-    when: { axle: ['steer'] },
-    bounds: [{ kind: 'at_least', value: 4 }],
-    nearMargin: NEAR_MARGINS.tread_depth,
-    basis: 'published',
-    source: '49 CFR 393.75(b)',
-  },
-  {
-    id: 'tread.other',
-    quantity: 'tread_depth',
-    group: 'tread',
-    when: { axle: OTHER_AXLES },
-    bounds: [{ kind: 'at_least', value: 2 }],
-    nearMargin: NEAR_MARGINS.tread_depth,
-    basis: 'published',
-    source: '49 CFR 393.75(c)',
-  },
+  publishedRow('tread.steer', 'tread_depth', 'tread', { axle: ['steer'] }, [atLeast(4)], '49 CFR 393.75(b)'),
+  publishedRow('tread.other', 'tread_depth', 'tread', { axle: OTHER_AXLES }, [atLeast(2)], '49 CFR 393.75(c)'),
 
   // Lining or pad thickness, inches: 393.47(d) says when it fails ("less than"), so the figure itself passes,
   // except hydraulic steer brakes, which fail at 1/16 in "or less".
-  {
-    id: 'lining.steer.air_drum.continuous_strip',
-    quantity: 'lining_thickness',
-    group: 'lining',
-    when: { axle: ['steer'], brake: ['air_drum'], shoe: ['continuous_strip'] },
-    bounds: [{ kind: 'at_least', value: 3 / 16 }],
-    nearMargin: NEAR_MARGINS.lining_thickness,
-    basis: 'published',
-    source: '49 CFR 393.47(d), steering axle, continuous-strip shoe',
-  },
+  liningRow('steer', 'air_drum', atLeast(3 / 16), 'steering axle, continuous-strip shoe', 'continuous_strip'),
   // A vehicle record does not say the shoe type: without it we use the stricter two-pad figure.
-  {
-    id: 'lining.steer.air_drum',
-    quantity: 'lining_thickness',
-    group: 'lining',
-    when: { axle: ['steer'], brake: ['air_drum'] },
-    bounds: [{ kind: 'at_least', value: 1 / 4 }],
-    nearMargin: NEAR_MARGINS.lining_thickness,
-    basis: 'published',
-    source: '49 CFR 393.47(d), steering axle, two-pad shoe',
-  },
-  {
-    id: 'lining.steer.air_disc',
-    quantity: 'lining_thickness',
-    group: 'lining',
-    when: { axle: ['steer'], brake: ['air_disc'] },
-    bounds: [{ kind: 'at_least', value: 1 / 8 }],
-    nearMargin: NEAR_MARGINS.lining_thickness,
-    basis: 'published',
-    source: '49 CFR 393.47(d), steering axle, disc',
-  },
-  {
-    id: 'lining.steer.hydraulic',
-    quantity: 'lining_thickness',
-    group: 'lining',
-    when: { axle: ['steer'], brake: ['hydraulic'] },
-    bounds: [{ kind: 'more_than', value: 1 / 16 }],
-    nearMargin: NEAR_MARGINS.lining_thickness,
-    basis: 'published',
-    source: '49 CFR 393.47(d), steering axle, hydraulic brake',
-  },
-  {
-    id: 'lining.other.air_drum',
-    quantity: 'lining_thickness',
-    group: 'lining',
-    when: { axle: OTHER_AXLES, brake: ['air_drum'] },
-    bounds: [{ kind: 'at_least', value: 1 / 4 }],
-    nearMargin: NEAR_MARGINS.lining_thickness,
-    basis: 'published',
-    source: '49 CFR 393.47(d), other axles, drum (or worn to the indicator)',
-  },
-  {
-    id: 'lining.other.air_disc',
-    quantity: 'lining_thickness',
-    group: 'lining',
-    when: { axle: OTHER_AXLES, brake: ['air_disc'] },
-    bounds: [{ kind: 'at_least', value: 1 / 8 }],
-    nearMargin: NEAR_MARGINS.lining_thickness,
-    basis: 'published',
-    source: '49 CFR 393.47(d), other axles, disc',
-  },
-  {
-    id: 'lining.other.hydraulic',
-    quantity: 'lining_thickness',
-    group: 'lining',
-    when: { axle: OTHER_AXLES, brake: ['hydraulic'] },
-    bounds: [{ kind: 'at_least', value: 1 / 16 }],
-    nearMargin: NEAR_MARGINS.lining_thickness,
-    basis: 'published',
-    source: '49 CFR 393.47(d), other axles, hydraulic brake',
-  },
+  liningRow('steer', 'air_drum', atLeast(1 / 4), 'steering axle, two-pad shoe'),
+  liningRow('steer', 'air_disc', atLeast(1 / 8), 'steering axle, disc'),
+  liningRow('steer', 'hydraulic', { kind: 'more_than', value: 1 / 16 }, 'steering axle, hydraulic brake'),
+  liningRow('other', 'air_drum', atLeast(1 / 4), 'other axles, drum (or worn to the indicator)'),
+  liningRow('other', 'air_disc', atLeast(1 / 8), 'other axles, disc'),
+  liningRow('other', 'hydraulic', atLeast(1 / 16), 'other axles, hydraulic brake'),
 
   // Push-rod stroke readjustment limits, clamp-type chambers, inches, "not greater than".
   strokeRow('type-6', 1.25),
@@ -257,26 +218,8 @@ export const LIMITS: readonly LimitRow[] = [
   lashRow('power', { equals: 20 }, 5.25),
   lashRow('power', { equals: 21 }, 5.5),
   lashRow('power', { equals: 22 }, 5.75),
-  {
-    id: 'lash.manual.formula',
-    quantity: 'steering_lash',
-    group: 'lash',
-    when: { steering: ['manual'] },
-    bounds: [{ kind: 'not_greater_than', value: { rimTravelDegrees: 14 } }],
-    nearMargin: NEAR_MARGINS.steering_lash,
-    basis: 'published',
-    source: '49 CFR 393.209(b)(2): 14 degrees of rotation, manual steering',
-  },
-  {
-    id: 'lash.power.formula',
-    quantity: 'steering_lash',
-    group: 'lash',
-    when: { steering: ['power'] },
-    bounds: [{ kind: 'not_greater_than', value: { rimTravelDegrees: 30 } }],
-    nearMargin: NEAR_MARGINS.steering_lash,
-    basis: 'published',
-    source: '49 CFR 393.209(b)(2): 30 degrees of rotation, power steering',
-  },
+  lashFormulaRow('manual', 14),
+  lashFormulaRow('power', 30),
 
   // Tire pressure, psi, cold. The spec is the target the driver fills to: a few psi under it is
   // topped up when convenient, further under is a defect the driver may fix at the air line.
@@ -329,95 +272,20 @@ export const LIMITS: readonly LimitRow[] = [
   },
 
   // Air system, psi on the dash gauge.
-  {
-    id: 'air.low_air_warning',
-    quantity: 'air_pressure',
-    group: 'air',
-    when: { check: ['low_air_warning'] },
-    bounds: [{ kind: 'at_least', value: LOW_AIR_WARNING_LIMIT_PSI }],
-    nearMargin: NEAR_MARGINS.air_pressure,
-    basis: 'published',
-    source: 'FMVSS 121 S5.1.5 (49 CFR 571.121); the modernised CDL test says 55 psi',
-  },
-  {
-    id: 'air.governor_cut_in',
-    quantity: 'air_pressure',
-    group: 'air',
-    when: { check: ['governor_cut_in'] },
-    bounds: [{ kind: 'at_least', value: 100 }],
-    nearMargin: NEAR_MARGINS.air_pressure,
-    basis: 'published',
-    source: 'FMVSS 121 S5.1.1.1 (49 CFR 571.121), trucks',
-  },
-  {
-    id: 'air.governor_cut_out',
-    quantity: 'air_pressure',
-    group: 'air',
-    when: { check: ['governor_cut_out'] },
-    bounds: [
-      { kind: 'at_least', value: 120 },
-      { kind: 'not_greater_than', value: 140 },
-    ],
-    nearMargin: NEAR_MARGINS.air_pressure,
-    basis: 'published',
-    source: "CDL manual, section 5: about 120 to 140 psi; the maker's spec governs",
-  },
-  {
-    id: 'air.spring_brake',
-    quantity: 'air_pressure',
-    group: 'air',
-    when: { check: ['spring_brake'] },
-    bounds: [
-      { kind: 'at_least', value: 20 },
-      { kind: 'not_greater_than', value: 45 },
-    ],
-    nearMargin: NEAR_MARGINS.air_pressure,
-    basis: 'published',
-    source: "CDL manual, section 5: usually between 20 and 45 psi; the maker's spec governs",
-  },
+  airRow(
+    'low_air_warning',
+    [LOW_AIR_WARNING_LIMIT_PSI],
+    'FMVSS 121 S5.1.5 (49 CFR 571.121); the modernised CDL test says 55 psi',
+  ),
+  airRow('governor_cut_in', [100], 'FMVSS 121 S5.1.1.1 (49 CFR 571.121), trucks'),
+  airRow('governor_cut_out', [120, 140], "CDL manual, section 5: about 120 to 140 psi; the maker's spec governs"),
+  airRow('spring_brake', [20, 45], "CDL manual, section 5: usually between 20 and 45 psi; the maker's spec governs"),
 
-  // Air loss over one minute, engine off. Released: "under" the figure, so the figure itself fails.
-  // Applied: "more than" the figure is too much, so the figure itself passes.
-  {
-    id: 'leak.released.single',
-    quantity: 'leak_rate',
-    group: 'leak',
-    when: { brakesApplied: false, vehicle: ['single'] },
-    bounds: [{ kind: 'less_than', value: 2 }],
-    nearMargin: NEAR_MARGINS.leak_rate,
-    basis: 'published',
-    source: 'CDL manual, section 5: brakes released, single vehicle',
-  },
-  {
-    id: 'leak.released.combination',
-    quantity: 'leak_rate',
-    group: 'leak',
-    when: { brakesApplied: false, vehicle: ['combination'] },
-    bounds: [{ kind: 'less_than', value: 3 }],
-    nearMargin: NEAR_MARGINS.leak_rate,
-    basis: 'published',
-    source: 'CDL manual, section 5: brakes released, combination',
-  },
-  {
-    id: 'leak.applied.single',
-    quantity: 'leak_rate',
-    group: 'leak',
-    when: { brakesApplied: true, vehicle: ['single'] },
-    bounds: [{ kind: 'not_greater_than', value: 3 }],
-    nearMargin: NEAR_MARGINS.leak_rate,
-    basis: 'published',
-    source: 'CDL manual, section 5: brakes applied, single vehicle',
-  },
-  {
-    id: 'leak.applied.combination',
-    quantity: 'leak_rate',
-    group: 'leak',
-    when: { brakesApplied: true, vehicle: ['combination'] },
-    bounds: [{ kind: 'not_greater_than', value: 4 }],
-    nearMargin: NEAR_MARGINS.leak_rate,
-    basis: 'published',
-    source: 'CDL manual, section 5: brakes applied, combination',
-  },
+  // Air loss over one minute, engine off.
+  leakRow('released', 'single', 2),
+  leakRow('released', 'combination', 3),
+  leakRow('applied', 'single', 3),
+  leakRow('applied', 'combination', 4),
 ];
 
 // Air checks with no measured quantity of their own: the checklist names them, a person judges them.
