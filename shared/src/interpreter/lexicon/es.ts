@@ -1,5 +1,5 @@
 // Lo que dicen los choferes hispanohablantes junto a la rueda, como datos.
-import type { AnswerLexicon } from './lexicon-types.js';
+import { unitPhrases, type AnswerLexicon } from './lexicon-types.js';
 
 const PARTS = [
   'llanta',
@@ -162,6 +162,12 @@ const PARTS = [
   'gladhands',
   'cuña',
 ];
+
+// Verbs that may stand between a negator and a problem or a pass word ("no se ve", "no está").
+const LINKING_VERBS = ['esta', 'estan', 'es', 'son', 'se', 've', 'ven'];
+
+// Indefinite articles and "de": known words with no answer in them, that may stand after a negator.
+const ARTICLES = ['un', 'una', 'unos', 'unas', 'de', 'del'];
 
 export const ES_LEXICON: AnswerLexicon = {
   fillers: [
@@ -687,13 +693,7 @@ export const ES_LEXICON: AnswerLexicon = {
   conjunctions: ['y', 'o', 'ni', 'e', 'u'],
   determinerGap: ['de', 'ningun', 'ninguna', 'ninguno', 'tipo de', 'nada de', 'aire', 'aceite', 'liquido', 'visible'],
   verbalGap: [
-    'esta',
-    'estan',
-    'es',
-    'son',
-    'se',
-    've',
-    'ven',
+    ...LINKING_VERBS,
     'veo',
     'vi',
     'hay',
@@ -710,12 +710,7 @@ export const ES_LEXICON: AnswerLexicon = {
     'los',
     'las',
     'el',
-    'un',
-    'una',
-    'unos',
-    'unas',
-    'de',
-    'del',
+    ...ARTICLES,
     'que',
     'muy',
     'tan',
@@ -751,24 +746,7 @@ export const ES_LEXICON: AnswerLexicon = {
     'huella',
     'esta',
   ],
-  passGap: [
-    'esta',
-    'estan',
-    'es',
-    'son',
-    'se',
-    've',
-    'ven',
-    'muy',
-    'tan',
-    'todo',
-    'parece',
-    'anda',
-    'andan',
-    'lo',
-    'le',
-    'la',
-  ],
+  passGap: [...LINKING_VERBS, 'muy', 'tan', 'todo', 'parece', 'anda', 'andan', 'lo', 'le', 'la'],
   parts: PARTS,
   neutral: [
     'el',
@@ -776,12 +754,7 @@ export const ES_LEXICON: AnswerLexicon = {
     'los',
     'las',
     'lo',
-    'un',
-    'una',
-    'unos',
-    'unas',
-    'de',
-    'del',
+    ...ARTICLES,
     'en',
     'con',
     'y',
@@ -1229,32 +1202,15 @@ export const ES_LEXICON: AnswerLexicon = {
     'nel',
     'ponle',
   ],
-  units: [
-    { phrase: 'pulgada', unit: 'in' },
-    { phrase: 'pulgadas', unit: 'in' },
-    { phrase: 'de pulgada', unit: 'in' },
-    { phrase: 'milimetro', unit: 'mm' },
-    { phrase: 'milimetros', unit: 'mm' },
-    { phrase: 'mm', unit: 'mm' },
-    { phrase: 'milis', unit: 'mm' },
-    { phrase: 'centimetro', unit: 'cm' },
-    { phrase: 'centimetros', unit: 'cm' },
-    { phrase: 'cm', unit: 'cm' },
-    { phrase: 'libras', unit: 'psi' },
-    { phrase: 'libra', unit: 'psi' },
-    { phrase: 'psi', unit: 'psi' },
-    { phrase: 'pe ese i', unit: 'psi' },
-    { phrase: 'p s i', unit: 'psi' },
-    { phrase: 'libras de presion', unit: 'psi' },
-    { phrase: 'libras por pulgada cuadrada', unit: 'psi' },
-    { phrase: 'bar', unit: 'bar' },
-    { phrase: 'bares', unit: 'bar' },
-    { phrase: 'kilopascales', unit: 'kPa' },
-    { phrase: 'kpa', unit: 'kPa' },
-    { phrase: 'grado', unit: 'deg' },
-    { phrase: 'grados', unit: 'deg' },
-    { phrase: 'deg', unit: 'deg' },
-  ],
+  units: unitPhrases({
+    in: ['pulgada', 'pulgadas', 'de pulgada'],
+    mm: ['milimetro', 'milimetros', 'mm', 'milis'],
+    cm: ['centimetro', 'centimetros', 'cm'],
+    psi: ['libras', 'libra', 'psi', 'pe ese i', 'p s i', 'libras de presion', 'libras por pulgada cuadrada'],
+    bar: ['bar', 'bares'],
+    kPa: ['kilopascales', 'kpa'],
+    deg: ['grado', 'grados', 'deg'],
+  }),
   perMinute: ['por minuto', 'al minuto', 'cada minuto', 'en un minuto', 'por min', 'en el minuto', 'x minuto'],
   noLeak: [
     'sin fuga',

@@ -5,6 +5,11 @@ import type { Locale } from '../../checklist/index.js';
 import type { Unit } from '../../units/index.js';
 import type { Command } from '../types.js';
 
+export interface UnitPhrase {
+  phrase: string;
+  unit: Unit;
+}
+
 export type SpokenCommand = Exclude<Command, 'language'>;
 
 export interface AnswerLexicon {
@@ -46,7 +51,7 @@ export interface AnswerLexicon {
   // For the out-of-limit confirmation step.
   yes: readonly string[];
   no: readonly string[];
-  units: readonly { phrase: string; unit: Unit }[];
+  units: readonly UnitPhrase[];
   // "per minute" after a pressure makes it a leak rate.
   perMinute: readonly string[];
   // A leak rate of zero said in words ("holding steady", "sin fugas").
@@ -71,4 +76,11 @@ export interface AnswerLexicon {
   articles: readonly string[];
   // Words that may follow "end note" without making it mid-sentence ("please", "gracias").
   signOffs: readonly string[];
+}
+
+// The units table written as each unit with the phrases that name it, read as one row a phrase.
+export function unitPhrases(byUnit: Readonly<Partial<Record<Unit, readonly string[]>>>): UnitPhrase[] {
+  return Object.entries(byUnit).flatMap(([unit, phrases]) =>
+    (phrases ?? []).map((phrase) => ({ phrase, unit: unit as Unit })),
+  );
 }
