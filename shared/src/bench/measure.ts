@@ -46,17 +46,18 @@ function round2(value: number): number {
   return Math.round(value * 100) / 100;
 }
 
+// The three percentiles of ascending timings, each rounded by `round`.
+function percentiles(
+  sorted: readonly number[],
+  round: (value: number) => number,
+): Pick<BenchFigure, 'p50' | 'p95' | 'p99'> {
+  return { p50: round(percentile(sorted, 50)), p95: round(percentile(sorted, 95)), p99: round(percentile(sorted, 99)) };
+}
+
 // Timings taken elsewhere (a browser, a server round trip), in any order, as one figure judged at p95.
 export function timingFigure(name: string, timings: readonly number[], goal: number): BenchFigure {
   const sorted = [...timings].sort((a, b) => a - b);
-  return {
-    name,
-    unit: 'ms',
-    p50: round2(percentile(sorted, 50)),
-    p95: round2(percentile(sorted, 95)),
-    p99: round2(percentile(sorted, 99)),
-    goal,
-  };
+  return { name, unit: 'ms', ...percentiles(sorted, round2), goal };
 }
 
 // `fn` gets the run's number, counting warm-up runs first, so callers can cycle through inputs.
@@ -76,13 +77,5 @@ export function measure(
     timings.push(performance.now() - start);
   }
   timings.sort((a, b) => a - b);
-  return {
-    name,
-    unit: 'ms',
-    p50: round3(percentile(timings, 50)),
-    p95: round3(percentile(timings, 95)),
-    p99: round3(percentile(timings, 99)),
-    goal,
-    judgedAt: options.judgedAt ?? 'p95',
-  };
+  return { name, unit: 'ms', ...percentiles(timings, round3), goal, judgedAt: options.judgedAt ?? 'p95' };
 }

@@ -14,14 +14,15 @@ function airDrumAxle(position: AxlePosition, tires: TireArrangement, size: Chamb
   return { position, tires, brake: 'air_drum', chamber: { size, stroke: 'long' }, tire };
 }
 
+// The sample units' invented numbers, VINs and plates.
+const TRACTOR_4127 = { unitNumber: '4127', kind: 'tractor', vin: '3JRFT4127PX000417', plate: 'JRF 4127' } as const;
+const TRAILER_5310 = { unitNumber: '5310', kind: 'trailer', vin: '1JRVN5310RX005310', plate: 'JRT 5310' } as const;
+
 // A 3-axle tractor: power steering, steer brakes type 20 long stroke, drives type 30 long stroke.
 export function sampleTractor(): VehicleInput {
   const driveTire: TireSpec = { size: '11R22.5', coldInflationPsi: 100, sidewallMaxPsi: 105 };
   return {
-    unitNumber: '4127',
-    kind: 'tractor',
-    vin: '3JRFT4127PX000417',
-    plate: 'JRF 4127',
+    ...TRACTOR_4127,
     config: {
       steering: { wheelDiameterIn: 20, type: 'power' },
       axles: [
@@ -37,10 +38,7 @@ export function sampleTractor(): VehicleInput {
 export function sampleTrailer(): VehicleInput {
   const tire: TireSpec = { size: '295/75R22.5', coldInflationPsi: 95, sidewallMaxPsi: 110 };
   return {
-    unitNumber: '5310',
-    kind: 'trailer',
-    vin: '1JRVN5310RX005310',
-    plate: 'JRT 5310',
+    ...TRAILER_5310,
     config: {
       axles: [airDrumAxle('trailer', 'dual', 30, { ...tire }), airDrumAxle('trailer', 'dual', 30, { ...tire })],
     },
