@@ -10,6 +10,7 @@ import { setUnauthorizedHandler } from '@/lib/api-client';
 import { describeError } from '@/lib/errors';
 import { getOfflineRuntime, type LocalWalkaround } from '@/lib/offline';
 import { hasSession, signInPath } from '@/lib/sign-in';
+import { SkipToMain } from './layout/skip-to-main';
 
 type Loaded =
   | { status: 'loading' }
@@ -50,12 +51,7 @@ export function RunPage({ clientId }: { clientId: string }) {
 
   return (
     <div className="flex min-h-screen flex-col">
-      <a
-        href="#main"
-        className="sr-only focus:not-sr-only focus:m-2 focus:inline-flex focus:min-h-tap focus:items-center focus:px-3"
-      >
-        {t('nav.skip')}
-      </a>
+      <SkipToMain />
       <header className="border-b-4 border-primary bg-surface">
         <div className="mx-auto flex max-w-6xl items-center px-3">
           <a href="/" className="inline-flex min-h-tap items-center no-underline" aria-label={t('nav.homeLink')}>

@@ -11,6 +11,7 @@ import { meQueryOptions } from '@/lib/api/auth';
 import { hasSession, SIGN_IN_PATH } from '@/lib/sign-in';
 import { homePathFor } from '../role-homes';
 import { useFocusedScreen } from './shell-handle';
+import { SkipToMain } from './skip-to-main';
 
 type NavKey = 'home' | 'start' | 'vehicles' | 'users' | 'outbox' | 'retention' | 'inspections';
 
@@ -66,12 +67,7 @@ export function AppShell() {
 
   return (
     <div className="flex min-h-screen flex-col">
-      <a
-        href="#main"
-        className="sr-only focus:not-sr-only focus:m-2 focus:inline-flex focus:min-h-tap focus:items-center focus:px-3"
-      >
-        {t('nav.skip')}
-      </a>
+      <SkipToMain />
       <header className="border-b-4 border-primary bg-surface">
         <div
           className={`mx-auto flex max-w-6xl flex-wrap items-center justify-between gap-tap-gap px-3 ${focused ? 'py-0' : 'py-2'}`}

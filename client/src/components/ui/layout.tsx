@@ -1,4 +1,4 @@
-import type { ReactNode } from 'react';
+import { useId, type ReactNode } from 'react';
 
 // Every screen has one h1 naming it; sections below use h2.
 export function PageHeading({ title, lead, actions }: { title: string; lead?: ReactNode; actions?: ReactNode }) {
@@ -22,6 +22,61 @@ export function Section({ title, children, id }: { title: string; children: Reac
       </h2>
       {children}
     </section>
+  );
+}
+
+// A framed part of a screen named by its own heading: h2 on its own, h3 inside a Section; dashed when it
+// stands aside from the screen's work (the demo accounts).
+export function Panel({
+  title,
+  level = 2,
+  aside = false,
+  className = '',
+  children,
+  'data-testid': testId,
+}: {
+  title: ReactNode;
+  level?: 2 | 3;
+  aside?: boolean;
+  className?: string;
+  children: ReactNode;
+  'data-testid'?: string;
+}) {
+  const headingId = useId();
+  const Frame = aside ? 'aside' : 'section';
+  const Heading = level === 2 ? 'h2' : 'h3';
+  return (
+    <Frame
+      aria-labelledby={headingId}
+      className={`rounded-xl border-2 border-line p-4 ${aside ? 'border-dashed' : 'bg-surface'} ${className}`}
+      data-testid={testId}
+    >
+      <Heading id={headingId} className="text-xl font-bold">
+        {title}
+      </Heading>
+      {children}
+    </Frame>
+  );
+}
+
+// One person in a list of people: the name, the address, then what the list says of them.
+export function PersonItem({
+  person,
+  className = '',
+  children,
+  'data-testid': testId,
+}: {
+  person: { name: string; email: string };
+  className?: string;
+  children: ReactNode;
+  'data-testid'?: string;
+}) {
+  return (
+    <li className={`rounded-xl border-2 border-line bg-surface p-4 ${className}`} data-testid={testId}>
+      <p className="text-xl font-bold">{person.name}</p>
+      <p className="text-muted">{person.email}</p>
+      {children}
+    </li>
   );
 }
 

@@ -3,7 +3,7 @@ import { useTranslation } from 'react-i18next';
 import { PASSWORD_MIN_LENGTH } from '@yardcall/shared';
 import { Button } from '@/components/ui/button';
 import { ErrorAlert, Loading } from '@/components/ui/alert';
-import { TextField } from '@/components/ui/field';
+import { PasswordField } from '@/components/ui/field';
 import { Card, Stack } from '@/components/ui/layout';
 import { describeError, fieldErrors } from '@/lib/errors';
 import { useAcceptInvitation, useInvitation } from '@/lib/api/invitations';
@@ -41,19 +41,17 @@ export function AcceptInvitationForm({ token, onAccepted }: { token: string; onA
       <form onSubmit={submit} noValidate aria-label={t('invite.title')}>
         <Stack>
           {accept.isError ? <ErrorAlert>{describeError(accept.error)}</ErrorAlert> : null}
-          <TextField
+          <PasswordField
+            isNew
             label={t('invite.password')}
             hint={t('invite.passwordHint', { count: PASSWORD_MIN_LENGTH })}
-            type="password"
-            autoComplete="new-password"
             value={password}
             error={problems.password ?? serverFields.password}
             onChange={(event) => setPassword(event.target.value)}
           />
-          <TextField
+          <PasswordField
+            isNew
             label={t('invite.confirm')}
-            type="password"
-            autoComplete="new-password"
             value={confirm}
             error={problems.confirm}
             onChange={(event) => setConfirm(event.target.value)}

@@ -1,5 +1,6 @@
 import { useTranslation } from 'react-i18next';
 import { ROLES, type Role } from '@yardcall/shared';
+import { Panel } from '@/components/ui/layout';
 
 export const DEMO_PASSWORD = 'yardcall-demo';
 
@@ -15,14 +16,7 @@ export function isDemoBuild(): boolean {
 export function DemoSignIns({ onPick }: { onPick: (email: string, password: string) => void }) {
   const { t } = useTranslation();
   return (
-    <aside
-      aria-labelledby="demo-sign-ins-heading"
-      className="rounded-xl border-2 border-dashed border-line p-4"
-      data-testid="demo-sign-ins"
-    >
-      <h2 id="demo-sign-ins-heading" className="text-xl font-bold">
-        {t('signIn.demo.title')}
-      </h2>
+    <Panel title={t('signIn.demo.title')} aside data-testid="demo-sign-ins">
       <p className="mt-1 text-muted">{t('signIn.demo.body', { password: DEMO_PASSWORD })}</p>
       <ul className="mt-3 flex flex-col gap-tap-gap">
         {ROLES.map((role) => (
@@ -40,6 +34,6 @@ export function DemoSignIns({ onPick }: { onPick: (email: string, password: stri
           </li>
         ))}
       </ul>
-    </aside>
+    </Panel>
   );
 }

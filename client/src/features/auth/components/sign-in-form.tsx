@@ -2,7 +2,7 @@ import { useState, type FormEvent } from 'react';
 import { useTranslation } from 'react-i18next';
 import { Button } from '@/components/ui/button';
 import { ErrorAlert } from '@/components/ui/alert';
-import { TextField } from '@/components/ui/field';
+import { EmailField, PasswordField } from '@/components/ui/field';
 import { Stack } from '@/components/ui/layout';
 import { describeError } from '@/lib/errors';
 import { useLogin } from '@/lib/api/auth';
@@ -24,21 +24,17 @@ export function SignInForm({ onSignedIn }: { onSignedIn: () => void }) {
       <form onSubmit={submit} noValidate aria-label={t('signIn.title')}>
         <Stack>
           {signIn.isError ? <ErrorAlert>{describeError(signIn.error)}</ErrorAlert> : null}
-          <TextField
+          <EmailField
             label={t('signIn.email')}
-            type="email"
             name="email"
             autoComplete="username"
-            inputMode="email"
             required
             value={email}
             onChange={(event) => setEmail(event.target.value)}
           />
-          <TextField
+          <PasswordField
             label={t('signIn.password')}
-            type="password"
             name="password"
-            autoComplete="current-password"
             required
             value={password}
             onChange={(event) => setPassword(event.target.value)}

@@ -4,6 +4,7 @@ import { CERTIFICATION_ACTIONS, type CertificationAction, type DefectResponse } 
 import { ErrorAlert, Notice } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { FieldError, TextField } from '@/components/ui/field';
+import { RadioGroup } from '@/components/ui/radio-group';
 import { SignaturePad } from '@/components/ui/signature-pad';
 import { describeError, fieldErrors } from '@/lib/errors';
 import { useRepairDefect } from '@/lib/api/defects';
@@ -53,32 +54,18 @@ export function RepairForm({
   };
 
   const actionError = say(problems.action) ?? server.action;
-  const legendId = `${id}-action`;
 
   return (
     <form onSubmit={submit} noValidate className="mt-4 flex flex-col gap-tap-gap" data-testid="repair-form">
-      <fieldset aria-describedby={actionError ? `${legendId}-error` : undefined}>
-        <legend className="mb-2 text-xl font-bold">{t('mechanic.form.action')}</legend>
-        <div className="flex flex-wrap gap-tap-gap">
-          {actions.map((action) => (
-            <label
-              key={action}
-              className="flex min-h-tap cursor-pointer items-center gap-2 rounded-lg border-2 border-line bg-surface px-4 has-[:checked]:border-4 has-[:checked]:border-primary"
-            >
-              <input
-                type="radio"
-                name={`${id}-action`}
-                value={action}
-                checked={draft.action === action}
-                onChange={() => update({ action })}
-                className="size-6"
-              />
-              <span className="font-bold">{t(`mechanic.actions.${action}`)}</span>
-            </label>
-          ))}
-        </div>
-        <FieldError id={`${legendId}-error`} message={actionError} />
-      </fieldset>
+      <RadioGroup
+        legend={t('mechanic.form.action')}
+        name={`${id}-action`}
+        choices={actions}
+        labelOf={(action) => t(`mechanic.actions.${action}`)}
+        value={draft.action}
+        onChange={(action) => update({ action })}
+        error={actionError}
+      />
       {defect.safety ? <Notice>{t('mechanic.form.noDeferral')}</Notice> : null}
 
       <div className="flex flex-col gap-1">

@@ -1,7 +1,7 @@
 import { useTranslation } from 'react-i18next';
-import { INSPECTION_KINDS, type InspectionKind, type InspectionListFilters } from '@yardcall/shared';
+import { INSPECTION_KINDS, type InspectionListFilters } from '@yardcall/shared';
 import { Button } from '@/components/ui/button';
-import { CheckboxField, SelectField, TextField } from '@/components/ui/field';
+import { CheckboxField, ChoiceField, TextField } from '@/components/ui/field';
 import { driversOf, useUsers } from '@/lib/api/users';
 import { byUnitNumber, useVehicles } from '@/lib/api/vehicles';
 
@@ -13,6 +13,8 @@ export interface InspectionFiltersProps {
   onChange: (patch: FilterPatch) => void;
   onClear: () => void;
 }
+
+const DATE_EDGES = ['from', 'to'] as const;
 
 // Each change applies at once (and lands in the address); no separate "apply" step.
 export function InspectionFilters({ filters, onChange, onClear }: InspectionFiltersProps) {
@@ -31,64 +33,49 @@ export function InspectionFilters({ filters, onChange, onClear }: InspectionFilt
       onSubmit={(event) => event.preventDefault()}
       data-testid="inspection-filters"
     >
-      <SelectField
+      <ChoiceField
         label={t('inspections.filters.unit')}
         value={filters.vehicleId ?? ''}
-        onChange={(event) => set('vehicleId', event.target.value)}
+        onPick={(vehicleId) => set('vehicleId', vehicleId)}
+        anyLabel={t('inspections.filters.anyUnit')}
+        choices={(units.data ?? []).map((vehicle) => ({
+          value: vehicle.id,
+          label: t('inspections.filters.unitOption', {
+            unit: vehicle.unitNumber,
+            kind: t(`vehicles.kinds.${vehicle.kind}`),
+          }),
+        }))}
         data-testid="filter-unit"
-      >
-        <option value="">{t('inspections.filters.anyUnit')}</option>
-        {(units.data ?? []).map((vehicle) => (
-          <option key={vehicle.id} value={vehicle.id}>
-            {t('inspections.filters.unitOption', {
-              unit: vehicle.unitNumber,
-              kind: t(`vehicles.kinds.${vehicle.kind}`),
-            })}
-          </option>
-        ))}
-      </SelectField>
-      <SelectField
+      />
+      <ChoiceField
         label={t('inspections.filters.driver')}
         value={filters.driverId ?? ''}
-        onChange={(event) => set('driverId', event.target.value)}
+        onPick={(driverId) => set('driverId', driverId)}
+        anyLabel={t('inspections.filters.anyDriver')}
+        choices={(drivers.data ?? []).map((driver) => ({ value: driver.id, label: driver.name }))}
         data-testid="filter-driver"
-      >
-        <option value="">{t('inspections.filters.anyDriver')}</option>
-        {(drivers.data ?? []).map((driver) => (
-          <option key={driver.id} value={driver.id}>
-            {driver.name}
-          </option>
-        ))}
-      </SelectField>
-      <SelectField
+      />
+      <ChoiceField
         label={t('inspections.filters.kind')}
         value={filters.kind ?? ''}
-        onChange={(event) => set('kind', (event.target.value || undefined) as InspectionKind | undefined)}
+        onPick={(kind) => set('kind', kind)}
+        anyLabel={t('inspections.filters.anyKind')}
+        choices={INSPECTION_KINDS.map((kind) => ({ value: kind, label: t(`inspections.kinds.${kind}`) }))}
         data-testid="filter-kind"
-      >
-        <option value="">{t('inspections.filters.anyKind')}</option>
-        {INSPECTION_KINDS.map((kind) => (
-          <option key={kind} value={kind}>
-            {t(`inspections.kinds.${kind}`)}
-          </option>
-        ))}
-      </SelectField>
-      <TextField
-        type="date"
-        label={t('inspections.filters.from')}
-        value={filters.from ?? ''}
-        max={filters.to}
-        onChange={(event) => set('from', event.target.value)}
-        data-testid="filter-from"
       />
-      <TextField
-        type="date"
-        label={t('inspections.filters.to')}
-        value={filters.to ?? ''}
-        min={filters.from}
-        onChange={(event) => set('to', event.target.value)}
-        data-testid="filter-to"
-      />
+      {DATE_EDGES.map((edge) => (
+        <TextField
+          key={edge}
+          type="date"
+          label={t(`inspections.filters.${edge}`)}
+          value={filters[edge] ?? ''}
+          // The range cannot turn over: "from" ends at "to", "to" starts at "from".
+          max={edge === 'from' ? filters.to : undefined}
+          min={edge === 'to' ? filters.from : undefined}
+          onChange={(event) => set(edge, event.target.value)}
+          data-testid={`filter-${edge}`}
+        />
+      ))}
       <div className="flex flex-col justify-end gap-1">
         <CheckboxField
           label={t('inspections.filters.hasDefects')}

@@ -8,6 +8,7 @@ import {
 } from '@yardcall/shared';
 import { ErrorAlert, Notice } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
+import { RadioGroup } from '@/components/ui/radio-group';
 import { Section } from '@/components/ui/layout';
 import { describeError } from '@/lib/errors';
 import { usePutReview } from '@/lib/api/training';
@@ -102,32 +103,19 @@ export function AttemptReview({ attempt }: { attempt: TrainingAttemptResponse })
         </Section>
         {attempt.status === 'finished' ? (
           <Section title={t('training.review.overall')} id="attempt-grade">
-            <fieldset
-              className="mb-4 flex flex-col gap-2"
-              aria-describedby={gradeError ? 'grade-error' : undefined}
+            <RadioGroup
+              legend={t('training.review.grade')}
+              legendSize="plain"
+              look="list"
+              name="grade"
+              choices={TRAINING_GRADES}
+              labelOf={(value) => t(`training.grade.${value}`)}
+              value={grade}
+              onChange={setGrade}
+              error={gradeError ?? undefined}
+              className="mb-4"
               data-testid="review-grade"
-            >
-              <legend className="mb-2 font-bold">{t('training.review.grade')}</legend>
-              {TRAINING_GRADES.map((value) => (
-                <label key={value} className="inline-flex min-h-tap cursor-pointer items-center gap-3">
-                  <input
-                    type="radio"
-                    name="grade"
-                    value={value}
-                    checked={grade === value}
-                    onChange={() => setGrade(value)}
-                    className="size-6"
-                  />
-                  {t(`training.grade.${value}`)}
-                </label>
-              ))}
-              {gradeError ? (
-                <p id="grade-error" className="font-bold text-danger">
-                  <span aria-hidden="true">⚠ </span>
-                  {gradeError}
-                </p>
-              ) : null}
-            </fieldset>
+            />
             <div className="mb-4 flex flex-col gap-1">
               <label htmlFor="review-comment" className="font-bold">
                 {t('training.review.comment')}

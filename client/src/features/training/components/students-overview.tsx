@@ -1,7 +1,7 @@
 import { useTranslation } from 'react-i18next';
 import { Link } from 'react-router';
 import { ErrorAlert, Loading } from '@/components/ui/alert';
-import { EmptyState } from '@/components/ui/layout';
+import { EmptyState, PersonItem } from '@/components/ui/layout';
 import { describeError } from '@/lib/errors';
 import { useAttempts } from '@/lib/api/training';
 import { formatPercent } from './format';
@@ -34,13 +34,7 @@ export function StudentsOverview({
         const latest = own.find((a) => a.coverage !== null);
         const waiting = own.filter((a) => a.status === 'finished' && !a.reviewedAt).length;
         return (
-          <li
-            key={student.id}
-            className="rounded-xl border-2 border-line bg-surface p-4"
-            data-testid="training-student"
-          >
-            <p className="text-xl font-bold">{student.name}</p>
-            <p className="text-muted">{student.email}</p>
+          <PersonItem key={student.id} person={student} data-testid="training-student">
             <p>
               {own.length === 0
                 ? t('training.students.noAttempts')
@@ -54,7 +48,7 @@ export function StudentsOverview({
                 </Link>
               </p>
             ) : null}
-          </li>
+          </PersonItem>
         );
       })}
     </ul>

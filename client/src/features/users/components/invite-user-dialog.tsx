@@ -1,13 +1,14 @@
 import { useState, type FormEvent } from 'react';
 import { Dialog, DialogBackdrop, DialogPanel, DialogTitle } from '@headlessui/react';
 import { useTranslation } from 'react-i18next';
-import { ROLES, type Role } from '@yardcall/shared';
+import type { Role } from '@yardcall/shared';
 import { ErrorAlert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
-import { CheckboxField, SelectField, TextField } from '@/components/ui/field';
+import { CheckboxField, EmailField, TextField } from '@/components/ui/field';
 import { Stack } from '@/components/ui/layout';
 import { describeError, fieldErrors } from '@/lib/errors';
 import { useInviteUser } from '@/lib/api/users';
+import { RoleField } from './role-field';
 
 const EMAIL_PATTERN = /^[^\s@]+@[^\s@]+\.[^\s@]+$/;
 
@@ -66,9 +67,8 @@ export function InviteUserDialog({
           <form onSubmit={submit} noValidate>
             <Stack>
               {invite.isError ? <ErrorAlert>{describeError(invite.error)}</ErrorAlert> : null}
-              <TextField
+              <EmailField
                 label={t('users.fields.email')}
-                type="email"
                 autoComplete="off"
                 value={email}
                 error={errors.email}
@@ -81,18 +81,7 @@ export function InviteUserDialog({
                 error={errors.name}
                 onChange={(event) => setName(event.target.value)}
               />
-              <SelectField
-                label={t('users.fields.role')}
-                value={role}
-                error={errors.role}
-                onChange={(event) => setRole(ROLES.find((value) => value === event.target.value) ?? role)}
-              >
-                {ROLES.map((value) => (
-                  <option key={value} value={value}>
-                    {t(`roles.${value}`)}
-                  </option>
-                ))}
-              </SelectField>
+              <RoleField label={t('users.fields.role')} value={role} error={errors.role} onChange={setRole} />
               {role === 'driver' ? (
                 <CheckboxField
                   label={t('users.fields.isStudent')}

@@ -1,12 +1,12 @@
 import { useState } from 'react';
 import { useTranslation } from 'react-i18next';
-import { ROLES, type Role, type UserSummary } from '@yardcall/shared';
+import type { Role, UserSummary } from '@yardcall/shared';
 import { ErrorAlert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
-import { SelectField } from '@/components/ui/field';
-import { EmptyState } from '@/components/ui/layout';
+import { EmptyState, PersonItem } from '@/components/ui/layout';
 import { describeError } from '@/lib/errors';
 import { useUpdateUser } from '@/lib/api/users';
+import { RoleField } from './role-field';
 
 function RoleChanger({ user, isSelf }: { user: UserSummary; isSelf: boolean }) {
   const { t } = useTranslation();
@@ -16,19 +16,13 @@ function RoleChanger({ user, isSelf }: { user: UserSummary; isSelf: boolean }) {
     <div className="flex flex-col gap-2">
       <div className="flex flex-wrap items-end gap-tap-gap">
         <div className="min-w-48 flex-1">
-          <SelectField
+          <RoleField
             label={t('users.fields.roleOf', { name: user.name })}
             value={role}
             // An admin cannot demote themself and lock the organisation out.
             disabled={isSelf}
-            onChange={(event) => setRole(ROLES.find((value) => value === event.target.value) ?? role)}
-          >
-            {ROLES.map((value) => (
-              <option key={value} value={value}>
-                {t(`roles.${value}`)}
-              </option>
-            ))}
-          </SelectField>
+            onChange={setRole}
+          />
         </div>
         {role !== user.role ? (
           <Button busy={update.isPending} onClick={() => update.mutate({ id: user.id, body: { role } })}>
@@ -48,19 +42,13 @@ export function UserList({ users, currentUserId }: { users: UserSummary[]; curre
   return (
     <ul className="grid grid-cols-1 gap-tap-gap lg:grid-cols-2" aria-label={t('users.list.label')}>
       {users.map((user) => (
-        <li
-          key={user.id}
-          className="flex min-w-0 flex-col gap-2 rounded-xl border-2 border-line bg-surface p-4"
-          data-testid="user-row"
-        >
-          <p className="text-xl font-bold">{user.name}</p>
-          <p className="text-muted">{user.email}</p>
+        <PersonItem key={user.id} person={user} className="flex min-w-0 flex-col gap-2" data-testid="user-row">
           <p>
             {user.status === 'invited' ? t('users.status.invited') : t('users.status.active')}
             {user.isStudent ? ` · ${t('users.fields.student')}` : ''}
           </p>
           <RoleChanger user={user} isSelf={user.id === currentUserId} />
-        </li>
+        </PersonItem>
       ))}
     </ul>
   );

@@ -2,6 +2,7 @@ import { useTranslation } from 'react-i18next';
 import { Link } from 'react-router';
 import type { FleetBoard as FleetBoardData, FleetBoardVehicle } from '@yardcall/shared';
 import { ErrorAlert, Loading } from '@/components/ui/alert';
+import { Panel } from '@/components/ui/layout';
 import { LinkButton } from '@/components/ui/link-button';
 import { describeError } from '@/lib/errors';
 import { useFleetBoard } from '@/lib/api/fleet';
@@ -74,14 +75,7 @@ function TodaySummary({ board, format }: { board: FleetBoardData; format: ZonedF
   // Noon of the board's day, so the date reads the same in any zone.
   const day = format.date(`${board.day}T12:00:00Z`);
   return (
-    <section
-      aria-labelledby="board-today-title"
-      className="rounded-xl border-2 border-line bg-surface p-4"
-      data-testid="board-today-summary"
-    >
-      <h3 id="board-today-title" className="text-xl font-bold">
-        {t('board.todayTitle', { day })}
-      </h3>
+    <Panel title={t('board.todayTitle', { day })} level={3} data-testid="board-today-summary">
       <p className="text-lg">
         {t('board.todaySummary', {
           preTrip,
@@ -92,7 +86,7 @@ function TodaySummary({ board, format }: { board: FleetBoardData; format: ZonedF
       </p>
       <p className="text-sm text-muted">{t('board.usedMeans')}</p>
       <p className="text-sm text-muted">{t('board.todayZone', { zone: board.timeZone })}</p>
-    </section>
+    </Panel>
   );
 }
 

@@ -6,6 +6,7 @@ import { isPowerUnit, type InspectionKind, type PendingAcknowledgement, type Veh
 import { ErrorAlert, Loading } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { PageHeading, Section } from '@/components/ui/layout';
+import { RadioGroup } from '@/components/ui/radio-group';
 import { ApiError, NETWORK_ERROR_STATUS } from '@/lib/api-client';
 import { describeError } from '@/lib/errors';
 import { isLocale } from '@/lib/i18n';
@@ -208,27 +209,15 @@ export function StartWalkaround({ renderPicker, vehicles }: StartWalkaroundProps
         </Section>
       ) : (
         <>
-          <fieldset className="mb-6">
-            <legend className="mb-2 text-xl font-bold">{t('walkaround.start.kind')}</legend>
-            <div className="flex flex-wrap gap-tap-gap">
-              {START_KINDS.map((k) => (
-                <label
-                  key={k}
-                  className="flex min-h-tap cursor-pointer items-center gap-2 rounded-lg border-2 border-line bg-surface px-4 has-[:checked]:border-4 has-[:checked]:border-primary"
-                >
-                  <input
-                    type="radio"
-                    name="inspection-kind"
-                    value={k}
-                    checked={kind === k}
-                    onChange={() => setKind(k)}
-                    className="size-6"
-                  />
-                  <span className="font-bold">{t(`walkaround.kinds.${k}`)}</span>
-                </label>
-              ))}
-            </div>
-          </fieldset>
+          <RadioGroup
+            legend={t('walkaround.start.kind')}
+            name="inspection-kind"
+            choices={START_KINDS}
+            labelOf={(k) => t(`walkaround.kinds.${k}`)}
+            value={kind}
+            onChange={setKind}
+            className="mb-6"
+          />
           <Section title={t('walkaround.start.powerUnit')} id="start-vehicles">
             {renderPicker(pickPowerUnit)}
           </Section>
