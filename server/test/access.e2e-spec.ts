@@ -1,16 +1,6 @@
 import { ROLES, type Role, type UserSummary, type VehicleResponse } from '@yardcall/shared';
 import request from 'supertest';
-import {
-  bearer,
-  login,
-  OTHER_ORG_ADMIN,
-  ROLE_EMAILS,
-  startApp,
-  tokensByRole,
-  type TestApp,
-  errorBody,
-  bodyOf,
-} from './helpers';
+import { bearer, bodyOf, errorBody, login, OTHER_ORG_ADMIN, ROLE_EMAILS, suiteApp } from './helpers';
 
 const NOWHERE_ID = '00000000-0000-4000-8000-000000000000';
 
@@ -76,13 +66,10 @@ interface OpenApiDocument {
 }
 
 describe('access control', () => {
-  let t: TestApp;
-  let tokens: Record<Role, string>;
+  const { t, tokens } = suiteApp();
   let params: Record<string, string>;
 
   beforeAll(async () => {
-    t = await startApp();
-    tokens = await tokensByRole(t.url);
     const vehicles = (await request(t.url).get('/api/vehicles').set(bearer(tokens.driver))).body as VehicleResponse[];
     const me = (await request(t.url).get('/api/auth/me').set(bearer(tokens.driver))).body as UserSummary;
     params = { '/api/users/{id}': me.id, '/api/vehicles/{id}': vehicles[0]!.id, token: 'not-a-real-invitation-token' };
@@ -113,9 +100,6 @@ describe('access control', () => {
     ]) {
       params[path] = NOWHERE_ID;
     }
-  });
-  afterAll(async () => {
-    await t.close();
   });
 
   function concretePath(row: RouteRow): string {
@@ -179,17 +163,11 @@ describe('access control', () => {
 });
 
 describe('organisation scoping', () => {
-  let t: TestApp;
-  let own: Record<Role, string>;
+  const { t, tokens: own } = suiteApp();
   let otherAdmin: string;
 
   beforeAll(async () => {
-    t = await startApp();
-    own = await tokensByRole(t.url);
     otherAdmin = (await login(t.url, OTHER_ORG_ADMIN)).accessToken;
-  });
-  afterAll(async () => {
-    await t.close();
   });
 
   it("answers 404 for another organisation's vehicle, as if it did not exist", async () => {

@@ -1,5 +1,5 @@
-import type { ChecklistItem, FleetBoard, ResultUpsert, Role } from '@yardcall/shared';
-import { randomInt, randomUUID } from 'node:crypto';
+import type { ChecklistItem, FleetBoard, ResultUpsert } from '@yardcall/shared';
+import { randomUUID } from 'node:crypto';
 import request from 'supertest';
 import {
   answerAndSubmit,
@@ -9,27 +9,18 @@ import {
   OTHER_ORG_ADMIN,
   signIn,
   startInspection,
-  startApp,
-  tokensByRole,
+  suiteApp,
   tractorRequest,
   trailerRequest,
-  type TestApp,
+  unitNumber,
 } from './helpers';
 
-const unit = (prefix: string) => `${prefix}-${randomInt(10_000, 99_999)}`;
-
 describe('fleet board', () => {
-  let t: TestApp;
-  let tokens: Record<Role, string>;
+  const { t, tokens } = suiteApp();
   let otherAdmin: string;
 
   beforeAll(async () => {
-    t = await startApp();
-    tokens = await tokensByRole(t.url);
     otherAdmin = await signIn(t.url, OTHER_ORG_ADMIN);
-  });
-  afterAll(async () => {
-    await t.close();
   });
 
   // A whole walk-around answered 6 s apart, `defects` answered as defects, then signed.
@@ -50,8 +41,8 @@ describe('fleet board', () => {
   }
 
   it('shows each vehicle with its status, since when and why it is out of service, and its last report', async () => {
-    const tractor = await createVehicle(t.url, tokens.admin, tractorRequest(unit('FB')));
-    const trailer = await createVehicle(t.url, tokens.admin, trailerRequest(unit('FT')));
+    const tractor = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('FB')));
+    const trailer = await createVehicle(t.url, tokens.admin, trailerRequest(unitNumber('FT')));
     const report = await walkAround([tractor.id, trailer.id], (items) =>
       items.filter((i) => i.safety && i.unitIndex === 0 && i.expects.type === 'check').slice(0, 2),
     );
@@ -97,9 +88,9 @@ describe('fleet board', () => {
       request(t.url).patch('/api/organizations/time-zone').set(bearer(tokens.admin)).send({ timeZone: name });
     expect((await zone(timeZone)).status).toBe(200);
     try {
-      const checked = await createVehicle(t.url, tokens.admin, tractorRequest(unit('FD')));
-      const used = await createVehicle(t.url, tokens.admin, tractorRequest(unit('FU')));
-      const idle = await createVehicle(t.url, tokens.admin, tractorRequest(unit('FI')));
+      const checked = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('FD')));
+      const used = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('FU')));
+      const idle = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('FI')));
       const quickly = async (vehicleId: string, kind: 'pre_trip' | 'en_route') => {
         const started = await startInspection(t.url, tokens.driver, {
           vehicleIds: [vehicleId],
@@ -147,7 +138,7 @@ describe('fleet board', () => {
   });
 
   it('is the same for a mechanic and an admin, and a vehicle never inspected has no last report', async () => {
-    const fresh = await createVehicle(t.url, tokens.admin, tractorRequest(unit('FN')));
+    const fresh = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('FN')));
     for (const role of ['mechanic', 'admin'] as const) {
       const board = bodyOf<FleetBoard>(await request(t.url).get('/api/fleet/board').set(bearer(tokens[role])));
       expect(board.vehicles.find((v) => v.id === fresh.id)).toMatchObject({

@@ -5,11 +5,10 @@ import {
   type InspectionPage,
   type InspectionResponse,
   type ResultUpsert,
-  type Role,
   type UserSummary,
   type VehicleResponse,
 } from '@yardcall/shared';
-import { randomInt, randomUUID } from 'node:crypto';
+import { randomUUID } from 'node:crypto';
 import request from 'supertest';
 import { DEMO_PASSWORD } from '../src/database/seed-data';
 import {
@@ -21,17 +20,15 @@ import {
   errorBody,
   postInspection,
   ROLE_EMAILS,
-  startApp,
   startInspection,
-  tokensByRole,
+  suiteApp,
   tractorRequest,
-  type TestApp,
+  unitNumber,
 } from './helpers';
 import { pdfText } from './pdf-text';
 
 const HOUR = 3_600_000;
 const DAY = 24 * HOUR;
-const unit = (prefix: string) => `${prefix}-${randomInt(10_000, 99_999)}`;
 
 // A 400 naming exactly one field, with a message that says what is wrong with it.
 function expectOnlyField(response: request.Response, field: string, says: RegExp): void {
@@ -41,16 +38,7 @@ function expectOnlyField(response: request.Response, field: string, says: RegExp
 }
 
 describe('hardening', () => {
-  let t: TestApp;
-  let tokens: Record<Role, string>;
-
-  beforeAll(async () => {
-    t = await startApp();
-    tokens = await tokensByRole(t.url);
-  });
-  afterAll(async () => {
-    await t.close();
-  });
+  const { t, tokens } = suiteApp();
 
   const vehicle = (id: string) => request(t.url).get(`/api/vehicles/${id}`).set(bearer(tokens.supervisor));
   const patchVehicle = (id: string, body: object, token = tokens.supervisor) =>
@@ -86,7 +74,7 @@ describe('hardening', () => {
 
   describe('the out-of-service hold', () => {
     it('refuses to put a unit with an open safety defect back in service by hand, saying why', async () => {
-      const tractor = await createVehicle(t.url, tokens.admin, tractorRequest(unit('HD')));
+      const tractor = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('HD')));
       const report = await reportSafetyDefect(tractor.id);
       for (const token of [tokens.supervisor, tokens.admin]) {
         const lifted = await patchVehicle(tractor.id, { status: 'in_service' }, token);
@@ -104,7 +92,7 @@ describe('hardening', () => {
     });
 
     it('lets a supervisor take a unit out of service by hand only with a reason, shown on the fleet board', async () => {
-      const tractor = await createVehicle(t.url, tokens.admin, tractorRequest(unit('HH')));
+      const tractor = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('HH')));
       const bare = await patchVehicle(tractor.id, { status: 'out_of_service' });
       expect(bare.status).toBe(400);
       expectOnlyField(bare, 'statusReason', /Say why/);
@@ -129,7 +117,7 @@ describe('hardening', () => {
     });
 
     it('keeps a hold put by hand when the defects are certified, and a new unit out of service needs a reason', async () => {
-      const tractor = await createVehicle(t.url, tokens.admin, tractorRequest(unit('HB')));
+      const tractor = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('HB')));
       const report = await reportSafetyDefect(tractor.id);
       const held = await patchVehicle(tractor.id, {
         status: 'out_of_service',
@@ -144,7 +132,7 @@ describe('hardening', () => {
       const created = await request(t.url)
         .post('/api/vehicles')
         .set(bearer(tokens.admin))
-        .send(tractorRequest(unit('HN'), { status: 'out_of_service' }));
+        .send(tractorRequest(unitNumber('HN'), { status: 'out_of_service' }));
       expect(created.status).toBe(400);
       expect(errorBody(created).fields?.[0]?.field).toBe('statusReason');
     });
@@ -153,7 +141,7 @@ describe('hardening', () => {
   describe('plausible times', () => {
     let tractorId: string;
     beforeAll(async () => {
-      tractorId = (await createVehicle(t.url, tokens.admin, tractorRequest(unit('TM')))).id;
+      tractorId = (await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('TM')))).id;
     });
 
     it(`refuses a start in the future or more than ${OFFLINE_WINDOW_DAYS} days ago, naming startedAt`, async () => {
@@ -218,7 +206,7 @@ describe('hardening', () => {
 
   describe('body size', () => {
     it("accepts a 500-answer batch with every text at its longest, the API's own maximum", async () => {
-      const tractor = await createVehicle(t.url, tokens.admin, tractorRequest(unit('BL')));
+      const tractor = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('BL')));
       const started = await startInspection(t.url, tokens.driver, {
         vehicleIds: [tractor.id],
         startedAt: new Date(Date.now() - HOUR).toISOString(),
@@ -246,7 +234,7 @@ describe('hardening', () => {
     });
 
     it('accepts a signature drawing of 150,000 characters', async () => {
-      const tractor = await createVehicle(t.url, tokens.admin, tractorRequest(unit('SG')));
+      const tractor = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('SG')));
       const started = await startInspection(t.url, tokens.driver, {
         vehicleIds: [tractor.id],
         startedAt: new Date(Date.now() - HOUR).toISOString(),
@@ -336,7 +324,7 @@ describe('hardening', () => {
         .patch('/api/organizations/time-zone')
         .set(bearer(tokens.admin))
         .send({ timeZone: 'America/Chicago' });
-      const tractor = await createVehicle(t.url, tokens.admin, tractorRequest(unit('TZ')));
+      const tractor = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('TZ')));
       // 02:30 UTC yesterday: still the day before in Chicago (UTC-6 or -5).
       const utcDay = new Date(Date.now() - DAY).toISOString().slice(0, 10);
       const startedAt = `${utcDay}T02:30:00.000Z`;
@@ -378,7 +366,7 @@ describe('hardening', () => {
     });
 
     it('refuses NUL characters and unpaired surrogates in nested text, naming the field', async () => {
-      const tractor = await createVehicle(t.url, tokens.admin, tractorRequest(unit('NU')));
+      const tractor = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('NU')));
       const started = await startInspection(t.url, tokens.driver, {
         vehicleIds: [tractor.id],
         startedAt: new Date(Date.now() - HOUR).toISOString(),

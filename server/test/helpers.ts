@@ -10,7 +10,7 @@ import {
   type VehicleResponse,
 } from '@yardcall/shared';
 import { sampleTractor, sampleTrailer } from '@yardcall/shared/testing';
-import { randomUUID } from 'node:crypto';
+import { randomInt, randomUUID } from 'node:crypto';
 import type { AddressInfo } from 'node:net';
 import request from 'supertest';
 import { DataSource } from 'typeorm';
@@ -54,6 +54,33 @@ export async function startApp(): Promise<TestApp> {
     dataSource: app.get(DataSource),
     close: () => app.close(),
   };
+}
+
+export interface SuiteApp {
+  t: TestApp;
+  tokens: Record<Role, string>;
+}
+
+// A suite's app: started before its tests with a token for each demo role, and closed after them (after
+// `putBack`, for a suite that changes demo data the suites after it read). Both objects are filled in by
+// beforeAll, so tests read t.url and tokens.driver; a suite's own beforeAll runs after this one.
+export function suiteApp(putBack?: () => PromiseLike<unknown>): SuiteApp {
+  const t = {} as TestApp;
+  const tokens = {} as Record<Role, string>;
+  beforeAll(async () => {
+    Object.assign(t, await startApp());
+    Object.assign(tokens, await tokensByRole(t.url));
+  });
+  afterAll(async () => {
+    await putBack?.();
+    await t.close();
+  });
+  return { t, tokens };
+}
+
+// A unit number of the test's own, so suites sharing the database never collide.
+export function unitNumber(prefix: string): string {
+  return `${prefix}-${randomInt(10_000, 99_999)}`;
 }
 
 export async function login(url: string, email: string, password = DEMO_PASSWORD): Promise<LoginResponse> {
@@ -126,6 +153,22 @@ export async function startInspection(url: string, token: string, start: Inspect
   return bodyOf<InspectionResponse>(response);
 }
 
+// PUT a batch of answers of a walk-around, which the server must take.
+export async function putAnswers(url: string, token: string, inspectionId: string, results: ResultUpsert[]) {
+  const put = await request(url).put(`/api/inspections/${inspectionId}/results`).set(bearer(token)).send({ results });
+  expect(put.status).toBe(200);
+}
+
+// Signs and submits a walk-around as the demo driver: the report as the server keeps it.
+export async function signAndSubmit(url: string, token: string, inspectionId: string): Promise<InspectionResponse> {
+  const submitted = await request(url)
+    .post(`/api/inspections/${inspectionId}/submit`)
+    .set(bearer(token))
+    .send({ signature: { name: 'Dana Okafor' } });
+  expect(submitted.status).toBe(200);
+  return bodyOf<InspectionResponse>(submitted);
+}
+
 // Sends a walk-around's answers, then signs and submits it: the report as the server keeps it.
 export async function answerAndSubmit(
   url: string,
@@ -133,12 +176,6 @@ export async function answerAndSubmit(
   inspectionId: string,
   results: ResultUpsert[],
 ): Promise<InspectionResponse> {
-  const put = await request(url).put(`/api/inspections/${inspectionId}/results`).set(bearer(token)).send({ results });
-  expect(put.status).toBe(200);
-  const submitted = await request(url)
-    .post(`/api/inspections/${inspectionId}/submit`)
-    .set(bearer(token))
-    .send({ signature: { name: 'Dana Okafor' } });
-  expect(submitted.status).toBe(200);
-  return bodyOf<InspectionResponse>(submitted);
+  await putAnswers(url, token, inspectionId, results);
+  return signAndSubmit(url, token, inspectionId);
 }

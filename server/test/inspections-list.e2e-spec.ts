@@ -4,10 +4,9 @@ import type {
   InspectionPage,
   InspectionResponse,
   ResultUpsert,
-  Role,
   UserSummary,
 } from '@yardcall/shared';
-import { randomInt, randomUUID } from 'node:crypto';
+import { randomUUID } from 'node:crypto';
 import request from 'supertest';
 import {
   bearer,
@@ -17,13 +16,11 @@ import {
   SECOND_DRIVER,
   signIn,
   startInspection,
-  startApp,
-  tokensByRole,
+  suiteApp,
   tractorRequest,
-  type TestApp,
+  unitNumber,
 } from './helpers';
 
-const unit = (prefix: string) => `${prefix}-${randomInt(10_000, 99_999)}`;
 const MINUTE = 60_000;
 
 interface Walk {
@@ -40,8 +37,7 @@ interface Walk {
 }
 
 describe('the supervisor list: filters, sorts, keyset pages, CSV, and the detail timeline and flags', () => {
-  let t: TestApp;
-  let tokens: Record<Role, string>;
+  const { t, tokens } = suiteApp();
   let second: string;
   let vehicleId: string;
   const byName: Record<string, InspectionResponse> = {};
@@ -84,10 +80,8 @@ describe('the supervisor list: filters, sorts, keyset pages, CSV, and the detail
   const mudflap = (items: ChecklistItem[]) => [items.find((i) => !i.safety && i.expects.type === 'check')!];
 
   beforeAll(async () => {
-    t = await startApp();
-    tokens = await tokensByRole(t.url);
     second = await signIn(t.url, SECOND_DRIVER);
-    vehicleId = (await createVehicle(t.url, tokens.admin, tractorRequest(unit('LS')))).id;
+    vehicleId = (await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('LS')))).id;
     base = Date.now() - 60 * MINUTE;
     // Submitted in the order rushed, late, first, recurring; started in another order.
     // Both answered stop by stop: the rushed one at 3 s a stop, the late one at a quick but fair 10 s.
@@ -135,9 +129,6 @@ describe('the supervisor list: filters, sorts, keyset pages, CSV, and the detail
         return same;
       },
     });
-  });
-  afterAll(async () => {
-    await t.close();
   });
 
   async function page(query: string, token = tokens.supervisor): Promise<InspectionPage> {
@@ -230,7 +221,7 @@ describe('the supervisor list: filters, sorts, keyset pages, CSV, and the detail
   });
 
   it('pages exactly when start times differ only in microseconds', async () => {
-    const vehicle = (await createVehicle(t.url, tokens.admin, tractorRequest(unit('LM')))).id;
+    const vehicle = (await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('LM')))).id;
     const ids: string[] = [];
     for (let n = 0; n < 4; n += 1) {
       ids.push((await startInspection(t.url, tokens.driver, { vehicleIds: [vehicle], kind: 'post_trip' })).id);

@@ -6,12 +6,11 @@ import type {
   PendingAcknowledgement,
   PutResultsResponse,
   ResultUpsert,
-  Role,
   SignatureResponse,
   VehicleRequest,
   VehicleResponse,
 } from '@yardcall/shared';
-import { randomInt, randomUUID } from 'node:crypto';
+import { randomUUID } from 'node:crypto';
 import request from 'supertest';
 import {
   bearer,
@@ -22,15 +21,13 @@ import {
   postInspection,
   SECOND_DRIVER,
   signIn,
-  startApp,
-  tokensByRole,
+  suiteApp,
   tractorRequest,
   trailerRequest,
-  type TestApp,
+  unitNumber,
 } from './helpers';
 
 // A unit number free in this run, so the suite also passes against a database kept from an earlier run.
-const unit = (prefix: string) => `${prefix}-${randomInt(10_000, 99_999)}`;
 
 const steerTread = (items: ChecklistItem[]) =>
   items.find(
@@ -39,8 +36,7 @@ const steerTread = (items: ChecklistItem[]) =>
 const nonSafetyCheck = (items: ChecklistItem[]) => items.find((i) => !i.safety && i.expects.type === 'check')!;
 
 describe('inspections and defects', () => {
-  let t: TestApp;
-  let tokens: Record<Role, string>;
+  const { t, tokens } = suiteApp();
   let secondDriver: string;
   let otherAdmin: string;
   // Each walk-around starts a minute after the one before, so lists have a known order.
@@ -49,13 +45,8 @@ describe('inspections and defects', () => {
   const nextStart = () => new Date((clock += 60_000)).toISOString();
 
   beforeAll(async () => {
-    t = await startApp();
-    tokens = await tokensByRole(t.url);
     secondDriver = await signIn(t.url, SECOND_DRIVER);
     otherAdmin = await signIn(t.url, OTHER_ORG_ADMIN);
-  });
-  afterAll(async () => {
-    await t.close();
   });
 
   const addVehicle = (body: VehicleRequest) => createVehicle(t.url, tokens.admin, body);
@@ -89,6 +80,24 @@ describe('inspections and defects', () => {
       .send({ signature: { name: 'Dana Okafor', drawing: 'M10 10 L40 20' }, odometer: 412803 });
   }
 
+  // A walk-around of a new tractor with two defects answered a minute apart: the steer tire's tread read at
+  // `treadDepth` 32nds (a safety defect below 4/32), then a non-safety check reported.
+  async function withTwoDefects(prefix: string, treadDepth: number, oilAnswer: Partial<ResultUpsert> = {}) {
+    const power = await addVehicle(tractorRequest(unitNumber(prefix)));
+    const inspection = await started([power.id]);
+    const tread = steerTread(inspection.checklist.items);
+    const oil = nonSafetyCheck(inspection.checklist.items);
+    const at = Date.parse(inspection.startedAt);
+    const stored = await put(inspection.id, [
+      answer(tread, new Date(at + 60_000).toISOString(), {
+        measurement: { quantity: 'tread_depth', value: treadDepth, unit: 'in/32' },
+      }),
+      answer(oil, new Date(at + 120_000).toISOString(), { answer: 'defect', ...oilAnswer }),
+    ]);
+    expect(stored.status).toBe(200);
+    return { power, inspection, tread, oil, at };
+  }
+
   async function vehicle(id: string): Promise<VehicleResponse> {
     return bodyOf<VehicleResponse>(await request(t.url).get(`/api/vehicles/${id}`).set(bearer(tokens.admin)));
   }
@@ -101,8 +110,8 @@ describe('inspections and defects', () => {
   }
 
   it('builds the checklist from the power unit and trailer, and a retried create answers the same inspection', async () => {
-    const power = await addVehicle(tractorRequest(unit('IT')));
-    const van = await addVehicle(trailerRequest(unit('IV')));
+    const power = await addVehicle(tractorRequest(unitNumber('IT')));
+    const van = await addVehicle(trailerRequest(unitNumber('IV')));
     const clientId = randomUUID();
     const startedAt = nextStart();
     const first = await start([power.id, van.id], { clientId, startedAt });
@@ -125,7 +134,7 @@ describe('inspections and defects', () => {
   });
 
   it('keeps the checklist of an inspection when its vehicle is edited later', async () => {
-    const power = await addVehicle(tractorRequest(unit('IS')));
+    const power = await addVehicle(tractorRequest(unitNumber('IS')));
     const inspection = await started([power.id]);
     const config = tractorRequest('x').config;
     config.axles.push({ ...config.axles[1]!, position: 'drive' });
@@ -138,9 +147,9 @@ describe('inspections and defects', () => {
   });
 
   it('refuses a combination with the trailer first or two power units, with a sentence', async () => {
-    const power = await addVehicle(tractorRequest(unit('IC')));
-    const power2 = await addVehicle(tractorRequest(unit('ID')));
-    const van = await addVehicle(trailerRequest(unit('IW')));
+    const power = await addVehicle(tractorRequest(unitNumber('IC')));
+    const power2 = await addVehicle(tractorRequest(unitNumber('ID')));
+    const van = await addVehicle(trailerRequest(unitNumber('IW')));
     for (const ids of [
       [van.id, power.id],
       [power.id, power2.id],
@@ -162,7 +171,7 @@ describe('inspections and defects', () => {
   });
 
   it('stores the same batch sent twice as the same rows', async () => {
-    const power = await addVehicle(tractorRequest(unit('IB')));
+    const power = await addVehicle(tractorRequest(unitNumber('IB')));
     const inspection = await started([power.id]);
     const at = Date.parse(inspection.startedAt);
     const batch = inspection.checklist.items
@@ -179,7 +188,7 @@ describe('inspections and defects', () => {
   });
 
   it('keeps the latest answer of an item when batches arrive out of order', async () => {
-    const power = await addVehicle(tractorRequest(unit('IO')));
+    const power = await addVehicle(tractorRequest(unitNumber('IO')));
     const inspection = await started([power.id]);
     const item = nonSafetyCheck(inspection.checklist.items);
     const at = Date.parse(inspection.startedAt);
@@ -202,7 +211,7 @@ describe('inspections and defects', () => {
   });
 
   it("corrects a client verdict that contradicts the limit and names the limit's source", async () => {
-    const power = await addVehicle(tractorRequest(unit('IL')));
+    const power = await addVehicle(tractorRequest(unitNumber('IL')));
     const inspection = await started([power.id]);
     const item = steerTread(inspection.checklist.items);
     const at = new Date(Date.parse(inspection.startedAt) + 60_000).toISOString();
@@ -231,7 +240,7 @@ describe('inspections and defects', () => {
   });
 
   it('refuses item keys not on the checklist with a 400 naming them, and stores nothing of the batch', async () => {
-    const power = await addVehicle(tractorRequest(unit('IK')));
+    const power = await addVehicle(tractorRequest(unitNumber('IK')));
     const inspection = await started([power.id]);
     const at = new Date(Date.parse(inspection.startedAt) + 5000).toISOString();
     const good = answer(inspection.checklist.items[0]!, at);
@@ -253,7 +262,7 @@ describe('inspections and defects', () => {
   });
 
   it("answers 404 for another organisation's inspection and for another driver's", async () => {
-    const power = await addVehicle(tractorRequest(unit('IN')));
+    const power = await addVehicle(tractorRequest(unitNumber('IN')));
     const inspection = await started([power.id]);
     const other = await request(t.url).get(`/api/inspections/${inspection.id}`).set(bearer(otherAdmin));
     expect(other.status).toBe(404);
@@ -276,17 +285,7 @@ describe('inspections and defects', () => {
   });
 
   it('submits: signs, opens defects, takes the vehicle out of service, and then refuses every change with 409', async () => {
-    const power = await addVehicle(tractorRequest(unit('IU')));
-    const inspection = await started([power.id]);
-    const tread = steerTread(inspection.checklist.items);
-    const oil = nonSafetyCheck(inspection.checklist.items);
-    const at = Date.parse(inspection.startedAt);
-    await put(inspection.id, [
-      answer(tread, new Date(at + 60_000).toISOString(), {
-        measurement: { quantity: 'tread_depth', value: 3, unit: 'in/32' },
-      }),
-      answer(oil, new Date(at + 120_000).toISOString(), { answer: 'defect', detail: 'level low' }),
-    ]);
+    const { power, inspection, tread, oil, at } = await withTwoDefects('IU', 3, { detail: 'level low' });
     const response = await submit(inspection.id);
     expect(response.status).toBe(200);
     const report = bodyOf<InspectionResponse>(response);
@@ -320,17 +319,7 @@ describe('inspections and defects', () => {
   });
 
   it('certifies repairs: a deferral needs a reason and a future date, a safety defect cannot wait, and the last repair returns the vehicle to service', async () => {
-    const power = await addVehicle(tractorRequest(unit('IR')));
-    const inspection = await started([power.id]);
-    const tread = steerTread(inspection.checklist.items);
-    const oil = nonSafetyCheck(inspection.checklist.items);
-    const at = Date.parse(inspection.startedAt);
-    await put(inspection.id, [
-      answer(tread, new Date(at + 60_000).toISOString(), {
-        measurement: { quantity: 'tread_depth', value: 2, unit: 'in/32' },
-      }),
-      answer(oil, new Date(at + 120_000).toISOString(), { answer: 'defect' }),
-    ]);
+    const { power, inspection, tread, oil } = await withTwoDefects('IR', 2);
     const report = bodyOf<InspectionResponse>(await submit(inspection.id));
     const safety = report.defects.find((d) => d.itemKey === tread.key)!;
     const minor = report.defects.find((d) => d.itemKey === oil.key)!;
@@ -403,7 +392,7 @@ describe('inspections and defects', () => {
   });
 
   it("blocks the next pre-trip until a driver has reviewed and signed the last report's certified repairs", async () => {
-    const power = await addVehicle(tractorRequest(unit('IA')));
+    const power = await addVehicle(tractorRequest(unitNumber('IA')));
     const inspection = await started([power.id]);
     const tread = steerTread(inspection.checklist.items);
     await put(inspection.id, [
@@ -471,7 +460,7 @@ describe('inspections and defects', () => {
   });
 
   it('lists newest first with filters, and pages without duplicates or gaps', async () => {
-    const power = await addVehicle(tractorRequest(unit('IP')));
+    const power = await addVehicle(tractorRequest(unitNumber('IP')));
     const created: InspectionResponse[] = [];
     const tie = nextStart();
     for (let i = 0; i < 7; i += 1) {

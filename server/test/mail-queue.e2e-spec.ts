@@ -1,31 +1,20 @@
-import type { CaughtMail, ChecklistItem, InspectionResponse, ResultUpsert, Role } from '@yardcall/shared';
-import { randomInt, randomUUID } from 'node:crypto';
+import type { CaughtMail, ChecklistItem, ResultUpsert } from '@yardcall/shared';
+import { randomUUID } from 'node:crypto';
 import request from 'supertest';
 import { MailService } from '../src/mail/mail.service';
 import {
+  answerAndSubmit,
   bearer,
   bodyOf,
   createVehicle,
   startInspection,
-  startApp,
-  tokensByRole,
+  suiteApp,
   tractorRequest,
-  type TestApp,
+  unitNumber,
 } from './helpers';
 
-const unit = (prefix: string) => `${prefix}-${randomInt(10_000, 99_999)}`;
-
 describe('e-mail on safety defects, through the job queue', () => {
-  let t: TestApp;
-  let tokens: Record<Role, string>;
-
-  beforeAll(async () => {
-    t = await startApp();
-    tokens = await tokensByRole(t.url);
-  });
-  afterAll(async () => {
-    await t.close();
-  });
+  const { t, tokens } = suiteApp();
 
   async function submitWithDefects(vehicleId: string, pick: (items: ChecklistItem[]) => ChecklistItem[]) {
     const started = await startInspection(t.url, tokens.driver, { vehicleIds: [vehicleId] });
@@ -39,16 +28,7 @@ describe('e-mail on safety defects, through the job queue', () => {
         answeredAt: new Date().toISOString(),
         clientId: randomUUID(),
       }));
-    expect(
-      (await request(t.url).put(`/api/inspections/${started.id}/results`).set(bearer(tokens.driver)).send({ results }))
-        .status,
-    ).toBe(200);
-    const submitted = await request(t.url)
-      .post(`/api/inspections/${started.id}/submit`)
-      .set(bearer(tokens.driver))
-      .send({ signature: { name: 'Dana Okafor' } });
-    expect(submitted.status).toBe(200);
-    return bodyOf<InspectionResponse>(submitted);
+    return answerAndSubmit(t.url, tokens.driver, started.id, results);
   }
 
   it("holds the demo history's safety-defect e-mails from the boot, made again since the catcher keeps none", async () => {
@@ -86,7 +66,7 @@ describe('e-mail on safety defects, through the job queue', () => {
     const to = await recipients();
     const mechanics = await recipients('mechanic');
     expect(to.length).toBeGreaterThanOrEqual(2);
-    const vehicle = await createVehicle(t.url, tokens.admin, tractorRequest(unit('MQ')));
+    const vehicle = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('MQ')));
     // The loopback catcher refuses the next two messages about this unit, as a busy mail server would.
     t.app.get(MailService).failNextSends(2, vehicle.unitNumber);
     const report = await submitWithDefects(vehicle.id, (items) =>
@@ -138,7 +118,7 @@ describe('e-mail on safety defects, through the job queue', () => {
   });
 
   it('sends nothing for a report without a safety defect', async () => {
-    const vehicle = await createVehicle(t.url, tokens.admin, tractorRequest(unit('MN')));
+    const vehicle = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('MN')));
     const report = await submitWithDefects(vehicle.id, (items) =>
       items.filter((i) => !i.safety && i.expects.type === 'check').slice(0, 1),
     );

@@ -4,7 +4,6 @@ import {
   PHOTO_MAX_BYTES,
   type InspectionResponse,
   type PhotoResponse,
-  type Role,
   type VoiceNoteResponse,
 } from '@yardcall/shared';
 import { createHash, randomInt, randomUUID } from 'node:crypto';
@@ -21,33 +20,27 @@ import {
   OTHER_ORG_ADMIN,
   SECOND_DRIVER,
   signIn,
-  startApp,
   startInspection,
-  tokensByRole,
+  suiteApp,
   tractorRequest,
-  type TestApp,
 } from './helpers';
 import { makeOggOpusHead, makePng, makeWav } from './media-fixtures';
 
 const sha256 = (bytes: Buffer) => createHash('sha256').update(bytes).digest('hex');
 
 describe('voice notes and photos', () => {
-  let t: TestApp;
-  let tokens: Record<Role, string>;
+  const { t, tokens } = suiteApp();
   let otherAdmin: string;
   let inspection: InspectionResponse;
   let itemKey: string;
   const wav = makeWav(250);
 
   beforeAll(async () => {
-    t = await startApp();
-    tokens = await tokensByRole(t.url);
     otherAdmin = await signIn(t.url, OTHER_ORG_ADMIN);
     inspection = await newInspection();
     itemKey = inspection.checklist.items[0]!.key;
   });
   afterAll(async () => {
-    await t.close();
     await rm(dirname(NOTES_STORAGE_DIR), { recursive: true, force: true });
   });
 

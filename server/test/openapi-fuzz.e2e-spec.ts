@@ -1,6 +1,6 @@
 import type { ApiErrorBody, Role } from '@yardcall/shared';
 import request from 'supertest';
-import { bearer, startApp, tokensByRole, type TestApp } from './helpers';
+import { bearer, suiteApp } from './helpers';
 
 // Every route of the app's own OpenAPI document, fed malformed, oversized, wrong-type, deeply nested,
 // NUL, surrogate and null input: never a 5xx, always a 4xx whose message says what is wrong.
@@ -76,14 +76,11 @@ function namesField(body: ApiErrorBody, field: string): boolean {
 }
 
 describe('every route of the OpenAPI document against hostile input', () => {
-  let t: TestApp;
-  let tokens: Record<Role, string>;
+  const { t, tokens } = suiteApp();
   let doc: OpenApiDocument;
   let routes: Route[];
 
   beforeAll(async () => {
-    t = await startApp();
-    tokens = await tokensByRole(t.url);
     doc = (await request(t.url).get('/api/docs-json')).body as OpenApiDocument;
     routes = Object.entries(doc.paths).flatMap(([path, operations]) =>
       METHODS.flatMap((method) => {
@@ -91,9 +88,6 @@ describe('every route of the OpenAPI document against hostile input', () => {
         return operation ? [{ method, path, operation }] : [];
       }),
     );
-  });
-  afterAll(async () => {
-    await t.close();
   });
 
   // A caller the route lets through its guards: its first documented role, else an admin (any

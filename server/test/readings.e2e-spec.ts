@@ -5,10 +5,9 @@ import {
   type OrganizationSummary,
   type PutResultsResponse,
   type ResultUpsert,
-  type Role,
   type VehicleResponse,
 } from '@yardcall/shared';
-import { randomInt, randomUUID } from 'node:crypto';
+import { randomUUID } from 'node:crypto';
 import request from 'supertest';
 import {
   bearer,
@@ -17,14 +16,11 @@ import {
   errorBody,
   OTHER_ORG_ADMIN,
   signIn,
-  startApp,
   startInspection,
-  tokensByRole,
+  suiteApp,
   tractorRequest,
-  type TestApp,
+  unitNumber,
 } from './helpers';
-
-const unit = (prefix: string) => `${prefix}-${randomInt(10_000, 99_999)}`;
 
 const measuring = (quantity: string) => (item: ChecklistItem) =>
   item.expects.type === 'measure' && item.expects.quantity === quantity;
@@ -33,18 +29,8 @@ const treadDepth = (items: ChecklistItem[]) => items.find(measuring('tread_depth
 const lamp = (items: ChecklistItem[]) => items.find((i) => !i.safety && i.expects.type === 'check')!;
 
 describe('required readings, checks without a reading and fixes on the spot', () => {
-  let t: TestApp;
-  let tokens: Record<Role, string>;
-
-  beforeAll(async () => {
-    t = await startApp();
-    tokens = await tokensByRole(t.url);
-  });
-  afterAll(async () => {
-    // The demo organisation back to its default for the suites that follow.
-    await setReadings([]);
-    await t.close();
-  });
+  // The demo organisation back to its default for the suites that follow.
+  const { t, tokens } = suiteApp(() => setReadings([]));
 
   function setReadings(requiredReadings: unknown, token = tokens.admin) {
     return request(t.url).patch('/api/organizations/readings').set(bearer(token)).send({ requiredReadings });
@@ -60,7 +46,7 @@ describe('required readings, checks without a reading and fixes on the spot', ()
     vehicle: VehicleResponse;
     at: (s: number) => string;
   }> {
-    const vehicle = await createVehicle(t.url, tokens.admin, tractorRequest(unit('RD')));
+    const vehicle = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('RD')));
     const startedMs = Date.now() - 10 * 60_000;
     const inspection = await startInspection(t.url, tokens.driver, {
       vehicleIds: [vehicle.id],

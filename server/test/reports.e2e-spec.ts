@@ -10,7 +10,6 @@ import {
   type VehicleResponse,
   type DefectResponse,
   type ItemResultResponse,
-  type Role,
   type VoiceNoteResponse,
 } from '@yardcall/shared';
 import { sampleTractor, sampleTrailer } from '@yardcall/shared/testing';
@@ -26,11 +25,9 @@ import {
   errorBody,
   OTHER_ORG_ADMIN,
   signIn,
-  startApp,
   startInspection,
-  tokensByRole,
+  suiteApp,
   tractorRequest,
-  type TestApp,
 } from './helpers';
 import { makePng } from './media-fixtures';
 import { pdfText, squash } from './pdf-text';
@@ -444,16 +441,7 @@ describe('signature path bounds', () => {
 });
 
 describe('GET /api/inspections/:id/report.pdf', () => {
-  let t: TestApp;
-  let tokens: Record<Role, string>;
-
-  beforeAll(async () => {
-    t = await startApp();
-    tokens = await tokensByRole(t.url);
-  });
-  afterAll(async () => {
-    await t.close();
-  });
+  const { t, tokens } = suiteApp();
 
   it("answers the submitted report with the driver's defect words and signature, and 404 to another organisation", async () => {
     const unit = `RP-${randomInt(10_000, 99_999)}`;

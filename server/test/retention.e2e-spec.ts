@@ -4,9 +4,8 @@ import type {
   ResultUpsert,
   RetentionPurgeResult,
   RetentionSettings,
-  Role,
 } from '@yardcall/shared';
-import { randomInt, randomUUID } from 'node:crypto';
+import { randomUUID } from 'node:crypto';
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import request from 'supertest';
@@ -15,32 +14,22 @@ import {
   bodyOf,
   createVehicle,
   errorBody,
+  putAnswers,
+  signAndSubmit,
   startInspection,
-  startApp,
-  tokensByRole,
+  suiteApp,
   tractorRequest,
-  type TestApp,
+  unitNumber,
 } from './helpers';
 import { JOB_RETENTION_PURGE } from '../src/jobs/job-names';
 import { JobsService } from '../src/jobs/jobs.service';
 import { makeWav } from './media-fixtures';
 
-const unit = (prefix: string) => `${prefix}-${randomInt(10_000, 99_999)}`;
 // Two years back: older than any retention setting this suite uses.
 const AGE = "interval '2 years'";
 
 describe('record retention', () => {
-  let t: TestApp;
-  let tokens: Record<Role, string>;
-
-  beforeAll(async () => {
-    t = await startApp();
-    tokens = await tokensByRole(t.url);
-  });
-  afterAll(async () => {
-    await request(t.url).patch('/api/organizations/retention').set(bearer(tokens.admin)).send({ months: 3 });
-    await t.close();
-  });
+  const { t, tokens } = suiteApp(() => setMonths(3));
 
   const settings = async () =>
     bodyOf<RetentionSettings>(await request(t.url).get('/api/organizations/retention').set(bearer(tokens.admin)));
@@ -87,7 +76,7 @@ describe('record retention', () => {
 
   // A submitted walk-around with the given defects (answered as defects) and a voice note on the first item.
   async function report(pick: (items: ChecklistItem[]) => ChecklistItem[]): Promise<InspectionResponse> {
-    const vehicle = await createVehicle(t.url, tokens.admin, tractorRequest(unit('RT')));
+    const vehicle = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('RT')));
     const started = await startInspection(t.url, tokens.driver, { vehicleIds: [vehicle.id] });
     const bad = new Set(pick(started.checklist.items).map((i) => i.key));
     const results: ResultUpsert[] = started.checklist.items.slice(0, 20).map((item) => ({
@@ -101,10 +90,7 @@ describe('record retention', () => {
         results.push({ itemKey: key, answer: 'defect', answeredAt: new Date().toISOString(), clientId: randomUUID() });
       }
     }
-    expect(
-      (await request(t.url).put(`/api/inspections/${started.id}/results`).set(bearer(tokens.driver)).send({ results }))
-        .status,
-    ).toBe(200);
+    await putAnswers(t.url, tokens.driver, started.id, results);
     const note = await request(t.url)
       .post(`/api/inspections/${started.id}/notes`)
       .set(bearer(tokens.driver))
@@ -113,12 +99,7 @@ describe('record retention', () => {
       .field('durationMs', '250')
       .attach('file', makeWav(250), { filename: 'note.wav', contentType: 'audio/wav' });
     expect(note.status).toBe(201);
-    const submitted = await request(t.url)
-      .post(`/api/inspections/${started.id}/submit`)
-      .set(bearer(tokens.driver))
-      .send({ signature: { name: 'Dana Okafor' } });
-    expect(submitted.status).toBe(200);
-    return bodyOf<InspectionResponse>(submitted);
+    return signAndSubmit(t.url, tokens.driver, started.id);
   }
 
   const minor = (items: ChecklistItem[]) => [items.find((i) => !i.safety && i.expects.type === 'check')!];

@@ -1,5 +1,5 @@
-import type { ChecklistItem, InspectionResponse, Role, VehicleResponse } from '@yardcall/shared';
-import { randomInt, randomUUID } from 'node:crypto';
+import type { ChecklistItem, InspectionResponse, VehicleResponse } from '@yardcall/shared';
+import { randomUUID } from 'node:crypto';
 import request from 'supertest';
 import {
   bearer,
@@ -7,13 +7,11 @@ import {
   createVehicle,
   errorBody,
   startInspection,
-  tokensByRole,
+  suiteApp,
   tractorRequest,
-  startApp,
-  type TestApp,
+  unitNumber,
 } from './helpers';
 
-const unit = (prefix: string) => `${prefix}-${randomInt(10_000, 99_999)}`;
 const minutesAgo = (minutes: number) => new Date(Date.now() - minutes * 60_000).toISOString();
 
 const steerTread = (items: ChecklistItem[]) =>
@@ -23,16 +21,7 @@ const steerTread = (items: ChecklistItem[]) =>
 
 // A report signed on the phone with no signal arrives later: the server keeps both times.
 describe('a report signed with no signal', () => {
-  let t: TestApp;
-  let tokens: Record<Role, string>;
-
-  beforeAll(async () => {
-    t = await startApp();
-    tokens = await tokensByRole(t.url);
-  });
-  afterAll(async () => {
-    await t.close();
-  });
+  const { t, tokens } = suiteApp();
 
   const submit = (id: string, body: Record<string, unknown>) =>
     request(t.url)
@@ -45,7 +34,7 @@ describe('a report signed with no signal', () => {
   }
 
   it('keeps the time it was signed on the signature, its arrival as submittedAt, and parks the unit on arrival', async () => {
-    const power = await createVehicle(t.url, tokens.admin, tractorRequest(unit('SO')));
+    const power = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('SO')));
     const inspection = await startInspection(t.url, tokens.driver, {
       vehicleIds: [power.id],
       startedAt: minutesAgo(90),
@@ -80,7 +69,7 @@ describe('a report signed with no signal', () => {
   });
 
   it('refuses a signing time before the walk-around began or ahead of the server clock, saying which', async () => {
-    const power = await createVehicle(t.url, tokens.admin, tractorRequest(unit('SO')));
+    const power = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('SO')));
     const inspection = await startInspection(t.url, tokens.driver, {
       vehicleIds: [power.id],
       startedAt: minutesAgo(30),

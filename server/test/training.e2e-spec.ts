@@ -3,7 +3,6 @@ import {
   scoreNarration,
   type NarrationSegment,
   type PutTrainingSegmentsResponse,
-  type Role,
   type TrainingAttemptListItem,
   type TrainingAttemptResponse,
   type TrainingProgress,
@@ -14,17 +13,7 @@ import { randomUUID } from 'node:crypto';
 import { rm } from 'node:fs/promises';
 import { dirname } from 'node:path';
 import request from 'supertest';
-import {
-  bearer,
-  binary,
-  bodyOf,
-  errorBody,
-  OTHER_ORG_ADMIN,
-  signIn,
-  startApp,
-  tokensByRole,
-  type TestApp,
-} from './helpers';
+import { bearer, binary, bodyOf, errorBody, OTHER_ORG_ADMIN, signIn, suiteApp } from './helpers';
 import { makePng, makeWav } from './media-fixtures';
 
 const STUDENT = 'student@yardcall.test';
@@ -38,16 +27,13 @@ const NARRATION: (NarrationSegment & { seq: number })[] = [
 ];
 
 describe('training: narrated practice attempts and reviews', () => {
-  let t: TestApp;
-  let tokens: Record<Role, string>;
+  const { t, tokens } = suiteApp();
   let student: string;
   let otherStudent: string;
   let otherAdmin: string;
   let tractor: VehicleResponse;
 
   beforeAll(async () => {
-    t = await startApp();
-    tokens = await tokensByRole(t.url);
     student = await signIn(t.url, STUDENT);
     otherStudent = await signIn(t.url, OTHER_STUDENT);
     otherAdmin = await signIn(t.url, OTHER_ORG_ADMIN);
@@ -55,7 +41,6 @@ describe('training: narrated practice attempts and reviews', () => {
     tractor = vehicles.find((v) => v.unitNumber === 'KV-101')!;
   });
   afterAll(async () => {
-    await t.close();
     await rm(dirname(NOTES_STORAGE_DIR), { recursive: true, force: true });
   });
 

@@ -1,17 +1,7 @@
 import type { CaughtMail, InvitationSummary, LoginResponse, UserSummary } from '@yardcall/shared';
 import { randomUUID } from 'node:crypto';
 import request from 'supertest';
-import {
-  bearer,
-  login,
-  OTHER_ORG_ADMIN,
-  signIn,
-  startApp,
-  tokensByRole,
-  type TestApp,
-  errorBody,
-  bodyOf,
-} from './helpers';
+import { bearer, bodyOf, errorBody, login, OTHER_ORG_ADMIN, signIn, suiteApp } from './helpers';
 
 // Each run invites fresh addresses, so the suite also passes against a database kept from an earlier run.
 const run = randomUUID().slice(0, 8);
@@ -23,16 +13,7 @@ function linkToken(mail: CaughtMail): string {
 }
 
 describe('users and invitations', () => {
-  let t: TestApp;
-  let tokens: Awaited<ReturnType<typeof tokensByRole>>;
-
-  beforeAll(async () => {
-    t = await startApp();
-    tokens = await tokensByRole(t.url);
-  });
-  afterAll(async () => {
-    await t.close();
-  });
+  const { t, tokens } = suiteApp();
 
   async function invite(email: string, extra: Partial<{ role: string; isStudent: boolean; name: string }> = {}) {
     return request(t.url)

@@ -1,5 +1,4 @@
 import { validateVehicle, type VehicleResponse } from '@yardcall/shared';
-import { randomInt } from 'node:crypto';
 import request from 'supertest';
 import {
   bearer,
@@ -8,26 +7,15 @@ import {
   errorBody,
   OTHER_ORG_ADMIN,
   signIn,
-  startApp,
-  tokensByRole,
+  suiteApp,
   tractorRequest,
-  type TestApp,
+  unitNumber,
 } from './helpers';
 
 // A unit number free in this run, so the suite also passes against a database kept from an earlier run.
-const unit = (prefix: string) => `${prefix}-${randomInt(10_000, 99_999)}`;
 
 describe('vehicles', () => {
-  let t: TestApp;
-  let tokens: Awaited<ReturnType<typeof tokensByRole>>;
-
-  beforeAll(async () => {
-    t = await startApp();
-    tokens = await tokensByRole(t.url);
-  });
-  afterAll(async () => {
-    await t.close();
-  });
+  const { t, tokens } = suiteApp();
 
   it('lists the seeded fleet to a driver, searches unit numbers by prefix and filters by kind', async () => {
     const all = await request(t.url).get('/api/vehicles').set(bearer(tokens.driver));
@@ -57,13 +45,13 @@ describe('vehicles', () => {
   });
 
   it('creates a vehicle, reads it back and refuses a second one with the same unit number in any case', async () => {
-    const unitNumber = unit('KV');
+    const ours = unitNumber('KV');
     const created = await request(t.url)
       .post('/api/vehicles')
       .set(bearer(tokens.supervisor))
-      .send(tractorRequest(unitNumber));
+      .send(tractorRequest(ours));
     expect(created.status).toBe(201);
-    expect(created.body).toMatchObject({ unitNumber, kind: 'tractor', status: 'in_service', statusReason: null });
+    expect(created.body).toMatchObject({ unitNumber: ours, kind: 'tractor', status: 'in_service', statusReason: null });
     const read = await request(t.url)
       .get(`/api/vehicles/${bodyOf<VehicleResponse>(created).id}`)
       .set(bearer(tokens.mechanic));
@@ -72,10 +60,10 @@ describe('vehicles', () => {
     const duplicate = await request(t.url)
       .post('/api/vehicles')
       .set(bearer(tokens.admin))
-      .send(tractorRequest(unitNumber.toLowerCase()));
+      .send(tractorRequest(ours.toLowerCase()));
     expect(duplicate.status).toBe(409);
     expect(errorBody(duplicate).message).toBe(
-      `Your organisation already has a unit ${unitNumber.toLowerCase()}: choose another unit number.`,
+      `Your organisation already has a unit ${ours.toLowerCase()}: choose another unit number.`,
     );
   });
 
@@ -84,14 +72,14 @@ describe('vehicles', () => {
     const response = await request(t.url)
       .post('/api/vehicles')
       .set(bearer(otherAdmin))
-      .send(tractorRequest(unit('KV-101')));
+      .send(tractorRequest(unitNumber('KV-101')));
     expect(response.status).toBe(201);
     // The other organisation's fleet stays as seeded: access.e2e-spec.ts lists it exactly, in any file order.
     await t.dataSource.query('DELETE FROM vehicles WHERE id = $1', [bodyOf<VehicleResponse>(response).id]);
   });
 
   it('answers 400 with each wrong axle field named by the shared vehicle rules', async () => {
-    const body = tractorRequest(unit('KV'));
+    const body = tractorRequest(unitNumber('KV'));
     const [steer, drive] = body.config.axles;
     body.config.axles = [
       { ...steer!, tires: 'dual' },
@@ -129,7 +117,7 @@ describe('vehicles', () => {
   });
 
   it('answers 400, never 500, for wrong types and unknown fields deep in the configuration', async () => {
-    const body = tractorRequest(unit('KV')) as unknown as {
+    const body = tractorRequest(unitNumber('KV')) as unknown as {
       config: { axles: Record<string, unknown>[]; paint?: string };
     };
     body.config.axles[0] = {
@@ -154,14 +142,14 @@ describe('vehicles', () => {
       const wrong = await request(t.url)
         .post('/api/vehicles')
         .set(bearer(tokens.admin))
-        .send({ ...tractorRequest(unit('KV')), config });
+        .send({ ...tractorRequest(unitNumber('KV')), config });
       expect({ config, status: wrong.status }).toEqual({ config, status: 400 });
       expect(errorBody(wrong).fields?.[0]?.field).toMatch(/^config/);
     }
   });
 
   it('takes a vehicle out of service with a reason, and back, with the time it changed', async () => {
-    const created = await createVehicle(t.url, tokens.admin, tractorRequest(unit('KV')));
+    const created = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('KV')));
     const out = await request(t.url)
       .patch(`/api/vehicles/${created.id}`)
       .set(bearer(tokens.supervisor))
@@ -180,7 +168,7 @@ describe('vehicles', () => {
   });
 
   it('re-checks the whole vehicle on PATCH: a tractor cannot become a trailer with its power-unit axles', async () => {
-    const created = await createVehicle(t.url, tokens.admin, tractorRequest(unit('KV')));
+    const created = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('KV')));
     const response = await request(t.url)
       .patch(`/api/vehicles/${created.id}`)
       .set(bearer(tokens.admin))
