@@ -1,32 +1,16 @@
-import { spawn } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
+import { jsonLines, runJsonLines } from './run-json-lines.js';
 
 const repoRoot = fileURLToPath(new URL('../../..', import.meta.url));
 
 // Runs the command exactly as documented: npm run --silent evaluate --workspace shared.
-function runEvaluate(input: string): Promise<{ code: number | null; lines: unknown[]; stderr: string }> {
-  return new Promise((resolve, reject) => {
-    const child = spawn('npm', ['run', '--silent', 'evaluate', '--workspace', 'shared'], { cwd: repoRoot });
-    let stdout = '';
-    let stderr = '';
-    child.stdout.on('data', (chunk: Buffer) => (stdout += chunk.toString()));
-    child.stderr.on('data', (chunk: Buffer) => (stderr += chunk.toString()));
-    child.on('error', reject);
-    child.on('close', (code) => {
-      const lines = stdout
-        .split('\n')
-        .filter((line) => line.trim() !== '')
-        .map((line) => JSON.parse(line) as unknown);
-      resolve({ code, lines, stderr });
-    });
-    child.stdin.end(input);
-  });
-}
+const runEvaluate = (input: string) =>
+  runJsonLines('npm', ['run', '--silent', 'evaluate', '--workspace', 'shared'], input, repoRoot);
 
 describe('evaluate CLI', () => {
   it('answers each line in order and goes on after a bad line', async () => {
-    const input = [
+    const input = jsonLines([
       // 49 CFR 393.75(b): steer tread at least 4/32 in; 3.175 mm is exactly 4/32 in.
       { quantity: 'tread_depth', value: 3.175, unit: 'mm', context: { axle: 'steer' } },
       'not json',
@@ -43,10 +27,8 @@ describe('evaluate CLI', () => {
         context: { brakesApplied: true, vehicle: 'combination' },
         locale: 'es',
       },
-    ]
-      .map((line) => (typeof line === 'string' ? line : JSON.stringify(line)))
-      .join('\n');
-    const { code, lines } = await runEvaluate(`${input}\n`);
+    ]);
+    const { code, lines } = await runEvaluate(input);
     expect(code).toBe(0);
     expect(lines).toHaveLength(7);
     expect(lines[0]).toEqual({

@@ -1,35 +1,14 @@
-import { spawn } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
+import { jsonLines, runJsonLines } from './run-json-lines.js';
 
 const CLI = fileURLToPath(new URL('./interpret.ts', import.meta.url));
 
-function runCli(input: string): Promise<{ lines: unknown[]; code: number | null }> {
-  return new Promise((resolve, reject) => {
-    const child = spawn(process.execPath, ['--import', 'tsx', CLI], { stdio: ['pipe', 'pipe', 'pipe'] });
-    let out = '';
-    let err = '';
-    child.stdout.on('data', (chunk: Buffer) => (out += chunk.toString()));
-    child.stderr.on('data', (chunk: Buffer) => (err += chunk.toString()));
-    child.on('error', reject);
-    child.on('close', (code) => {
-      if (err.trim() !== '') reject(new Error(err));
-      else
-        resolve({
-          lines: out
-            .trim()
-            .split('\n')
-            .map((l) => JSON.parse(l) as unknown),
-          code,
-        });
-    });
-    child.stdin.end(input);
-  });
-}
+const runCli = (input: string) => runJsonLines(process.execPath, ['--import', 'tsx', CLI], input);
 
 describe('interpret CLI', () => {
   it('answers every line in order, reporting bad lines and going on', async () => {
-    const input = [
+    const input = jsonLines([
       { text: 'looks good', expect: { type: 'check' }, locale: 'en' },
       'not json',
       { text: 'for thirty seconds', expect: { type: 'measure', quantity: 'tread_depth' }, locale: 'en' },
@@ -40,10 +19,9 @@ describe('interpret CLI', () => {
       { text: 'ciento cinco', expect: { type: 'measure', quantity: 'tire_pressure' }, locale: 'es' },
       { text: 'good', expect: { type: 'check' }, locale: 'fr' },
       { text: 'n/a', expect: { type: 'check' }, locale: 'en' },
-    ]
-      .map((line) => (typeof line === 'string' ? line : JSON.stringify(line)))
-      .join('\n');
-    const { lines, code } = await runCli(`${input}\n`);
+    ]);
+    const { lines, code, stderr } = await runCli(input);
+    expect(stderr.trim()).toBe('');
     expect(code).toBe(0);
     expect(lines).toHaveLength(10);
     expect(lines[0]).toEqual({ kind: 'answer', answer: 'pass' });
