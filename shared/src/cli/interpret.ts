@@ -2,7 +2,7 @@
 import { createInterface } from 'node:readline';
 import { isQuantity } from '../units/index.js';
 import { LOCALES, type Expectation, type Locale } from '../checklist/index.js';
-import { interpretUtterance, type Interpretation } from '../interpreter/index.js';
+import { interpretUtterance, loadAnswerWords, type Interpretation } from '../interpreter/index.js';
 
 type Output = Record<string, unknown>;
 
@@ -75,6 +75,7 @@ function interpretLine(line: string): Output {
 }
 
 async function main(): Promise<void> {
+  await Promise.all(LOCALES.map(loadAnswerWords));
   const lines = createInterface({ input: process.stdin, crlfDelay: Infinity });
   for await (const line of lines) {
     let output: Output;

@@ -3,7 +3,6 @@ import type { Locale } from '../checklist/index.js';
 import { normaliseText } from '../text/index.js';
 import type { Unit } from '../units/index.js';
 import { EN_LEXICON } from './lexicon/en.js';
-import { ES_LEXICON } from './lexicon/es.js';
 import type { AnswerLexicon, SpokenCommand } from './lexicon/lexicon-types.js';
 import { PhraseMatcher, type PhraseGroup } from '../text/index.js';
 
@@ -50,7 +49,22 @@ export interface CompiledLexicon {
   signOffs: PhraseMatcher<true>;
 }
 
-const LEXICONS: Record<Locale, AnswerLexicon> = { en: EN_LEXICON, es: ES_LEXICON };
+// English is always there; another language's words load when a walk-around needs them, so the
+// walk-around's first load carries one language.
+const LEXICON_LOADERS: Record<Exclude<Locale, 'en'>, () => Promise<AnswerLexicon>> = {
+  es: () => import('./lexicon/es.js').then((module) => module.ES_LEXICON),
+};
+const LEXICONS = new Map<Locale, AnswerLexicon>([['en', EN_LEXICON]]);
+
+export function answerWordsLoaded(locale: Locale): boolean {
+  return LEXICONS.has(locale);
+}
+
+// Resolves once `locale`'s answer words are there; loading twice loads once.
+export async function loadAnswerWords(locale: Locale): Promise<void> {
+  if (locale === 'en' || LEXICONS.has(locale)) return;
+  LEXICONS.set(locale, await LEXICON_LOADERS[locale]());
+}
 
 function stemSet(phrases: readonly string[], locale: Locale): Set<string> {
   const out = new Set<string>();
@@ -65,7 +79,8 @@ function tokenSet(phrases: readonly string[], locale: Locale): Set<string> {
 }
 
 function compile(locale: Locale): CompiledLexicon {
-  const lx = LEXICONS[locale];
+  const lx = LEXICONS.get(locale);
+  if (!lx) throw new Error(`The ${locale} answer words are not loaded: await loadAnswerWords('${locale}') first.`);
   const commandGroups: PhraseGroup<WordCategory>[] = (Object.keys(lx.commands) as SpokenCommand[]).map((command) => ({
     category: { kind: 'command', command },
     phrases: lx.commands[command],

@@ -13,6 +13,7 @@ export { interpretFix, interpretUtterance } from './interpret-utterance.js';
 export { interpretStopAnswer, itemsNamedIn } from './interpret-stop-answer.js';
 export { interpretConfirmation } from './interpret-confirmation.js';
 export { splitEndNote } from './split-end-note.js';
+export { answerWordsLoaded, loadAnswerWords } from './compiled-lexicon.js';
 export {
   confirmKeptPrompt,
   confirmOutOfLimitPrompt,

@@ -1,6 +1,13 @@
 // Runs the voice loop's effects against a SpeechEngine: say, listen, feed what was heard back in.
 // The glove screen drives the walk-around through this; tests drive it with the scripted engine.
-import type { Checklist, ItemResult, Locale, ReadingRule } from '@yardcall/shared';
+import {
+  answerWordsLoaded,
+  loadAnswerWords,
+  type Checklist,
+  type ItemResult,
+  type Locale,
+  type ReadingRule,
+} from '@yardcall/shared';
 import type { ListenResult, SpeechEngine } from '@/lib/speech';
 import {
   initialVoiceLoopState,
@@ -155,7 +162,12 @@ export function runVoiceLoop(
           const spoken = engine.speak(effect.text, { locale: effect.locale });
           if (!warmed.has(effect.locale)) {
             warmed.add(effect.locale);
-            warmVoiceLoop(effect.locale);
+            // While the prompt is said: fetch the language's words if it is new, then compile them.
+            const locale = effect.locale;
+            loadAnswerWords(locale).then(
+              () => warmVoiceLoop(locale),
+              () => warmed.delete(locale),
+            );
           }
           await spoken;
           break;
@@ -203,6 +215,11 @@ export function runVoiceLoop(
     running = true;
     let event: VoiceLoopEvent | null = first;
     while (event && !stopped && gen === generation) {
+      // An answer is read in the loop's language: its words may still be on their way (a switch).
+      if (!answerWordsLoaded(state.locale)) {
+        await loadAnswerWords(state.locale);
+        if (stopped || gen !== generation) break;
+      }
       const step = reduceVoiceLoop(state, event, ctx);
       state = step.state;
       host.onState?.(state);
