@@ -82,6 +82,13 @@ function sameValue(got: number, want: number): boolean {
   return Math.abs(got - want) <= 0.01 + Math.abs(want) * 1e-4;
 }
 
+// A fix meets its want with the new reading wanted, or with none where none was said.
+function fixMeets(got: { measurement?: { value: number } }, value: number | undefined): boolean {
+  return value === undefined
+    ? got.measurement === undefined
+    : got.measurement !== undefined && sameValue(got.measurement.value, value);
+}
+
 export function meetsWant(got: Interpretation, want: CorpusWant): boolean {
   switch (want.kind) {
     case 'answer':
@@ -93,10 +100,7 @@ export function meetsWant(got: Interpretation, want: CorpusWant): boolean {
       // Conversions from millimetres and bar are compared to 0.01 of the canonical unit.
       return got.kind === 'measurement' && sameValue(got.measurement.value, want.value);
     case 'fixed':
-      if (got.kind !== 'fixed') return false;
-      return want.value === undefined
-        ? got.measurement === undefined
-        : got.measurement !== undefined && sameValue(got.measurement.value, want.value);
+      return got.kind === 'fixed' && fixMeets(got, want.value);
     case 'no_gauge':
       return got.kind === 'no_gauge';
     case 'unclear':
@@ -134,10 +138,7 @@ export function meetsStopWant(got: StopInterpretation, want: StopCorpusWant): bo
     case 'command':
       return got.kind === 'command' && got.command === want.command;
     case 'fixed':
-      if (got.kind !== 'fixed') return false;
-      return want.value === undefined
-        ? got.measurement === undefined
-        : got.measurement !== undefined && sameValue(got.measurement.value, want.value);
+      return got.kind === 'fixed' && fixMeets(got, want.value);
     case 'unclear':
       return got.kind === 'unclear';
   }
