@@ -6,7 +6,7 @@ import { signIn } from './support';
 // The Spanish answer words are a chunk of their own, fetched when a walk-around first needs them.
 const SPANISH_WORDS = /\/assets\/es-[\w-]+\.js$/;
 
-test('a driver who says "español" at the second stop goes on in Spanish; the Spanish words load only then', async ({
+test('a driver who says "español" at the second stop goes on in Spanish, prompts and answers; the Spanish words load only then', async ({
   page,
 }) => {
   test.setTimeout(180_000);
@@ -51,7 +51,15 @@ test('a driver who says "español" at the second stop goes on in Spanish; the Sp
     const w = window as unknown as { __spoken: string[]; __speechTurns: { answer: string | null }[] };
     return { spoken: w.__spoken, turns: w.__speechTurns };
   });
-  expect(spoken.some((text) => text.startsWith('Cambiando a español.'))).toBe(true);
+  // From the switch on the stops are said in Spanish, beginning with the one that was pending.
+  const spanish = buildChecklist(
+    [{ unitNumber: truck.unitNumber, kind: truck.kind, config: truck.config }],
+    'pre_trip',
+    'es',
+  );
+  const switched = spoken.findIndex((text) => text.startsWith('Cambiando a español.'));
+  expect(spoken[switched]).toContain(spanish.stops[1]?.prompt);
+  expect(spoken.slice(switched + 1)).toContain(spanish.stops[2]?.prompt);
   // Every answer after the switch was understood at once: nothing asked again, no waiting.
   expect(turns.map((turn) => turn.answer)).toEqual(['good', 'español', 'bien', ...rest.map(() => 'bien')]);
   expect(scripts.filter((path) => SPANISH_WORDS.test(path))).toHaveLength(1);

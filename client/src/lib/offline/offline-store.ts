@@ -14,7 +14,10 @@ import type {
 } from './records';
 
 // serverId is known when the inspection was created online; then nothing waits to be sent.
-export type NewInspection = Pick<LocalInspection, 'request' | 'vehicles' | 'checklist' | 'voiceState' | 'serverId'> &
+export type NewInspection = Pick<
+  LocalInspection,
+  'request' | 'vehicles' | 'checklist' | 'spokenChecklists' | 'voiceState' | 'serverId'
+> &
   Partial<Pick<LocalInspection, 'requiredReadings'>>;
 
 // Thrown for a write to a walk-around that is signed: the phone keeps it as it was signed.
@@ -206,6 +209,7 @@ export function createOfflineStore(db: OfflineDb, now: () => Date = () => new Da
         kind: input.request.kind,
         request: input.request,
         checklist: input.checklist,
+        spokenChecklists: input.spokenChecklists,
         voiceState: input.voiceState,
         requiredReadings: input.requiredReadings ?? [],
         synced: input.serverId ? 1 : 0,

@@ -3,6 +3,7 @@ import type {
   Checklist,
   CreateInspectionRequest,
   InspectionVehicle,
+  Locale,
   ReadingRule,
   ResultUpsert,
   SubmitInspectionRequest,
@@ -22,6 +23,9 @@ export interface LocalInspection {
   kind: CreateInspectionRequest['kind'];
   request: CreateInspectionRequest;
   checklist: Checklist;
+  // The same walk-around in the other languages a driver may switch to by voice (the same item
+  // and stop keys); walk-arounds begun before these were kept go on in their own language.
+  spokenChecklists?: Partial<Record<Locale, Checklist>>;
   voiceState?: JsonValue;
   // The organisation's required readings when the walk-around began (the voice loop reads them).
   requiredReadings: ReadingRule[];

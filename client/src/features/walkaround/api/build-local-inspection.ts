@@ -1,4 +1,4 @@
-import { buildChecklist } from '@yardcall/shared';
+import { LOCALES, buildChecklist, type Checklist, type Locale } from '@yardcall/shared';
 import { getOfflineRuntime, type LocalInspection } from '@/lib/offline';
 import type { NewWalkaround } from './create-local-inspection';
 
@@ -11,16 +11,17 @@ export async function buildLocalInspection({
   locale,
   requiredReadings,
 }: NewWalkaround): Promise<LocalInspection> {
-  const checklist = buildChecklist(
-    vehicles.map((v) => ({ unitNumber: v.unitNumber, kind: v.kind, config: v.config })),
-    kind,
-    locale,
-  );
+  const units = vehicles.map((v) => ({ unitNumber: v.unitNumber, kind: v.kind, config: v.config }));
+  const checklist = buildChecklist(units, kind, locale);
+  // The driver may say "español" or "English" mid-walk-around: the prompts follow.
+  const spokenChecklists: Partial<Record<Locale, Checklist>> = {};
+  for (const other of LOCALES) if (other !== locale) spokenChecklists[other] = buildChecklist(units, kind, other);
   const clientId = crypto.randomUUID();
   return getOfflineRuntime().store.saveInspection({
     request: { clientId, vehicleIds: vehicles.map((v) => v.id), kind, locale, startedAt: new Date().toISOString() },
     vehicles: vehicles.map((v) => ({ id: v.id, unitNumber: v.unitNumber, kind: v.kind })),
     checklist,
+    spokenChecklists,
     requiredReadings,
   });
 }

@@ -66,6 +66,11 @@ export function GloveScreen({ walkaround, onFinished, createEngine }: GloveScree
   const { clientId } = inspection;
   // Kept from the first read: a new checklist object would end the running loop.
   const [checklist] = useState(inspection.checklist);
+  // What the loop says in each language; the screen shows the walk-around's own.
+  const [spokenChecklist] = useState(
+    () => (locale: Locale) =>
+      locale === checklist.locale ? checklist : (inspection.spokenChecklists?.[locale] ?? checklist),
+  );
   const { store } = getOfflineRuntime();
   const sync = useSyncStatus();
   const [baseEngine, setBaseEngine] = useState<SpeechEngine>(() =>
@@ -164,7 +169,7 @@ export function GloveScreen({ walkaround, onFinished, createEngine }: GloveScree
 
   const voice = useVoiceLoop({
     engine,
-    checklist,
+    checklist: spokenChecklist,
     initialState,
     locale: initialState?.locale ?? checklist.locale,
     requiredReadings: inspection.requiredReadings,
