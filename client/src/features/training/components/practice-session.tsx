@@ -322,11 +322,11 @@ export function PracticeSession({ units, locale, createEngine }: PracticeSession
         {heard.length === 0 ? (
           <p className="text-muted">{running ? t('training.practice.listening') : t('training.practice.nothingYet')}</p>
         ) : (
-            // The list scrolls: it takes focus so the keyboard can scroll it (WCAG 2.1.1); nothing in it is a control.
-            // eslint-disable-next-line jsx-a11y-x/no-noninteractive-tabindex
           <ol
             className="flex max-h-80 flex-col gap-2 overflow-y-auto rounded-xl border-2 border-line bg-surface p-3 text-xl"
             aria-live="polite"
+            // The list scrolls: it takes focus so the keyboard can scroll it (WCAG 2.1.1); nothing in it is a control.
+            // eslint-disable-next-line jsx-a11y-x/no-noninteractive-tabindex
             tabIndex={0}
             aria-label={t('training.practice.heard')}
             data-testid="practice-heard-list"
