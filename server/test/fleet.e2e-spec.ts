@@ -6,11 +6,11 @@ import {
   bearer,
   bodyOf,
   createVehicle,
+  newTractor,
   OTHER_ORG_ADMIN,
   signIn,
   startInspection,
   suiteApp,
-  tractorRequest,
   trailerRequest,
   unitNumber,
 } from './helpers';
@@ -41,7 +41,7 @@ describe('fleet board', () => {
   }
 
   it('shows each vehicle with its status, since when and why it is out of service, and its last report', async () => {
-    const tractor = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('FB')));
+    const tractor = await newTractor(t.url, tokens.admin, 'FB');
     const trailer = await createVehicle(t.url, tokens.admin, trailerRequest(unitNumber('FT')));
     const report = await walkAround([tractor.id, trailer.id], (items) =>
       items.filter((i) => i.safety && i.unitIndex === 0 && i.expects.type === 'check').slice(0, 2),
@@ -88,9 +88,9 @@ describe('fleet board', () => {
       request(t.url).patch('/api/organizations/time-zone').set(bearer(tokens.admin)).send({ timeZone: name });
     expect((await zone(timeZone)).status).toBe(200);
     try {
-      const checked = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('FD')));
-      const used = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('FU')));
-      const idle = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('FI')));
+      const checked = await newTractor(t.url, tokens.admin, 'FD');
+      const used = await newTractor(t.url, tokens.admin, 'FU');
+      const idle = await newTractor(t.url, tokens.admin, 'FI');
       const quickly = async (vehicleId: string, kind: 'pre_trip' | 'en_route') => {
         const started = await startInspection(t.url, tokens.driver, {
           vehicleIds: [vehicleId],
@@ -138,7 +138,7 @@ describe('fleet board', () => {
   });
 
   it('is the same for a mechanic and an admin, and a vehicle never inspected has no last report', async () => {
-    const fresh = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('FN')));
+    const fresh = await newTractor(t.url, tokens.admin, 'FN');
     for (const role of ['mechanic', 'admin'] as const) {
       const board = bodyOf<FleetBoard>(await request(t.url).get('/api/fleet/board').set(bearer(tokens[role])));
       expect(board.vehicles.find((v) => v.id === fresh.id)).toMatchObject({

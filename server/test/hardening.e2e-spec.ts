@@ -16,8 +16,8 @@ import {
   bearer,
   binary,
   bodyOf,
-  createVehicle,
   errorBody,
+  newTractor,
   postInspection,
   ROLE_EMAILS,
   startInspection,
@@ -74,7 +74,7 @@ describe('hardening', () => {
 
   describe('the out-of-service hold', () => {
     it('refuses to put a unit with an open safety defect back in service by hand, saying why', async () => {
-      const tractor = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('HD')));
+      const tractor = await newTractor(t.url, tokens.admin, 'HD');
       const report = await reportSafetyDefect(tractor.id);
       for (const token of [tokens.supervisor, tokens.admin]) {
         const lifted = await patchVehicle(tractor.id, { status: 'in_service' }, token);
@@ -92,7 +92,7 @@ describe('hardening', () => {
     });
 
     it('lets a supervisor take a unit out of service by hand only with a reason, shown on the fleet board', async () => {
-      const tractor = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('HH')));
+      const tractor = await newTractor(t.url, tokens.admin, 'HH');
       const bare = await patchVehicle(tractor.id, { status: 'out_of_service' });
       expect(bare.status).toBe(400);
       expectOnlyField(bare, 'statusReason', /Say why/);
@@ -117,7 +117,7 @@ describe('hardening', () => {
     });
 
     it('keeps a hold put by hand when the defects are certified, and a new unit out of service needs a reason', async () => {
-      const tractor = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('HB')));
+      const tractor = await newTractor(t.url, tokens.admin, 'HB');
       const report = await reportSafetyDefect(tractor.id);
       const held = await patchVehicle(tractor.id, {
         status: 'out_of_service',
@@ -141,7 +141,7 @@ describe('hardening', () => {
   describe('plausible times', () => {
     let tractorId: string;
     beforeAll(async () => {
-      tractorId = (await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('TM')))).id;
+      tractorId = (await newTractor(t.url, tokens.admin, 'TM')).id;
     });
 
     it(`refuses a start in the future or more than ${OFFLINE_WINDOW_DAYS} days ago, naming startedAt`, async () => {
@@ -206,7 +206,7 @@ describe('hardening', () => {
 
   describe('body size', () => {
     it("accepts a 500-answer batch with every text at its longest, the API's own maximum", async () => {
-      const tractor = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('BL')));
+      const tractor = await newTractor(t.url, tokens.admin, 'BL');
       const started = await startInspection(t.url, tokens.driver, {
         vehicleIds: [tractor.id],
         startedAt: new Date(Date.now() - HOUR).toISOString(),
@@ -234,7 +234,7 @@ describe('hardening', () => {
     });
 
     it('accepts a signature drawing of 150,000 characters', async () => {
-      const tractor = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('SG')));
+      const tractor = await newTractor(t.url, tokens.admin, 'SG');
       const started = await startInspection(t.url, tokens.driver, {
         vehicleIds: [tractor.id],
         startedAt: new Date(Date.now() - HOUR).toISOString(),
@@ -324,7 +324,7 @@ describe('hardening', () => {
         .patch('/api/organizations/time-zone')
         .set(bearer(tokens.admin))
         .send({ timeZone: 'America/Chicago' });
-      const tractor = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('TZ')));
+      const tractor = await newTractor(t.url, tokens.admin, 'TZ');
       // 02:30 UTC yesterday: still the day before in Chicago (UTC-6 or -5).
       const utcDay = new Date(Date.now() - DAY).toISOString().slice(0, 10);
       const startedAt = `${utcDay}T02:30:00.000Z`;
@@ -366,7 +366,7 @@ describe('hardening', () => {
     });
 
     it('refuses NUL characters and unpaired surrogates in nested text, naming the field', async () => {
-      const tractor = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('NU')));
+      const tractor = await newTractor(t.url, tokens.admin, 'NU');
       const started = await startInspection(t.url, tokens.driver, {
         vehicleIds: [tractor.id],
         startedAt: new Date(Date.now() - HOUR).toISOString(),

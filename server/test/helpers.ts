@@ -17,7 +17,7 @@ import { DataSource } from 'typeorm';
 import { AppModule } from '../src/app.module';
 import { configureApp } from '../src/app.setup';
 import { DEMO_PASSWORD } from '../src/database/seed-data';
-import { bodyOf } from './http';
+import { bodyOf, errorBody } from './http';
 
 export { binary, bodyOf, errorBody } from './http';
 
@@ -83,6 +83,18 @@ export function unitNumber(prefix: string): string {
   return `${prefix}-${randomInt(10_000, 99_999)}`;
 }
 
+// A 400 that names at least these fields, each with its message.
+export function expectFieldProblems(response: request.Response, problems: { field: string; message: string }[]): void {
+  expect(response.status).toBe(400);
+  expect(errorBody(response).fields).toEqual(expect.arrayContaining(problems));
+}
+
+// A 201 and the record it answers.
+export function createdBody<T>(response: request.Response): T {
+  expect(response.status).toBe(201);
+  return bodyOf<T>(response);
+}
+
 export async function login(url: string, email: string, password = DEMO_PASSWORD): Promise<LoginResponse> {
   const response = await request(url).post('/api/auth/login').send({ email, password });
   if (response.status !== 200) throw new Error(`login ${email} answered ${response.status}: ${response.text}`);
@@ -119,8 +131,12 @@ export function trailerRequest(unitNumber: string): VehicleRequest {
 
 export async function createVehicle(url: string, token: string, body: VehicleRequest): Promise<VehicleResponse> {
   const response = await request(url).post('/api/vehicles').set(bearer(token)).send(body);
-  expect(response.status).toBe(201);
-  return bodyOf<VehicleResponse>(response);
+  return createdBody<VehicleResponse>(response);
+}
+
+// A tractor of the test's own (the demo tractor under a fresh unit number starting with `prefix`).
+export function newTractor(url: string, token: string, prefix: string): Promise<VehicleResponse> {
+  return createVehicle(url, token, tractorRequest(unitNumber(prefix)));
 }
 
 export interface InspectionStart {
@@ -149,8 +165,7 @@ export function postInspection(url: string, token: string, start: InspectionStar
 
 export async function startInspection(url: string, token: string, start: InspectionStart): Promise<InspectionResponse> {
   const response = await postInspection(url, token, start);
-  expect(response.status).toBe(201);
-  return bodyOf<InspectionResponse>(response);
+  return createdBody<InspectionResponse>(response);
 }
 
 // PUT a batch of answers of a walk-around, which the server must take.

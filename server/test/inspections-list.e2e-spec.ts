@@ -8,18 +8,7 @@ import type {
 } from '@yardcall/shared';
 import { randomUUID } from 'node:crypto';
 import request from 'supertest';
-import {
-  bearer,
-  bodyOf,
-  createVehicle,
-  errorBody,
-  SECOND_DRIVER,
-  signIn,
-  startInspection,
-  suiteApp,
-  tractorRequest,
-  unitNumber,
-} from './helpers';
+import { bearer, bodyOf, errorBody, newTractor, SECOND_DRIVER, signIn, startInspection, suiteApp } from './helpers';
 
 const MINUTE = 60_000;
 
@@ -81,43 +70,26 @@ describe('the supervisor list: filters, sorts, keyset pages, CSV, and the detail
 
   beforeAll(async () => {
     second = await signIn(t.url, SECOND_DRIVER);
-    vehicleId = (await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('LS')))).id;
+    vehicleId = (await newTractor(t.url, tokens.admin, 'LS')).id;
     base = Date.now() - 60 * MINUTE;
     // Submitted in the order rushed, late, first, recurring; started in another order.
     // Both answered stop by stop: the rushed one at 3 s a stop, the late one at a quick but fair 10 s.
-    byName.rushed = await walk(vehicleId, {
-      token: second,
-      kind: 'post_trip',
-      startedAt: base + MINUTE,
-      gapMs: 3000,
-      byStop: true,
-    });
-    byName.late = await walk(vehicleId, {
-      token: second,
-      kind: 'pre_trip',
-      startedAt: base + 5 * MINUTE,
-      gapMs: 10_000,
-      byStop: true,
-    });
-    byName.first = await walk(vehicleId, {
-      token: tokens.driver,
-      kind: 'pre_trip',
-      startedAt: base + 2 * MINUTE,
-      defects: mudflap,
-      goBack: true,
-    });
-    byName.open = await walk(vehicleId, {
-      token: tokens.driver,
-      kind: 'en_route',
-      startedAt: base + 4 * MINUTE,
-      submit: false,
-    });
+    const walks: [string, Walk][] = [
+      ['rushed', { token: second, kind: 'post_trip', startedAt: base + MINUTE, gapMs: 3000, byStop: true }],
+      ['late', { token: second, kind: 'pre_trip', startedAt: base + 5 * MINUTE, gapMs: 10_000, byStop: true }],
+      [
+        'first',
+        { token: tokens.driver, kind: 'pre_trip', startedAt: base + 2 * MINUTE, defects: mudflap, goBack: true },
+      ],
+      ['open', { token: tokens.driver, kind: 'en_route', startedAt: base + 4 * MINUTE, submit: false }],
+    ];
+    for (const [name, w] of walks) byName[name] = await walk(vehicleId, w);
     // Started after the first report was submitted, with the same defect on the same vehicle. A whole
     // walk-around at 6 s an item takes longer than the server lets answers run ahead of its clock, so
     // the first report's defect is dated 20 minutes back and this walk-around starts 17 minutes ago.
     await t.dataSource.query(
       `UPDATE defects SET created_at = created_at - interval '20 minutes' WHERE inspection_id = $1`,
-      [byName.first.id],
+      [byName.first!.id],
     );
     byName.recurring = await walk(vehicleId, {
       token: tokens.driver,
@@ -221,7 +193,7 @@ describe('the supervisor list: filters, sorts, keyset pages, CSV, and the detail
   });
 
   it('pages exactly when start times differ only in microseconds', async () => {
-    const vehicle = (await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('LM')))).id;
+    const vehicle = (await newTractor(t.url, tokens.admin, 'LM')).id;
     const ids: string[] = [];
     for (let n = 0; n < 4; n += 1) {
       ids.push((await startInspection(t.url, tokens.driver, { vehicleIds: [vehicle], kind: 'post_trip' })).id);

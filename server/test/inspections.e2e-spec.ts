@@ -15,6 +15,7 @@ import request from 'supertest';
 import {
   bearer,
   bodyOf,
+  createdBody,
   createVehicle,
   errorBody,
   OTHER_ORG_ADMIN,
@@ -61,8 +62,7 @@ describe('inspections and defects', () => {
 
   async function started(vehicleIds: string[], options: Parameters<typeof start>[1] = {}) {
     const response = await start(vehicleIds, options);
-    expect(response.status).toBe(201);
-    return bodyOf<InspectionResponse>(response);
+    return createdBody<InspectionResponse>(response);
   }
 
   function answer(item: ChecklistItem, at: string, extra: Partial<ResultUpsert> = {}): ResultUpsert {
@@ -115,8 +115,7 @@ describe('inspections and defects', () => {
     const clientId = randomUUID();
     const startedAt = nextStart();
     const first = await start([power.id, van.id], { clientId, startedAt });
-    expect(first.status).toBe(201);
-    const inspection = bodyOf<InspectionResponse>(first);
+    const inspection = createdBody<InspectionResponse>(first);
     expect(inspection.vehicles.map((v) => v.unitNumber)).toEqual([power.unitNumber, van.unitNumber]);
     expect(inspection.status).toBe('in_progress');
     expect(inspection.checklist.items.some((i) => i.unitIndex === 1)).toBe(true);

@@ -2,16 +2,7 @@ import type { CaughtMail, ChecklistItem, ResultUpsert } from '@yardcall/shared';
 import { randomUUID } from 'node:crypto';
 import request from 'supertest';
 import { MailService } from '../src/mail/mail.service';
-import {
-  answerAndSubmit,
-  bearer,
-  bodyOf,
-  createVehicle,
-  startInspection,
-  suiteApp,
-  tractorRequest,
-  unitNumber,
-} from './helpers';
+import { answerAndSubmit, bearer, bodyOf, newTractor, startInspection, suiteApp } from './helpers';
 
 describe('e-mail on safety defects, through the job queue', () => {
   const { t, tokens } = suiteApp();
@@ -66,7 +57,7 @@ describe('e-mail on safety defects, through the job queue', () => {
     const to = await recipients();
     const mechanics = await recipients('mechanic');
     expect(to.length).toBeGreaterThanOrEqual(2);
-    const vehicle = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('MQ')));
+    const vehicle = await newTractor(t.url, tokens.admin, 'MQ');
     // The loopback catcher refuses the next two messages about this unit, as a busy mail server would.
     t.app.get(MailService).failNextSends(2, vehicle.unitNumber);
     const report = await submitWithDefects(vehicle.id, (items) =>
@@ -118,7 +109,7 @@ describe('e-mail on safety defects, through the job queue', () => {
   });
 
   it('sends nothing for a report without a safety defect', async () => {
-    const vehicle = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('MN')));
+    const vehicle = await newTractor(t.url, tokens.admin, 'MN');
     const report = await submitWithDefects(vehicle.id, (items) =>
       items.filter((i) => !i.safety && i.expects.type === 'check').slice(0, 1),
     );

@@ -49,7 +49,7 @@ describe('voice notes on an S3-compatible store', () => {
   });
 
   it('stores the upload in the bucket and streams ranges from it', async () => {
-    const { bearer, bodyOf, login, ROLE_EMAILS } = helpers;
+    const { bearer, bodyOf, createdBody, login, ROLE_EMAILS } = helpers;
     const admin = (await login(t.url, ROLE_EMAILS.admin)).accessToken;
     const driver = (await login(t.url, ROLE_EMAILS.driver)).accessToken;
     const vehicles = bodyOf<VehicleResponse[]>(await request(t.url).get('/api/vehicles').set(bearer(admin)));
@@ -75,8 +75,7 @@ describe('voice notes on an S3-compatible store', () => {
         startedAt: new Date().toISOString(),
         clientId: randomUUID(),
       });
-    expect(started.status).toBe(201);
-    const inspection = bodyOf<InspectionResponse>(started);
+    const inspection = createdBody<InspectionResponse>(started);
 
     const wav = makeWav(200);
     const upload = await request(t.url)
@@ -86,8 +85,7 @@ describe('voice notes on an S3-compatible store', () => {
       .field('clientId', randomUUID())
       .field('durationMs', '200')
       .attach('file', wav, { filename: 'n.wav', contentType: 'audio/wav' });
-    expect(upload.status).toBe(201);
-    const note = bodyOf<VoiceNoteResponse>(upload);
+    const note = createdBody<VoiceNoteResponse>(upload);
 
     const [row] = await t.dataSource.query<{ object_key: string }[]>(
       'SELECT object_key FROM voice_notes WHERE id = $1',

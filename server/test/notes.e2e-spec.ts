@@ -6,7 +6,7 @@ import {
   type PhotoResponse,
   type VoiceNoteResponse,
 } from '@yardcall/shared';
-import { createHash, randomInt, randomUUID } from 'node:crypto';
+import { createHash, randomUUID } from 'node:crypto';
 import { existsSync } from 'node:fs';
 import { readFile, rm } from 'node:fs/promises';
 import { dirname, join } from 'node:path';
@@ -15,14 +15,14 @@ import {
   bearer,
   binary,
   bodyOf,
-  createVehicle,
+  createdBody,
   errorBody,
+  newTractor,
   OTHER_ORG_ADMIN,
   SECOND_DRIVER,
   signIn,
   startInspection,
   suiteApp,
-  tractorRequest,
 } from './helpers';
 import { makeOggOpusHead, makePng, makeWav } from './media-fixtures';
 
@@ -45,7 +45,7 @@ describe('voice notes and photos', () => {
   });
 
   async function newInspection(): Promise<InspectionResponse> {
-    const vehicle = await createVehicle(t.url, tokens.admin, tractorRequest(`NT-${randomInt(10_000, 99_999)}`));
+    const vehicle = await newTractor(t.url, tokens.admin, 'NT');
     return startInspection(t.url, tokens.driver, { vehicleIds: [vehicle.id] });
   }
 
@@ -87,8 +87,7 @@ describe('voice notes and photos', () => {
   describe('uploading a voice note', () => {
     it('accepts a small WAV, judges its type by content and keeps its size and sha256', async () => {
       const response = await uploadNote(inspection.id, wav, { heard: 'air line chafed at the gladhand' });
-      expect(response.status).toBe(201);
-      const note = bodyOf<VoiceNoteResponse>(response);
+      const note = createdBody<VoiceNoteResponse>(response);
       expect(note).toMatchObject({
         itemKey,
         mimeType: 'audio/wav',
@@ -287,8 +286,7 @@ describe('voice notes and photos', () => {
     it('accepts a PNG, serves it back byte for byte and lists it with the inspection', async () => {
       const png = makePng();
       const response = await uploadPhoto(inspection.id, png);
-      expect(response.status).toBe(201);
-      const photo = bodyOf<PhotoResponse>(response);
+      const photo = createdBody<PhotoResponse>(response);
       expect(photo).toMatchObject({
         itemKey,
         mimeType: 'image/png',

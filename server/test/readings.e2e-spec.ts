@@ -9,18 +9,7 @@ import {
 } from '@yardcall/shared';
 import { randomUUID } from 'node:crypto';
 import request from 'supertest';
-import {
-  bearer,
-  bodyOf,
-  createVehicle,
-  errorBody,
-  OTHER_ORG_ADMIN,
-  signIn,
-  startInspection,
-  suiteApp,
-  tractorRequest,
-  unitNumber,
-} from './helpers';
+import { bearer, bodyOf, errorBody, newTractor, OTHER_ORG_ADMIN, signIn, startInspection, suiteApp } from './helpers';
 
 const measuring = (quantity: string) => (item: ChecklistItem) =>
   item.expects.type === 'measure' && item.expects.quantity === quantity;
@@ -46,7 +35,7 @@ describe('required readings, checks without a reading and fixes on the spot', ()
     vehicle: VehicleResponse;
     at: (s: number) => string;
   }> {
-    const vehicle = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('RD')));
+    const vehicle = await newTractor(t.url, tokens.admin, 'RD');
     const startedMs = Date.now() - 10 * 60_000;
     const inspection = await startInspection(t.url, tokens.driver, {
       vehicleIds: [vehicle.id],

@@ -9,18 +9,7 @@ import { randomUUID } from 'node:crypto';
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import request from 'supertest';
-import {
-  bearer,
-  bodyOf,
-  createVehicle,
-  errorBody,
-  putAnswers,
-  signAndSubmit,
-  startInspection,
-  suiteApp,
-  tractorRequest,
-  unitNumber,
-} from './helpers';
+import { bearer, bodyOf, errorBody, newTractor, putAnswers, signAndSubmit, startInspection, suiteApp } from './helpers';
 import { JOB_RETENTION_PURGE } from '../src/jobs/job-names';
 import { JobsService } from '../src/jobs/jobs.service';
 import { makeWav } from './media-fixtures';
@@ -76,7 +65,7 @@ describe('record retention', () => {
 
   // A submitted walk-around with the given defects (answered as defects) and a voice note on the first item.
   async function report(pick: (items: ChecklistItem[]) => ChecklistItem[]): Promise<InspectionResponse> {
-    const vehicle = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('RT')));
+    const vehicle = await newTractor(t.url, tokens.admin, 'RT');
     const started = await startInspection(t.url, tokens.driver, { vehicleIds: [vehicle.id] });
     const bad = new Set(pick(started.checklist.items).map((i) => i.key));
     const results: ResultUpsert[] = started.checklist.items.slice(0, 20).map((item) => ({

@@ -1,16 +1,7 @@
 import type { ChecklistItem, InspectionResponse, VehicleResponse } from '@yardcall/shared';
 import { randomUUID } from 'node:crypto';
 import request from 'supertest';
-import {
-  bearer,
-  bodyOf,
-  createVehicle,
-  errorBody,
-  startInspection,
-  suiteApp,
-  tractorRequest,
-  unitNumber,
-} from './helpers';
+import { bearer, bodyOf, errorBody, newTractor, startInspection, suiteApp } from './helpers';
 
 const minutesAgo = (minutes: number) => new Date(Date.now() - minutes * 60_000).toISOString();
 
@@ -34,7 +25,7 @@ describe('a report signed with no signal', () => {
   }
 
   it('keeps the time it was signed on the signature, its arrival as submittedAt, and parks the unit on arrival', async () => {
-    const power = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('SO')));
+    const power = await newTractor(t.url, tokens.admin, 'SO');
     const inspection = await startInspection(t.url, tokens.driver, {
       vehicleIds: [power.id],
       startedAt: minutesAgo(90),
@@ -69,7 +60,7 @@ describe('a report signed with no signal', () => {
   });
 
   it('refuses a signing time before the walk-around began or ahead of the server clock, saying which', async () => {
-    const power = await createVehicle(t.url, tokens.admin, tractorRequest(unitNumber('SO')));
+    const power = await newTractor(t.url, tokens.admin, 'SO');
     const inspection = await startInspection(t.url, tokens.driver, {
       vehicleIds: [power.id],
       startedAt: minutesAgo(30),

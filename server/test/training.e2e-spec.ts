@@ -13,7 +13,7 @@ import { randomUUID } from 'node:crypto';
 import { rm } from 'node:fs/promises';
 import { dirname } from 'node:path';
 import request from 'supertest';
-import { bearer, binary, bodyOf, errorBody, OTHER_ORG_ADMIN, signIn, suiteApp } from './helpers';
+import { bearer, binary, bodyOf, createdBody, errorBody, OTHER_ORG_ADMIN, signIn, suiteApp } from './helpers';
 import { makePng, makeWav } from './media-fixtures';
 
 const STUDENT = 'student@yardcall.test';
@@ -53,8 +53,7 @@ describe('training: narrated practice attempts and reviews', () => {
 
   async function newAttempt(token = student): Promise<TrainingAttemptResponse> {
     const response = await create(token);
-    expect(response.status).toBe(201);
-    return bodyOf<TrainingAttemptResponse>(response);
+    return createdBody<TrainingAttemptResponse>(response);
   }
 
   function putSegments(token: string, id: string, segments: unknown[]) {
