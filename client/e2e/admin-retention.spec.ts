@@ -1,19 +1,12 @@
 import { expect, test, type APIRequestContext } from '@playwright/test';
 import pg from 'pg';
 import type { InspectionResponse, RetentionSettings, VehicleResponse } from '@yardcall/shared';
-import { DEMO_PASSWORD, expectNoAxeViolations, screenshot, signIn } from './support';
-
-async function login(request: APIRequestContext, email: string): Promise<Record<string, string>> {
-  const response = await request.post('/api/auth/login', { data: { email, password: DEMO_PASSWORD } });
-  expect(response.ok()).toBe(true);
-  const { accessToken } = (await response.json()) as { accessToken: string };
-  return { Authorization: `Bearer ${accessToken}` };
-}
+import { apiHeaders, expectNoAxeViolations, screenshot, signIn } from './support';
 
 // A short submitted post-trip with no defect, then aged two years in the database, so the purge has
 // something past any allowed retention to remove.
 async function oldReport(request: APIRequestContext): Promise<string> {
-  const headers = await login(request, 'aiyana.brooks@yardcall.test');
+  const headers = await apiHeaders(request, 'aiyana.brooks@yardcall.test');
   const vehicles = (await (await request.get('/api/vehicles', { headers })).json()) as VehicleResponse[];
   const truck = vehicles.find((v) => v.unitNumber === 'KV-S31');
   if (!truck) throw new Error('No KV-S31 in the demo fleet.');
@@ -87,7 +80,7 @@ test('the admin sets the retention, is refused 2 months with the reason, and pur
   await field.fill('6');
   await page.getByRole('button', { name: 'Save the retention' }).click();
   await expect(page.getByTestId('retention-saved')).toHaveText('Saved: reports are kept 6 months.');
-  const headers = await login(request, 'admin@yardcall.test');
+  const headers = await apiHeaders(request, 'admin@yardcall.test');
   const saved = (await (await request.get('/api/organizations/retention', { headers })).json()) as RetentionSettings;
   expect(saved.months).toBe(6);
   await page.reload();

@@ -28,6 +28,60 @@ export interface SpeechPlan {
   onDevice?: boolean;
 }
 
+export interface RecognitionScript {
+  // The words heard at the end of a listening turn; null is silence (nothing heard, the turn stays open).
+  decide: () => string | null;
+  // How long after listening starts the words come.
+  delayMs: () => number;
+  confidence: number;
+  // When set, the recogniser says whether it works on the device (SpeechRecognition.available);
+  // without it, recognition needs a network, as a browser's server-side recogniser does.
+  onDevice?: boolean;
+  onAnswer?: () => void;
+}
+
+// The page's SpeechRecognition, replaced by one that hands over scripted words. Runs in the page:
+// sent as source by initScript, so it uses nothing from this module.
+function scriptedRecognition(script: RecognitionScript): void {
+  class ScriptedRecognition {
+    processLocally = false;
+    lang = '';
+    continuous = false;
+    interimResults = false;
+    maxAlternatives = 1;
+    onresult: ((event: unknown) => void) | null = null;
+    onerror: ((event: unknown) => void) | null = null;
+    onend: (() => void) | null = null;
+    private done = false;
+    start(): void {
+      setTimeout(() => {
+        if (this.done) return;
+        const text = script.decide();
+        if (text === null) return;
+        const result = Object.assign([{ transcript: text, confidence: script.confidence }], { isFinal: true });
+        this.done = true;
+        script.onAnswer?.();
+        this.onresult?.({ resultIndex: 0, results: [result] });
+        this.onend?.();
+      }, script.delayMs());
+    }
+    stop(): void {
+      this.abort();
+    }
+    abort(): void {
+      if (this.done) return;
+      this.done = true;
+      this.onend?.();
+    }
+  }
+  if (script.onDevice !== undefined) {
+    const answer = script.onDevice ? 'available' : 'unavailable';
+    Object.assign(ScriptedRecognition, { available: () => Promise.resolve(answer) });
+  }
+  Object.defineProperty(window, 'SpeechRecognition', { value: ScriptedRecognition, configurable: true });
+  Object.defineProperty(window, 'webkitSpeechRecognition', { value: ScriptedRecognition, configurable: true });
+}
+
 // Headless Chromium cannot speak or listen: both are replaced before the app loads. The fake
 // recogniser answers each turn from what the screen shows (stop, item, what it expects, the phase).
 function fakeSpeech(p: SpeechPlan): void {
@@ -138,47 +192,17 @@ function fakeSpeech(p: SpeechPlan): void {
     return record(expects === 'check' ? 'good' : measure(expects, key));
   };
 
-  class FakeRecognition {
-    // Without `onDevice`, recognition needs a network, as a browser's server-side recogniser does.
-    static available(): Promise<string> {
-      return Promise.resolve(p.onDevice ? 'available' : 'unavailable');
-    }
-    processLocally = false;
-    lang = '';
-    continuous = false;
-    interimResults = false;
-    maxAlternatives = 1;
-    onresult: ((event: unknown) => void) | null = null;
-    onerror: ((event: unknown) => void) | null = null;
-    onend: (() => void) | null = null;
-    private done = false;
-    start(): void {
-      // After React has shown the new state; a note is talked for a few seconds, as a driver would.
-      const noting = document.querySelector<HTMLElement>('[data-testid="walkaround-item"]')?.dataset.phase === 'noting';
-      setTimeout(
-        () => {
-          if (this.done) return;
-          const text = decide();
-          // Silence: the recogniser says nothing at all, as a driver at work would.
-          if (text === null) return;
-          const result = Object.assign([{ transcript: text, confidence: 0.95 }], { isFinal: true });
-          this.done = true;
-          answeredAt.push(performance.now());
-          this.onresult?.({ resultIndex: 0, results: [result] });
-          this.onend?.();
-        },
-        noting ? (p.noteMs ?? 2500) : (p.answerMs ?? 40),
-      );
-    }
-    stop(): void {
-      this.abort();
-    }
-    abort(): void {
-      if (this.done) return;
-      this.done = true;
-      this.onend?.();
-    }
-  }
+  scriptedRecognition({
+    decide,
+    // After React has shown the new state; a note is talked for a few seconds, as a driver would.
+    delayMs: () =>
+      document.querySelector<HTMLElement>('[data-testid="walkaround-item"]')?.dataset.phase === 'noting'
+        ? (p.noteMs ?? 2500)
+        : (p.answerMs ?? 40),
+    confidence: 0.95,
+    onDevice: p.onDevice ?? false,
+    onAnswer: () => answeredAt.push(performance.now()),
+  });
   class FakeUtterance {
     lang = '';
     rate = 1;
@@ -206,14 +230,40 @@ function fakeSpeech(p: SpeechPlan): void {
   };
   Object.defineProperty(window, 'speechSynthesis', { value: synthesis, configurable: true });
   Object.defineProperty(window, 'SpeechSynthesisUtterance', { value: FakeUtterance, configurable: true });
-  Object.defineProperty(window, 'SpeechRecognition', { value: FakeRecognition, configurable: true });
-  Object.defineProperty(window, 'webkitSpeechRecognition', { value: FakeRecognition, configurable: true });
+}
+
+// An init script from a function and its JSON argument, with scriptedRecognition beside it. Sent as
+// source text: a compiler that keeps function names (tsx, for the benchmarks) wraps named functions
+// in a `__name` helper the page lacks, so the page gets a stand-in.
+function initScript<Arg>(run: (arg: Arg) => void, arg: Arg): { content: string } {
+  return {
+    content:
+      'var __name = (fn) => fn;\n' +
+      `var scriptedRecognition = ${scriptedRecognition.toString()};\n` +
+      `(${run.toString()})(${JSON.stringify(arg)});`,
+  };
 }
 
 export async function installFakeSpeech(page: Page, plan: SpeechPlan): Promise<void> {
-  // Sent as source text. A compiler that keeps function names (tsx, for the benchmarks) wraps named
-  // functions in a `__name` helper the page lacks, so the page gets a stand-in.
-  await page.addInitScript({
-    content: `var __name = (fn) => fn;\n(${fakeSpeech.toString()})(${JSON.stringify(plan)});`,
+  await page.addInitScript(initScript(fakeSpeech, plan));
+}
+
+// A student's narration, one phrase per listening turn (1.5 s after it starts), then silence.
+function scriptedNarration(phrases: string[]): void {
+  let next = 0;
+  scriptedRecognition({
+    decide: () => {
+      const text = phrases[next];
+      if (text === undefined) return null;
+      next += 1;
+      return text;
+    },
+    delayMs: () => 1500,
+    confidence: 0.92,
   });
+}
+
+// Headless Chromium cannot recognise speech: the recogniser is replaced before the app loads.
+export async function installScriptedNarration(page: Page, lines: readonly string[]): Promise<void> {
+  await page.addInitScript(initScript(scriptedNarration, [...lines]));
 }

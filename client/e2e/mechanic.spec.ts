@@ -1,59 +1,31 @@
-import { dirname, join } from 'node:path';
-import { fileURLToPath } from 'node:url';
 import { expect, test, type APIRequestContext, type Browser, type Page } from '@playwright/test';
 import type { InspectionPage, InspectionResponse, VehicleResponse } from '@yardcall/shared';
-import config from '../playwright.config';
 import { installFakeSpeech } from './fake-speech';
-import { DEMO_PASSWORD, expectNoAxeViolations, screenshot, signIn } from './support';
+import {
+  apiHeaders,
+  audioFixture,
+  drawSignature,
+  expectNoAxeViolations,
+  screenshot,
+  signIn,
+  withFakeMicrophone,
+} from './support';
 
-const here = dirname(fileURLToPath(import.meta.url));
-const NOTE_WAV = join(here, '..', '..', 'test-audio', 'fixtures', 'en-note.wav');
 const UNIT = 'KV-102';
 // The steer tire's tread, said below the 4/32 in a steer tire needs (49 CFR 393.75(b)).
 const LOW_TREAD_KEY = 'u1.axle1.left.tire.tread';
 const DRIVER_WORDS = 'worn to the wear bars on the outside edge';
 const REPAIR_NOTE = 'Replaced the left steer tire; new tread 18/32 in.';
 
-const configArgs = config.use?.launchOptions?.args ?? [];
 // The mechanic plays the driver's note without a click on the player's own shadow button; the
 // driver's phone records from the fake microphone.
-test.use({
-  launchOptions: {
-    ...config.use?.launchOptions,
-    args: [
-      ...configArgs,
-      '--autoplay-policy=no-user-gesture-required',
-      '--use-fake-ui-for-media-stream',
-      '--use-fake-device-for-media-stream',
-      `--use-file-for-fake-audio-capture=${NOTE_WAV}%noloop`,
-    ],
-  },
-});
-
-async function login(request: APIRequestContext, email: string): Promise<Record<string, string>> {
-  const response = await request.post('/api/auth/login', { data: { email, password: DEMO_PASSWORD } });
-  expect(response.ok()).toBe(true);
-  const { accessToken } = (await response.json()) as { accessToken: string };
-  return { Authorization: `Bearer ${accessToken}` };
-}
+test.use(withFakeMicrophone(audioFixture('en-note.wav'), { autoplay: true }));
 
 async function vehicleByUnit(request: APIRequestContext, headers: Record<string, string>): Promise<VehicleResponse> {
   const vehicles = (await (await request.get('/api/vehicles', { headers })).json()) as VehicleResponse[];
   const vehicle = vehicles.find((v) => v.unitNumber === UNIT);
   if (!vehicle) throw new Error(`No ${UNIT} in the demo fleet.`);
   return vehicle;
-}
-
-async function drawSignature(page: Page): Promise<void> {
-  const pad = page.getByTestId('signature-pad');
-  await pad.scrollIntoViewIfNeeded();
-  const box = await pad.boundingBox();
-  if (!box) throw new Error('The signature pad has no box.');
-  await page.mouse.move(box.x + 20, box.y + box.height / 2);
-  await page.mouse.down();
-  await page.mouse.move(box.x + box.width / 2, box.y + 20, { steps: 5 });
-  await page.mouse.move(box.x + box.width - 20, box.y + box.height - 20, { steps: 5 });
-  await page.mouse.up();
 }
 
 async function newPage(browser: Browser, mobile: boolean): Promise<Page> {
@@ -94,7 +66,7 @@ async function driverReportsLowTreadByVoice(browser: Browser, request: APIReques
   await expect(phone.getByTestId('report-view')).toBeVisible({ timeout: 30_000 });
   await phone.context().close();
 
-  const headers = await login(request, 'tomas.reyes@yardcall.test');
+  const headers = await apiHeaders(request, 'tomas.reyes@yardcall.test');
   const list = (await (await request.get('/api/inspections', { headers })).json()) as InspectionPage;
   for (const item of list.items) {
     const detail = (await (await request.get(`/api/inspections/${item.id}`, { headers })).json()) as InspectionResponse;
@@ -113,7 +85,7 @@ test('a safety defect from a walk-around: the mechanic certifies it, the unit re
   expect(report.notes.map((note) => note.itemKey)).toEqual([LOW_TREAD_KEY]);
   expect(report.defects.map((d) => d.itemKey)).toEqual([LOW_TREAD_KEY]);
   expect(report.defects[0]?.safety).toBe(true);
-  const driverHeaders = await login(request, 'tomas.reyes@yardcall.test');
+  const driverHeaders = await apiHeaders(request, 'tomas.reyes@yardcall.test');
   expect((await vehicleByUnit(request, driverHeaders)).status).toBe('out_of_service');
 
   // The shop.
@@ -198,7 +170,9 @@ test('a safety defect from a walk-around: the mechanic certifies it, the unit re
   await review.getByTestId('sign-acknowledgement').click();
   await expect(cab.getByTestId('glove-screen')).toBeVisible({ timeout: 30_000 });
   const signatures = (await (
-    await request.get(`/api/inspections/${report.id}`, { headers: await login(request, 'supervisor@yardcall.test') })
+    await request.get(`/api/inspections/${report.id}`, {
+      headers: await apiHeaders(request, 'supervisor@yardcall.test'),
+    })
   ).json()) as InspectionResponse;
   expect(signatures.signatures.map((s) => s.role).sort()).toEqual(['driver', 'mechanic', 'next_driver']);
   await cab.context().close();

@@ -5,7 +5,7 @@ import { stopChild } from '../../scripts/lib/run';
 import { startServer, type RunningServer } from '../../scripts/lib/server';
 import { freePort } from '../../scripts/lib/stack';
 import { installFakeSpeech } from './fake-speech';
-import { DEMO_PASSWORD, screenshot } from './support';
+import { DEMO_PASSWORD, pageHeaders, screenshot } from './support';
 
 // From a cold start with no signal to a signed report: the service worker opens the app, the phone
 // keeps what the start needs, the report is signed offline and arrives once, whole, when the
@@ -14,12 +14,6 @@ import { DEMO_PASSWORD, screenshot } from './support';
 const STRAIGHT_TRUCK = 'KV-S31';
 
 test.use({ viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true });
-
-async function tokenOf(page: Page): Promise<string> {
-  const token = await page.evaluate(() => localStorage.getItem('yardcall.token'));
-  expect(token).toBeTruthy();
-  return token ?? '';
-}
 
 // Resolves once the service worker controls the page and holds every precached file.
 async function waitForServiceWorker(page: Page): Promise<void> {
@@ -32,7 +26,7 @@ async function waitForServiceWorker(page: Page): Promise<void> {
 }
 
 async function inspectionByClientId(page: Page, baseUrl: string, clientId: string): Promise<InspectionResponse | null> {
-  const headers = { Authorization: `Bearer ${await tokenOf(page)}` };
+  const headers = await pageHeaders(page);
   const list = (await (
     await page.request.get(`${baseUrl}/api/inspections?limit=20`, { headers })
   ).json()) as InspectionPage;

@@ -1,45 +1,35 @@
-import { execFileSync } from 'node:child_process';
 import { readFileSync } from 'node:fs';
-import { dirname, join } from 'node:path';
-import { fileURLToPath } from 'node:url';
 import { expect, test, type APIRequestContext, type Page } from '@playwright/test';
 import {
   INSPECTION_CSV_COLUMNS,
   type ChecklistItem,
   type InspectionResponse,
-  type LoginResponse,
   type ResultUpsert,
   type VehicleResponse,
   type VoiceNoteResponse,
 } from '@yardcall/shared';
-import config from '../playwright.config';
-import { expectNoAxeViolations, screenshot } from './support';
+import {
+  apiHeaders,
+  audioFixture,
+  DEMO_PASSWORD,
+  expectNoAxeViolations,
+  pdfText,
+  screenshot,
+  withFakeMicrophone,
+} from './support';
 
-const here = dirname(fileURLToPath(import.meta.url));
-const NOTE_WAV = join(here, '..', '..', 'test-audio', 'fixtures', 'en-note-cracked-marker-lens.wav');
 const DRIVER_EMAIL = 'driver@yardcall.test';
 const SUPERVISOR_EMAIL = 'supervisor@yardcall.test';
-const PASSWORD = 'yardcall-demo';
 // The demo fleet's straight truck: one unit, no trailer to pick.
 const UNIT = 'KV-S31';
 const RUSHED_UNIT = 'KV-103';
 const WEBM_MAGIC = [0x1a, 0x45, 0xdf, 0xa3];
 
-const configArgs = config.use?.launchOptions?.args ?? [];
 test.use({
   viewport: { width: 1280, height: 900 },
   acceptDownloads: true,
-  launchOptions: {
-    ...config.use?.launchOptions,
-    args: [
-      ...configArgs,
-      '--use-fake-ui-for-media-stream',
-      '--use-fake-device-for-media-stream',
-      `--use-file-for-fake-audio-capture=${NOTE_WAV}%noloop`,
-      // The reviewer presses "play" by hand; the test's clicks count as that gesture.
-      '--autoplay-policy=no-user-gesture-required',
-    ],
-  },
+  // The reviewer presses "play" by hand; the test's clicks count as that gesture.
+  ...withFakeMicrophone(audioFixture('en-note-cracked-marker-lens.wav'), { autoplay: true }),
 });
 
 // The first test's inspection with its voice note, for the second.
@@ -50,13 +40,6 @@ interface Prepared {
   note: VoiceNoteResponse;
   defectItem: ChecklistItem;
   vehicle: VehicleResponse;
-}
-
-async function login(request: APIRequestContext, email: string): Promise<Record<string, string>> {
-  const response = await request.post('/api/auth/login', { data: { email, password: PASSWORD } });
-  expect(response.status(), await response.text()).toBe(200);
-  const body = (await response.json()) as LoginResponse;
-  return { Authorization: `Bearer ${body.accessToken}` };
 }
 
 // A real WebM/Opus note, recorded by Chromium's MediaRecorder from the fake microphone.
@@ -181,7 +164,7 @@ async function submitOnFirstFreeUnit(
 }
 
 async function prepare(page: Page): Promise<Prepared> {
-  const headers = await login(page.request, DRIVER_EMAIL);
+  const headers = await apiHeaders(page.request, DRIVER_EMAIL);
   const vehicles = (await (await page.request.get('/api/vehicles', { headers })).json()) as VehicleResponse[];
   const single = vehicles.filter((vehicle) => vehicle.kind !== 'trailer');
   const preferred = (unit: string) => [
@@ -216,7 +199,7 @@ async function prepare(page: Page): Promise<Prepared> {
 async function signIn(page: Page, email: string): Promise<void> {
   await page.goto('/');
   await page.getByLabel('E-mail address').fill(email);
-  await page.getByLabel('Password', { exact: true }).fill(PASSWORD);
+  await page.getByLabel('Password', { exact: true }).fill(DEMO_PASSWORD);
   await page.getByRole('button', { name: 'Sign in', exact: true }).click();
 }
 
@@ -355,12 +338,7 @@ test('a supervisor finds a defect report on the board and in the list, replays, 
   const pdfDownload = page.waitForEvent('download');
   await page.getByTestId('download-pdf').click();
   const pdfPath = await (await pdfDownload).path();
-  const { text: pdfText } = JSON.parse(
-    execFileSync('node', [join(here, '..', '..', 'server', 'test', 'pdf-text.mjs')], {
-      input: readFileSync(pdfPath),
-    }).toString(),
-  ) as { text: string };
-  const flat = pdfText.replace(/\s+/g, ' ');
+  const flat = pdfText(readFileSync(pdfPath)).replace(/\s+/g, ' ');
   expect(flat).toContain(UNIT);
   expect(flat).toContain(prepared.defectItem.title);
   expect(flat).toContain('sidewall bulge');
@@ -387,7 +365,7 @@ test('a note this browser says it cannot play is converted with ffmpeg.wasm, wit
       return type.toLowerCase().startsWith('audio/webm') ? '' : original.call(this, type);
     };
   });
-  const headers = await login(page.request, SUPERVISOR_EMAIL);
+  const headers = await apiHeaders(page.request, SUPERVISOR_EMAIL);
   const list = (await (
     await page.request.get('/api/inspections', { headers, params: { hasDefects: true } })
   ).json()) as { items: { id: string }[] };

@@ -1,8 +1,11 @@
+import { execFileSync } from 'node:child_process';
 import { mkdirSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import AxeBuilder from '@axe-core/playwright';
-import { expect, type Page } from '@playwright/test';
+import { expect, type APIRequestContext, type LaunchOptions, type Page } from '@playwright/test';
+import type { LoginResponse } from '@yardcall/shared';
+import { CHROMIUM_ARGS, CHROMIUM_PATH } from './chromium';
 
 export const DEMO_PASSWORD = 'yardcall-demo';
 
@@ -14,7 +17,9 @@ export const ROLE_HOMES = [
   { role: 'admin', email: 'admin@yardcall.test', path: '/admin', heading: 'Administration' },
 ] as const;
 
-export const screenshotDir = join(dirname(fileURLToPath(import.meta.url)), '..', '..', '.test-output', 'screenshots');
+export const repoRoot = join(dirname(fileURLToPath(import.meta.url)), '..', '..');
+
+export const screenshotDir = join(repoRoot, '.test-output', 'screenshots');
 mkdirSync(screenshotDir, { recursive: true });
 
 export async function signIn(page: Page, email: string, password = DEMO_PASSWORD): Promise<void> {
@@ -35,4 +40,65 @@ export async function expectNoAxeViolations(page: Page, context: string): Promis
 
 export async function screenshot(page: Page, name: string): Promise<void> {
   await page.screenshot({ path: join(screenshotDir, `${name}.png`), fullPage: true });
+}
+
+// A spoken recording from test-audio/fixtures.
+export function audioFixture(name: string): string {
+  return join(repoRoot, 'test-audio', 'fixtures', name);
+}
+
+// Chromium with a fake microphone that plays `audioFile` (once, or over and over) and grants the
+// microphone without asking; `autoplay` lets audio play without a click on the player itself.
+export function withFakeMicrophone(
+  audioFile: string,
+  options: { loop?: boolean; autoplay?: boolean } = {},
+): { launchOptions: LaunchOptions } {
+  return {
+    launchOptions: {
+      executablePath: CHROMIUM_PATH,
+      args: [
+        ...CHROMIUM_ARGS,
+        ...(options.autoplay ? ['--autoplay-policy=no-user-gesture-required'] : []),
+        '--use-fake-ui-for-media-stream',
+        '--use-fake-device-for-media-stream',
+        `--use-file-for-fake-audio-capture=${audioFile}${options.loop ? '' : '%noloop'}`,
+      ],
+    },
+  };
+}
+
+export type AuthHeaders = Record<string, string>;
+
+// Signs in through the API (no page) and gives the headers its calls need.
+export async function apiHeaders(request: APIRequestContext, email: string): Promise<AuthHeaders> {
+  const response = await request.post('/api/auth/login', { data: { email, password: DEMO_PASSWORD } });
+  expect(response.status(), await response.text()).toBe(200);
+  const { accessToken } = (await response.json()) as LoginResponse;
+  return { Authorization: `Bearer ${accessToken}` };
+}
+
+// The headers of the person signed in on this page (the app keeps the token in localStorage).
+export async function pageHeaders(page: Page): Promise<AuthHeaders> {
+  const token = await page.evaluate(() => localStorage.getItem('yardcall.token'));
+  expect(token).toBeTruthy();
+  return { Authorization: `Bearer ${token ?? ''}` };
+}
+
+// A stroke across the signature pad, as a finger or a mouse would draw it.
+export async function drawSignature(page: Page): Promise<void> {
+  const pad = page.getByTestId('signature-pad');
+  await pad.scrollIntoViewIfNeeded();
+  const box = await pad.boundingBox();
+  if (!box) throw new Error('The signature pad has no box.');
+  await page.mouse.move(box.x + 20, box.y + box.height / 2);
+  await page.mouse.down();
+  await page.mouse.move(box.x + box.width / 2, box.y + 20, { steps: 5 });
+  await page.mouse.move(box.x + box.width - 20, box.y + box.height - 20, { steps: 5 });
+  await page.mouse.up();
+}
+
+// A PDF's text, read by the server suite's extractor (pdfjs-dist in plain Node).
+export function pdfText(pdf: Buffer): string {
+  const output = execFileSync('node', [join(repoRoot, 'server', 'test', 'pdf-text.mjs')], { input: pdf });
+  return (JSON.parse(output.toString()) as { text: string }).text;
 }

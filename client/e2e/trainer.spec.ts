@@ -1,14 +1,10 @@
-import { dirname, join } from 'node:path';
-import { fileURLToPath } from 'node:url';
 import { expect, test, type Page } from '@playwright/test';
 import { DEFAULT_DISPLAY_SETTINGS, type TrainingAttemptListItem } from '@yardcall/shared';
-import config from '../playwright.config';
-import { expectNoAxeViolations, screenshot, signIn } from './support';
+import { installScriptedNarration } from './fake-speech';
+import { audioFixture, expectNoAxeViolations, pageHeaders, screenshot, signIn, withFakeMicrophone } from './support';
 
-const here = dirname(fileURLToPath(import.meta.url));
-const root = join(here, '..', '..');
 // Any spoken fixture will do: the recording only needs sound in it; it loops while the student talks.
-const MIC_WAV = join(root, 'test-audio', 'fixtures', 'en-note-cracked-marker-lens.wav');
+const MIC_WAV = audioFixture('en-note-cracked-marker-lens.wav');
 const STUDENT = 'student@yardcall.test';
 const TRAINER = 'trainer@yardcall.test';
 
@@ -19,67 +15,7 @@ const NARRATION = [
   'left steer tire tread depth looks good no cuts or bulges',
 ];
 
-const configArgs = config.use?.launchOptions?.args ?? [];
-test.use({
-  launchOptions: {
-    ...config.use?.launchOptions,
-    args: [
-      ...configArgs,
-      '--use-fake-ui-for-media-stream',
-      '--use-fake-device-for-media-stream',
-      `--use-file-for-fake-audio-capture=${MIC_WAV}`,
-    ],
-  },
-});
-
-// Headless Chromium cannot recognise speech: the recogniser is replaced before the app loads by a
-// scripted one that hands over one phrase per listening turn, then stays silent.
-async function installScriptedNarration(page: Page, lines: readonly string[]): Promise<void> {
-  await page.addInitScript(
-    (phrases: string[]) => {
-      let next = 0;
-      class ScriptedRecognition {
-        lang = '';
-        continuous = false;
-        interimResults = false;
-        maxAlternatives = 1;
-        onresult: ((event: unknown) => void) | null = null;
-        onerror: ((event: unknown) => void) | null = null;
-        onend: (() => void) | null = null;
-        private done = false;
-        start(): void {
-          const text = phrases[next];
-          if (text === undefined) return;
-          next += 1;
-          setTimeout(() => {
-            if (this.done) return;
-            this.done = true;
-            const result = Object.assign([{ transcript: text, confidence: 0.92 }], { isFinal: true });
-            this.onresult?.({ resultIndex: 0, results: [result] });
-            this.onend?.();
-          }, 1500);
-        }
-        stop(): void {
-          this.abort();
-        }
-        abort(): void {
-          if (this.done) return;
-          this.done = true;
-          this.onend?.();
-        }
-      }
-      Object.defineProperty(window, 'SpeechRecognition', { value: ScriptedRecognition, configurable: true });
-      Object.defineProperty(window, 'webkitSpeechRecognition', { value: ScriptedRecognition, configurable: true });
-    },
-    [...lines],
-  );
-}
-
-async function token(page: Page): Promise<string> {
-  const value = await page.evaluate(() => localStorage.getItem('yardcall.token'));
-  expect(value).toBeTruthy();
-  return value ?? '';
-}
+test.use(withFakeMicrophone(MIC_WAV, { loop: true }));
 
 async function signInAs(page: Page, email: string, heading: string): Promise<void> {
   await page.goto('/sign-in');
@@ -121,7 +57,7 @@ test('a student narrates a practice walk-around, the trainer reviews it, the stu
   await expectNoAxeViolations(page, 'the practice screen once sent');
 
   const mine = (await (
-    await page.request.get('/api/training/attempts', { headers: { Authorization: `Bearer ${await token(page)}` } })
+    await page.request.get('/api/training/attempts', { headers: await pageHeaders(page) })
   ).json()) as TrainingAttemptListItem[];
   const attempt = mine[0];
   expect(attempt?.status).toBe('finished');
@@ -186,7 +122,7 @@ test('a student narrates a practice walk-around, the trainer reviews it, the stu
   await expectNoAxeViolations(page, "the student's attempt feedback");
 
   // Night theme at 200 % text: the same page stays readable and passes axe.
-  const headers = { Authorization: `Bearer ${await token(page)}` };
+  const headers = await pageHeaders(page);
   const night = await page.request.patch('/api/auth/me/settings', {
     headers,
     data: { ...DEFAULT_DISPLAY_SETTINGS, theme: 'night', textScale: 200 },

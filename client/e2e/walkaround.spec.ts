@@ -1,6 +1,3 @@
-import { execFileSync } from 'node:child_process';
-import { dirname, join } from 'node:path';
-import { fileURLToPath } from 'node:url';
 import { expect, test, type Page } from '@playwright/test';
 import {
   DEFAULT_DISPLAY_SETTINGS,
@@ -10,40 +7,24 @@ import {
   type InspectionResponse,
   type VehicleResponse,
 } from '@yardcall/shared';
-import config from '../playwright.config';
 import { installFakeSpeech } from './fake-speech';
-import { expectNoAxeViolations, screenshot, signIn } from './support';
+import {
+  audioFixture,
+  drawSignature,
+  expectNoAxeViolations,
+  pageHeaders,
+  pdfText,
+  screenshot,
+  signIn,
+  withFakeMicrophone,
+} from './support';
 
-const here = dirname(fileURLToPath(import.meta.url));
-const root = join(here, '..', '..');
-const NOTE_WAV = join(root, 'test-audio', 'fixtures', 'en-note-cracked-marker-lens.wav');
-// The server suite's PDF text extractor (pdfjs-dist in plain Node).
-const PDF_TEXT = join(root, 'server', 'test', 'pdf-text.mjs');
+const NOTE_WAV = audioFixture('en-note-cracked-marker-lens.wav');
 
-const configArgs = config.use?.launchOptions?.args ?? [];
-test.use({
-  viewport: { width: 390, height: 844 },
-  hasTouch: true,
-  isMobile: true,
-  launchOptions: {
-    ...config.use?.launchOptions,
-    args: [
-      ...configArgs,
-      '--use-fake-ui-for-media-stream',
-      '--use-fake-device-for-media-stream',
-      `--use-file-for-fake-audio-capture=${NOTE_WAV}%noloop`,
-    ],
-  },
-});
-
-async function token(page: Page): Promise<string> {
-  const value = await page.evaluate(() => localStorage.getItem('yardcall.token'));
-  expect(value).toBeTruthy();
-  return value ?? '';
-}
+test.use({ viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true, ...withFakeMicrophone(NOTE_WAV) });
 
 async function latestInspection(page: Page): Promise<InspectionResponse> {
-  const headers = { Authorization: `Bearer ${await token(page)}` };
+  const headers = await pageHeaders(page);
   const list = (await (await page.request.get('/api/inspections', { headers })).json()) as InspectionPage;
   const first = list.items[0];
   expect(first).toBeTruthy();
@@ -61,18 +42,6 @@ async function startUnit(page: Page, unit: string, trailer: 'none' | null): Prom
     .click();
   if (trailer === 'none') await page.getByTestId('no-trailer').click();
   await expect(page.getByTestId('glove-screen')).toBeVisible();
-}
-
-async function drawSignature(page: Page): Promise<void> {
-  const pad = page.getByTestId('signature-pad');
-  await pad.scrollIntoViewIfNeeded();
-  const box = await pad.boundingBox();
-  if (!box) throw new Error('The signature pad has no box.');
-  await page.mouse.move(box.x + 20, box.y + box.height / 2);
-  await page.mouse.down();
-  await page.mouse.move(box.x + box.width / 2, box.y + 20, { steps: 5 });
-  await page.mouse.move(box.x + box.width - 20, box.y + box.height - 20, { steps: 5 });
-  await page.mouse.up();
 }
 
 test('a tractor and trailer pre-trip by voice as a competent driver answers: one answer a stop, skip and return, a low steer tread confirmed, then sign, submit and the PDF', async ({
@@ -132,13 +101,11 @@ test('a tractor and trailer pre-trip by voice as a competent driver answers: one
   expect(inspection.signatures.find((s) => s.role === 'driver')?.hasDrawing).toBe(true);
 
   const pdf = await page.request.get(`/api/inspections/${inspection.id}/report.pdf`, {
-    headers: { Authorization: `Bearer ${await token(page)}` },
+    headers: await pageHeaders(page),
   });
   expect(pdf.status()).toBe(200);
   expect(pdf.headers()['content-type']).toContain('application/pdf');
-  const { text } = JSON.parse(execFileSync('node', [PDF_TEXT], { input: await pdf.body() }).toString()) as {
-    text: string;
-  };
+  const text = pdfText(await pdf.body());
   const treadItem = items.find((item) => item.key === lowTreadKey);
   expect(text).toContain('KV-101');
   expect(text).toContain(treadItem?.title ?? 'missing');
@@ -151,7 +118,7 @@ test('a straight truck by voice the way drivers talk: good except, one by one, f
   test.setTimeout(240_000);
   await signIn(page, 'driver@yardcall.test');
   await expect(page.getByRole('heading', { level: 1, name: 'Driver home' })).toBeVisible();
-  const headers = { Authorization: `Bearer ${await token(page)}` };
+  const headers = await pageHeaders(page);
   const vehicles = (await (await page.request.get('/api/vehicles', { headers })).json()) as VehicleResponse[];
   const truck = vehicles.find((vehicle) => vehicle.unitNumber === 'KV-S31');
   if (!truck) throw new Error('The demo fleet has no KV-S31.');
@@ -289,14 +256,14 @@ test('the glove screen at 390 x 844 in night theme at 200 % text', async ({ page
 
   // The demo driver's settings go back to the defaults, so no later flow starts from this test's.
   const reset = await page.request.patch('/api/auth/me/settings', {
-    headers: { Authorization: `Bearer ${await token(page)}` },
+    headers: await pageHeaders(page),
     data: DEFAULT_DISPLAY_SETTINGS,
   });
   expect(reset.ok()).toBe(true);
 });
 
 async function inspectionByClientId(page: Page, clientId: string): Promise<InspectionResponse> {
-  const headers = { Authorization: `Bearer ${await token(page)}` };
+  const headers = await pageHeaders(page);
   const list = (await (await page.request.get('/api/inspections', { headers })).json()) as InspectionPage;
   for (const item of list.items) {
     const detail = (await (
