@@ -72,10 +72,10 @@ export default tseslint.config(
     rules: { 'import-x/no-default-export': 'off' },
   },
   {
-    // The domain runs anywhere: no framework, no database, no Node. Its command-line faces (cli/) and
-    // the bench harness (bench/) are the exceptions: they run under Node by design.
+    // The domain runs anywhere: no framework, no database, no Node. Its command-line faces (cli/) are
+    // the exception: they run under Node by design.
     files: ['shared/src/**/*.ts'],
-    ignores: ['shared/src/cli/**', 'shared/src/bench/**'],
+    ignores: ['shared/src/cli/**'],
     rules: {
       'no-restricted-imports': [
         'error',

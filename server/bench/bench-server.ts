@@ -3,16 +3,9 @@
 import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
 import { createServer } from 'node:net';
 import { join } from 'node:path';
+import { callsPerSecond, timingFigure, type BenchFigure } from '@yardcall/shared/bench';
 
-export interface BenchFigure {
-  name: string;
-  unit: string;
-  p50: number;
-  p95: number;
-  p99: number;
-  goal: number;
-  ratioToHealth: number;
-}
+export type { BenchFigure } from '@yardcall/shared/bench';
 
 const SERVER_DIR = join(__dirname, '..');
 
@@ -67,11 +60,6 @@ export async function startServer(databaseUrl: string): Promise<{ url: string; c
   throw new Error(`The server did not answer ${url}/api/health within 60 s.`);
 }
 
-export function percentile(sorted: readonly number[], p: number): number {
-  const index = Math.min(sorted.length - 1, Math.max(0, Math.ceil((p / 100) * sorted.length) - 1));
-  return sorted[index] ?? Number.NaN;
-}
-
 const HEALTH_CALLS = 1000;
 
 // The same machine's floor in the same run, in calls a second: how much of a figure is the route and
@@ -82,21 +70,12 @@ export async function healthPerSecond(url: string): Promise<number> {
   return HEALTH_CALLS / ((performance.now() - began) / 1000);
 }
 
-const round = (n: number) => Math.round(n * 100) / 100;
-
 // One figure from a route's timings in ms: its percentiles beside the p95 goal, and its calls a second
 // as a share of the health floor.
-export function timingFigure(name: string, timings: readonly number[], goal: number, floor: number): BenchFigure {
-  const sorted = [...timings].sort((a, b) => a - b);
-  const perSecond = timings.length / (timings.reduce((sum, ms) => sum + ms, 0) / 1000);
+export function routeFigure(name: string, timings: readonly number[], goal: number, floor: number): BenchFigure {
   return {
-    name,
-    unit: 'ms',
-    p50: round(percentile(sorted, 50)),
-    p95: round(percentile(sorted, 95)),
-    p99: round(percentile(sorted, 99)),
-    goal,
-    ratioToHealth: Math.round((perSecond / floor) * 1000) / 1000,
+    ...timingFigure(name, timings, goal),
+    ratioToHealth: Math.round((callsPerSecond(timings) / floor) * 1000) / 1000,
   };
 }
 

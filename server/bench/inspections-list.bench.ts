@@ -4,7 +4,7 @@
 // Run: npm run build -w shared && npm run build -w server && DATABASE_URL=... npx tsx server/bench/inspections-list.bench.ts
 import type { InspectionPage, LoginResponse } from '@yardcall/shared';
 import { Client } from 'pg';
-import { healthPerSecond, printFigures, runScript, startServer, timingFigure, type BenchFigure } from './bench-server';
+import { healthPerSecond, printFigures, runScript, startServer, routeFigure, type BenchFigure } from './bench-server';
 
 const INSPECTIONS = 100_000;
 // More units than the demo's seven: copies of the seeded configurations under their own numbers.
@@ -181,7 +181,7 @@ export async function runInspectionsListBench(databaseUrl = process.env.DATABASE
     ];
     const floor = await healthPerSecond(url);
     return runs.map(([what, timings]) =>
-      timingFigure(`GET /api/inspections (${INSPECTIONS / 1000}k rows), ${what}`, timings, GOAL_P95_MS, floor),
+      routeFigure(`GET /api/inspections (${INSPECTIONS / 1000}k rows), ${what}`, timings, GOAL_P95_MS, floor),
     );
   } finally {
     child.kill('SIGTERM');

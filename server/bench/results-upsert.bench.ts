@@ -3,7 +3,7 @@
 // Run: npm run build -w shared && npm run build -w server && DATABASE_URL=... npx tsx server/bench/results-upsert.bench.ts
 import type { ChecklistItem, InspectionResponse, LoginResponse, ResultUpsert, VehicleResponse } from '@yardcall/shared';
 import { randomUUID } from 'node:crypto';
-import { healthPerSecond, printFigures, runScript, startServer, timingFigure, type BenchFigure } from './bench-server';
+import { healthPerSecond, printFigures, runScript, startServer, routeFigure, type BenchFigure } from './bench-server';
 
 const CALLS = 200;
 const WARMUP = 20;
@@ -110,7 +110,7 @@ export async function runResultsUpsertBench(databaseUrl = process.env.DATABASE_U
     for (const [n, each] of fresh.entries()) first.push(await put(each, n));
 
     const floor = await healthPerSecond(url);
-    const figure = (name: string, timings: readonly number[]) => timingFigure(name, timings, GOAL_P95_MS, floor);
+    const figure = (name: string, timings: readonly number[]) => routeFigure(name, timings, GOAL_P95_MS, floor);
     return [
       figure(`PUT /api/inspections/:id/results, ${ITEMS_PER_CALL} items answered again`, again),
       figure(`PUT /api/inspections/:id/results, ${ITEMS_PER_CALL} first answers`, first),

@@ -1,2 +1,2 @@
 // The bench harness's surface: what the areas' benchmarks and the scripts that report them use.
-export { measure, singleFigure, timingFigure, type BenchFigure, type BenchResult } from './measure.js';
+export { callsPerSecond, measure, singleFigure, timingFigure, type BenchFigure, type BenchResult } from './measure.js';

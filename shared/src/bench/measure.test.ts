@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { measure, percentile, singleFigure, timingFigure } from './measure.js';
+import { callsPerSecond, measure, percentile, singleFigure, timingFigure } from './measure.js';
 
 describe('benchmark timing', () => {
   it('takes the nearest-rank percentile of sorted timings', () => {
@@ -42,5 +42,9 @@ describe('benchmark timing', () => {
       p99: 148.2,
       goal: 150,
     });
+  });
+
+  it('counts the calls a second of timings taken one after another', () => {
+    expect(callsPerSecond([2, 3, 5])).toBe(300);
   });
 });

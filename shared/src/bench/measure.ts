@@ -1,6 +1,5 @@
 // The figures every benchmark reports (shared's, the server's, the browser's), and timing: run a
-// function many times and report its percentiles in milliseconds.
-import { performance } from 'node:perf_hooks';
+// function many times and report its percentiles in milliseconds. `performance` is the platform's own.
 
 export interface BenchFigure {
   name: string;
@@ -58,6 +57,11 @@ function percentiles(
 export function timingFigure(name: string, timings: readonly number[], goal: number): BenchFigure {
   const sorted = [...timings].sort((a, b) => a - b);
   return { name, unit: 'ms', ...percentiles(sorted, round2), goal };
+}
+
+// Calls a second of timings taken one after another.
+export function callsPerSecond(timings: readonly number[]): number {
+  return timings.length / (timings.reduce((sum, ms) => sum + ms, 0) / 1000);
 }
 
 // `fn` gets the run's number, counting warm-up runs first, so callers can cycle through inputs.
