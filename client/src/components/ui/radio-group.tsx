@@ -53,7 +53,7 @@ export function RadioGroup<Value extends string>({
               value={choice}
               checked={value === choice}
               onChange={() => onChange(choice)}
-              className="size-6"
+              className="size-6 shrink-0"
             />
             <span className={look === 'tiles' ? 'font-bold' : undefined}>{labelOf(choice)}</span>
           </label>
