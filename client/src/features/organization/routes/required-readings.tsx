@@ -1,16 +1,13 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { useTranslation } from 'react-i18next';
-import { ErrorAlert, Loading } from '@/components/ui/alert';
 import { PageHeading, Section } from '@/components/ui/layout';
-import { describeError } from '@/lib/errors';
+import { QueryState } from '@/components/ui/query-state';
+import { ensuringLoader } from '@/lib/route-loader';
 import { currentOrganizationQueryOptions, useCurrentOrganization } from '@/lib/api/organizations';
 import { RequiredReadingsForm } from '../components/required-readings-form';
 
 export function requiredReadingsLoader(queryClient: QueryClient) {
-  return async () => {
-    await queryClient.ensureQueryData(currentOrganizationQueryOptions());
-    return null;
-  };
+  return ensuringLoader(queryClient, currentOrganizationQueryOptions());
 }
 
 export function RequiredReadingsRoute() {
@@ -22,9 +19,7 @@ export function RequiredReadingsRoute() {
       <Section title={t('readings.settingTitle')} id="readings-setting">
         <p className="mb-2">{t('readings.byDefault')}</p>
         <p className="mb-4">{t('readings.noGauge')}</p>
-        {organization.isPending ? <Loading label={t('common.loading')} /> : null}
-        {organization.isError ? <ErrorAlert>{describeError(organization.error)}</ErrorAlert> : null}
-        {organization.data ? <RequiredReadingsForm organization={organization.data} /> : null}
+        <QueryState query={organization}>{(current) => <RequiredReadingsForm organization={current} />}</QueryState>
       </Section>
     </div>
   );

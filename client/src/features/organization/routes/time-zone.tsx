@@ -1,16 +1,13 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { useTranslation } from 'react-i18next';
-import { ErrorAlert, Loading } from '@/components/ui/alert';
 import { PageHeading, Section } from '@/components/ui/layout';
-import { describeError } from '@/lib/errors';
+import { QueryState } from '@/components/ui/query-state';
+import { ensuringLoader } from '@/lib/route-loader';
 import { timeZoneQueryOptions, useTimeZone } from '@/lib/api/organizations';
 import { TimeZoneForm } from '../components/time-zone-form';
 
 export function timeZoneLoader(queryClient: QueryClient) {
-  return async () => {
-    await queryClient.ensureQueryData(timeZoneQueryOptions());
-    return null;
-  };
+  return ensuringLoader(queryClient, timeZoneQueryOptions());
 }
 
 export function TimeZoneRoute() {
@@ -19,13 +16,13 @@ export function TimeZoneRoute() {
   return (
     <div data-testid="time-zone-screen">
       <PageHeading title={t('timeZone.title')} lead={t('timeZone.lead')} />
-      {timeZone.isPending ? <Loading label={t('common.loading')} /> : null}
-      {timeZone.isError ? <ErrorAlert>{describeError(timeZone.error)}</ErrorAlert> : null}
-      {timeZone.data ? (
-        <Section title={t('timeZone.settingTitle')} id="time-zone-setting">
-          <TimeZoneForm current={timeZone.data} />
-        </Section>
-      ) : null}
+      <QueryState query={timeZone}>
+        {(current) => (
+          <Section title={t('timeZone.settingTitle')} id="time-zone-setting">
+            <TimeZoneForm current={current} />
+          </Section>
+        )}
+      </QueryState>
     </div>
   );
 }

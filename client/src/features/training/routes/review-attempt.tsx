@@ -1,10 +1,9 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { useTranslation } from 'react-i18next';
 import { useParams, type LoaderFunctionArgs } from 'react-router';
-import { ErrorAlert, Loading } from '@/components/ui/alert';
 import { LinkButton } from '@/components/ui/link-button';
 import { PageHeading } from '@/components/ui/layout';
-import { describeError } from '@/lib/errors';
+import { QueryState } from '@/components/ui/query-state';
 import { attemptQueryOptions, useAttempt } from '@/lib/api/training';
 import { AttemptReview } from '../components/attempt-review';
 
@@ -30,13 +29,7 @@ export function ReviewAttemptRoute() {
           </LinkButton>
         }
       />
-      {attempt.isPending ? (
-        <Loading label={t('common.loading')} />
-      ) : attempt.isError ? (
-        <ErrorAlert>{describeError(attempt.error)}</ErrorAlert>
-      ) : (
-        <AttemptReview key={attempt.data.id} attempt={attempt.data} />
-      )}
+      <QueryState query={attempt}>{(data) => <AttemptReview key={data.id} attempt={data} />}</QueryState>
     </div>
   );
 }

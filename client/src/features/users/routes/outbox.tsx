@@ -1,17 +1,14 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { useTranslation } from 'react-i18next';
-import { ErrorAlert, Loading } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { PageHeading } from '@/components/ui/layout';
-import { describeError } from '@/lib/errors';
+import { QueryState } from '@/components/ui/query-state';
+import { ensuringLoader } from '@/lib/route-loader';
 import { outboxQueryOptions, useOutbox } from '@/lib/api/mail';
 import { OutboxList } from '../components/outbox-list';
 
 export function outboxLoader(queryClient: QueryClient) {
-  return async () => {
-    await queryClient.ensureQueryData(outboxQueryOptions());
-    return null;
-  };
+  return ensuringLoader(queryClient, outboxQueryOptions());
 }
 
 export function OutboxRoute() {
@@ -28,9 +25,7 @@ export function OutboxRoute() {
           </Button>
         }
       />
-      {outbox.isPending ? <Loading label={t('common.loading')} /> : null}
-      {outbox.isError ? <ErrorAlert>{describeError(outbox.error)}</ErrorAlert> : null}
-      {outbox.data ? <OutboxList mails={outbox.data} /> : null}
+      <QueryState query={outbox}>{(mails) => <OutboxList mails={mails} />}</QueryState>
     </>
   );
 }

@@ -1,21 +1,19 @@
 import { useState } from 'react';
 import type { QueryClient } from '@tanstack/react-query';
 import { useTranslation } from 'react-i18next';
-import { ErrorAlert, Loading, Notice } from '@/components/ui/alert';
+import { Notice } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { LinkButton } from '@/components/ui/link-button';
 import { PageHeading } from '@/components/ui/layout';
-import { describeError } from '@/lib/errors';
+import { QueryState } from '@/components/ui/query-state';
+import { ensuringLoader } from '@/lib/route-loader';
 import { useCurrentUser } from '@/lib/api/auth';
 import { useUsers, usersQueryOptions } from '@/lib/api/users';
 import { InviteUserDialog } from '../components/invite-user-dialog';
 import { UserList } from '../components/user-list';
 
 export function usersLoader(queryClient: QueryClient) {
-  return async () => {
-    await queryClient.ensureQueryData(usersQueryOptions());
-    return null;
-  };
+  return ensuringLoader(queryClient, usersQueryOptions());
 }
 
 export function UsersRoute() {
@@ -38,13 +36,13 @@ export function UsersRoute() {
         }
       />
       {invited ? <Notice>{t('users.invite.sent', { email: invited })}</Notice> : null}
-      {users.isPending ? <Loading label={t('common.loading')} /> : null}
-      {users.isError ? <ErrorAlert>{describeError(users.error)}</ErrorAlert> : null}
-      {users.data ? (
-        <div className="mt-4">
-          <UserList users={users.data} currentUserId={me.id} />
-        </div>
-      ) : null}
+      <QueryState query={users}>
+        {(list) => (
+          <div className="mt-4">
+            <UserList users={list} currentUserId={me.id} />
+          </div>
+        )}
+      </QueryState>
       <InviteUserDialog open={inviting} onClose={() => setInviting(false)} onInvited={setInvited} />
     </>
   );
