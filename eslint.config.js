@@ -40,7 +40,7 @@ export default tseslint.config(
   {
     languageOptions: {
       parserOptions: {
-        projectService: { allowDefaultProject: ['shared/vitest.config.ts', 'client/playwright.config.ts'] },
+        projectService: { allowDefaultProject: ['shared/vitest.config.ts'] },
         tsconfigRootDir: import.meta.dirname,
       },
       globals: { ...globals.node },

@@ -164,7 +164,7 @@ async function main(): Promise<void> {
 
   await Promise.all([buildIfChanged('server'), buildIfChanged('client')]);
   server = await startSeededServer(serverUrl, `yardcall_e2e_${runId}`);
-  await suite('browser', ['npx', 'playwright', 'test', '--config', 'client/playwright.config.ts'], {
+  await suite('browser', ['npx', 'playwright', 'test', '--config', 'client/e2e/playwright.config.ts'], {
     env: {
       BASE_URL: server.url,
       DATABASE_URL: server.databaseUrl,

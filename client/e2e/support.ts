@@ -4,7 +4,15 @@ import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import AxeBuilder from '@axe-core/playwright';
 import { expect, type APIRequestContext, type LaunchOptions, type Page } from '@playwright/test';
-import type { LoginResponse } from '@yardcall/shared';
+import {
+  buildChecklist,
+  type Checklist,
+  type InspectionPage,
+  type InspectionResponse,
+  type Locale,
+  type LoginResponse,
+  type VehicleResponse,
+} from '@yardcall/shared';
 import { CHROMIUM_ARGS, CHROMIUM_PATH } from './chromium';
 
 export const DEMO_PASSWORD = 'yardcall-demo';
@@ -101,4 +109,46 @@ export async function drawSignature(page: Page): Promise<void> {
 export function pdfText(pdf: Buffer): string {
   const output = execFileSync('node', [join(repoRoot, 'server', 'test', 'pdf-text.mjs')], { input: pdf });
   return (JSON.parse(output.toString()) as { text: string }).text;
+}
+
+// The pre-trip checklist the phone builds for one demo unit, in a language: what a flow expects to hear.
+export async function pretripChecklist(page: Page, unitNumber: string, locale: Locale): Promise<Checklist> {
+  const headers = await pageHeaders(page);
+  const vehicles = (await (await page.request.get('/api/vehicles', { headers })).json()) as VehicleResponse[];
+  const unit = vehicles.find((vehicle) => vehicle.unitNumber === unitNumber);
+  if (!unit) throw new Error(`The demo fleet has no ${unitNumber}.`);
+  return buildChecklist([{ unitNumber: unit.unitNumber, kind: unit.kind, config: unit.config }], 'pre_trip', locale);
+}
+
+export async function startUnit(page: Page, unit: string, trailer: 'none' | null): Promise<void> {
+  await page.goto('/driver/start');
+  await expect(page.getByRole('heading', { level: 1, name: 'Start an inspection' })).toBeVisible();
+  await page
+    .getByTestId('vehicle-picker')
+    .getByRole('button', { name: new RegExp(unit) })
+    .click();
+  if (trailer === 'none') await page.getByTestId('no-trailer').click();
+  await expect(page.getByTestId('glove-screen')).toBeVisible();
+}
+
+export async function latestInspection(page: Page): Promise<InspectionResponse> {
+  const headers = await pageHeaders(page);
+  const list = (await (await page.request.get('/api/inspections', { headers })).json()) as InspectionPage;
+  const first = list.items[0];
+  expect(first).toBeTruthy();
+  const response = await page.request.get(`/api/inspections/${first?.id ?? ''}`, { headers });
+  expect(response.status()).toBe(200);
+  return (await response.json()) as InspectionResponse;
+}
+
+export async function inspectionByClientId(page: Page, clientId: string): Promise<InspectionResponse> {
+  const headers = await pageHeaders(page);
+  const list = (await (await page.request.get('/api/inspections', { headers })).json()) as InspectionPage;
+  for (const item of list.items) {
+    const detail = (await (
+      await page.request.get(`/api/inspections/${item.id}`, { headers })
+    ).json()) as InspectionResponse;
+    if (detail.clientId === clientId) return detail;
+  }
+  throw new Error(`No inspection with client id ${clientId} on the server.`);
 }

@@ -1,7 +1,6 @@
 import { expect, test } from '@playwright/test';
-import { buildChecklist, type InspectionPage, type InspectionResponse, type VehicleResponse } from '@yardcall/shared';
 import { installFakeSpeech } from './fake-speech';
-import { signIn } from './support';
+import { inspectionByClientId, pretripChecklist, signIn, startUnit } from './support';
 
 // The Spanish answer words are a chunk of their own, fetched when a walk-around first needs them.
 const SPANISH_WORDS = /\/assets\/es-[\w-]+\.js$/;
@@ -16,16 +15,7 @@ test('a driver who says "español" at the second stop goes on in Spanish, prompt
   });
   await signIn(page, 'driver@yardcall.test');
   await expect(page.getByRole('heading', { level: 1, name: 'Driver home' })).toBeVisible();
-  const token = (await page.evaluate(() => localStorage.getItem('yardcall.token'))) ?? '';
-  const headers = { Authorization: `Bearer ${token}` };
-  const vehicles = (await (await page.request.get('/api/vehicles', { headers })).json()) as VehicleResponse[];
-  const truck = vehicles.find((vehicle) => vehicle.unitNumber === 'KV-S31');
-  if (!truck) throw new Error('The demo fleet has no KV-S31.');
-  const checklist = buildChecklist(
-    [{ unitNumber: truck.unitNumber, kind: truck.kind, config: truck.config }],
-    'pre_trip',
-    'en',
-  );
+  const checklist = await pretripChecklist(page, 'KV-S31', 'en');
   const [first, second, ...rest] = checklist.stops;
   if (!first || !second) throw new Error('The straight truck has fewer than two stops.');
   // After the switch the driver answers in Spanish; the stop that was pending is asked again.
@@ -36,12 +26,7 @@ test('a driver who says "español" at the second stop goes on in Spanish, prompt
   for (const stop of rest) script[`stop:${stop.key}`] = ['bien'];
   await installFakeSpeech(page, { answerTurns: null, skipAt: null, noteAt: null, lowTreadKey: null, script });
 
-  await page.goto('/driver/start');
-  await page
-    .getByTestId('vehicle-picker')
-    .getByRole('button', { name: /KV-S31/ })
-    .click();
-  await expect(page.getByTestId('glove-screen')).toBeVisible();
+  await startUnit(page, 'KV-S31', null);
   const clientId = decodeURIComponent(new URL(page.url()).pathname.split('/').pop() ?? '');
   expect(scripts.filter((path) => SPANISH_WORDS.test(path))).toEqual([]);
 
@@ -52,11 +37,7 @@ test('a driver who says "español" at the second stop goes on in Spanish, prompt
     return { spoken: w.__spoken, turns: w.__speechTurns };
   });
   // From the switch on the stops are said in Spanish, beginning with the one that was pending.
-  const spanish = buildChecklist(
-    [{ unitNumber: truck.unitNumber, kind: truck.kind, config: truck.config }],
-    'pre_trip',
-    'es',
-  );
+  const spanish = await pretripChecklist(page, 'KV-S31', 'es');
   const switched = spoken.findIndex((text) => text.startsWith('Cambiando a español.'));
   expect(spoken[switched]).toContain(spanish.stops[1]?.prompt);
   expect(spoken.slice(switched + 1)).toContain(spanish.stops[2]?.prompt);
@@ -67,11 +48,7 @@ test('a driver who says "español" at the second stop goes on in Spanish, prompt
   await page.getByLabel('Your full name').fill('Tomas Reyes');
   await page.getByTestId('submit-report').click();
   await expect(page.getByTestId('report-view')).toBeVisible({ timeout: 30_000 });
-  const list = (await (await page.request.get('/api/inspections', { headers })).json()) as InspectionPage;
-  const inspection = (await (
-    await page.request.get(`/api/inspections/${list.items[0]?.id ?? ''}`, { headers })
-  ).json()) as InspectionResponse;
-  expect(inspection.clientId).toBe(clientId);
+  const inspection = await inspectionByClientId(page, clientId);
   expect(inspection.results).toHaveLength(checklist.items.length);
   expect(inspection.results.filter((result) => result.answer !== 'pass')).toEqual([]);
 });

@@ -1,48 +1,24 @@
-import { expect, test, type Page } from '@playwright/test';
-import {
-  DEFAULT_DISPLAY_SETTINGS,
-  buildChecklist,
-  type ChecklistStop,
-  type InspectionPage,
-  type InspectionResponse,
-  type VehicleResponse,
-} from '@yardcall/shared';
+import { expect, test } from '@playwright/test';
+import { DEFAULT_DISPLAY_SETTINGS, type ChecklistStop } from '@yardcall/shared';
 import { installFakeSpeech } from './fake-speech';
 import {
   audioFixture,
   drawSignature,
   expectNoAxeViolations,
+  inspectionByClientId,
+  latestInspection,
   pageHeaders,
   pdfText,
+  pretripChecklist,
   screenshot,
   signIn,
+  startUnit,
   withFakeMicrophone,
 } from './support';
 
 const NOTE_WAV = audioFixture('en-note-cracked-marker-lens.wav');
 
 test.use({ viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true, ...withFakeMicrophone(NOTE_WAV) });
-
-async function latestInspection(page: Page): Promise<InspectionResponse> {
-  const headers = await pageHeaders(page);
-  const list = (await (await page.request.get('/api/inspections', { headers })).json()) as InspectionPage;
-  const first = list.items[0];
-  expect(first).toBeTruthy();
-  const response = await page.request.get(`/api/inspections/${first?.id ?? ''}`, { headers });
-  expect(response.status()).toBe(200);
-  return (await response.json()) as InspectionResponse;
-}
-
-async function startUnit(page: Page, unit: string, trailer: 'none' | null): Promise<void> {
-  await page.goto('/driver/start');
-  await expect(page.getByRole('heading', { level: 1, name: 'Start an inspection' })).toBeVisible();
-  await page
-    .getByTestId('vehicle-picker')
-    .getByRole('button', { name: new RegExp(unit) })
-    .click();
-  if (trailer === 'none') await page.getByTestId('no-trailer').click();
-  await expect(page.getByTestId('glove-screen')).toBeVisible();
-}
 
 test('a tractor and trailer pre-trip by voice as a competent driver answers: one answer a stop, skip and return, a low steer tread confirmed, then sign, submit and the PDF', async ({
   page,
@@ -118,15 +94,7 @@ test('a straight truck by voice the way drivers talk: good except, one by one, f
   test.setTimeout(240_000);
   await signIn(page, 'driver@yardcall.test');
   await expect(page.getByRole('heading', { level: 1, name: 'Driver home' })).toBeVisible();
-  const headers = await pageHeaders(page);
-  const vehicles = (await (await page.request.get('/api/vehicles', { headers })).json()) as VehicleResponse[];
-  const truck = vehicles.find((vehicle) => vehicle.unitNumber === 'KV-S31');
-  if (!truck) throw new Error('The demo fleet has no KV-S31.');
-  const checklist = buildChecklist(
-    [{ unitNumber: truck.unitNumber, kind: truck.kind, config: truck.config }],
-    'pre_trip',
-    'en',
-  );
+  const checklist = await pretripChecklist(page, 'KV-S31', 'en');
   const stopWith = (itemKey: string) => {
     const item = checklist.items.find((i) => i.key === itemKey);
     const stop = checklist.stops.find((s) => s.key === item?.stopKey);
@@ -261,18 +229,6 @@ test('the glove screen at 390 x 844 in night theme at 200 % text', async ({ page
   });
   expect(reset.ok()).toBe(true);
 });
-
-async function inspectionByClientId(page: Page, clientId: string): Promise<InspectionResponse> {
-  const headers = await pageHeaders(page);
-  const list = (await (await page.request.get('/api/inspections', { headers })).json()) as InspectionPage;
-  for (const item of list.items) {
-    const detail = (await (
-      await page.request.get(`/api/inspections/${item.id}`, { headers })
-    ).json()) as InspectionResponse;
-    if (detail.clientId === clientId) return detail;
-  }
-  throw new Error(`No inspection with client id ${clientId} on the server.`);
-}
 
 test('with the network cut halfway and restored, nothing is lost and nothing is doubled', async ({ page, context }) => {
   test.setTimeout(240_000);

@@ -1,11 +1,11 @@
 import { defineConfig, devices } from '@playwright/test';
-import { CHROMIUM_ARGS, CHROMIUM_PATH } from './e2e/chromium';
+import { CHROMIUM_ARGS, CHROMIUM_PATH } from './chromium';
 
 // Browser flows in Debian's Chromium (never a downloaded browser) against a server that
 // `npm test` starts with a fresh, seeded database and names in BASE_URL.
 export default defineConfig({
-  testDir: './e2e',
-  outputDir: '../.test-output/playwright',
+  testDir: '.',
+  outputDir: '../../.test-output/playwright',
   fullyParallel: false,
   workers: 1,
   retries: process.env.CI ? 1 : 0,
