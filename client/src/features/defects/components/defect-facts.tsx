@@ -1,4 +1,5 @@
 import { useTranslation } from 'react-i18next';
+import { useOfficeDates } from '@/lib/format-date';
 import { formatMeasure, type DefectResponse } from '@yardcall/shared';
 import { isLocale } from '@/lib/i18n';
 
@@ -6,6 +7,7 @@ import { isLocale } from '@/lib/i18n';
 export function DefectFacts({ defect }: { defect: DefectResponse }) {
   const { t, i18n } = useTranslation();
   const locale = isLocale(i18n.language) ? i18n.language : 'en';
+  const dates = useOfficeDates();
   return (
     <dl className="grid grid-cols-1 gap-x-4 gap-y-1 sm:grid-cols-[max-content_1fr]">
       <dt className="font-bold">{t('mechanic.defect.words')}</dt>
@@ -30,7 +32,7 @@ export function DefectFacts({ defect }: { defect: DefectResponse }) {
         </>
       ) : null}
       <dt className="font-bold">{t('mechanic.defect.reported')}</dt>
-      <dd>{new Date(defect.createdAt).toLocaleString(locale)}</dd>
+      <dd>{dates.dateTime(defect.createdAt)}</dd>
     </dl>
   );
 }

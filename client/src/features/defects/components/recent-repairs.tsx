@@ -1,9 +1,9 @@
 import { useTranslation } from 'react-i18next';
+import { useOfficeDates } from '@/lib/format-date';
 import type { DefectResponse } from '@yardcall/shared';
 import { ErrorAlert, Loading } from '@/components/ui/alert';
 import { Card, EmptyState } from '@/components/ui/layout';
 import { describeError } from '@/lib/errors';
-import { isLocale } from '@/lib/i18n';
 import { useDefects } from '@/lib/api/defects';
 
 const SHOWN = 20;
@@ -16,8 +16,8 @@ export function certifiedNewestFirst(defects: readonly DefectResponse[]): Defect
 }
 
 export function RecentRepairs() {
-  const { t, i18n } = useTranslation();
-  const locale = isLocale(i18n.language) ? i18n.language : 'en';
+  const { t } = useTranslation();
+  const dates = useOfficeDates();
   const defects = useDefects();
   if (defects.isPending) return <Loading label={t('common.loading')} />;
   if (defects.isError) return <ErrorAlert>{describeError(defects.error)}</ErrorAlert>;
@@ -37,14 +37,14 @@ export function RecentRepairs() {
                   {t('mechanic.repairLine', {
                     action: t(`mechanic.actions.${defect.repair.action}`),
                     mechanic: defect.repair.mechanic.name,
-                    date: new Date(defect.repair.signedAt).toLocaleString(locale),
+                    date: dates.dateTime(defect.repair.signedAt),
                   })}
                 </p>
                 <p>“{defect.repair.note}”</p>
                 {defect.repair.deferredUntil ? (
                   <p>
                     {t('mechanic.deferredUntil', {
-                      date: new Date(defect.repair.deferredUntil).toLocaleDateString(locale),
+                      date: dates.calendarDate(defect.repair.deferredUntil),
                     })}
                   </p>
                 ) : null}

@@ -1,5 +1,6 @@
 import type { ReactNode } from 'react';
 import { useTranslation } from 'react-i18next';
+import { usePhoneDates } from '@/lib/format-date';
 import { ErrorAlert, Loading } from '@/components/ui/alert';
 import { Card, EmptyState, Section } from '@/components/ui/layout';
 import { LinkButton } from '@/components/ui/link-button';
@@ -12,6 +13,7 @@ export const START_INSPECTION_PATH = '/driver/start';
 
 function RecentReports() {
   const { t, i18n } = useTranslation();
+  const dates = usePhoneDates();
   const reports = useRecentReports();
   if (reports.isPending) return <Loading label={t('common.loading')} />;
   if (reports.isError) return <ErrorAlert>{describeError(reports.error)}</ErrorAlert>;
@@ -34,11 +36,7 @@ function RecentReports() {
                   {t('driver.units', { units: report.vehicles.map((v) => v.unitNumber).join(', ') })}
                 </p>
                 <p>
-                  {t(`driver.reportStatus.${report.status}`)} ·{' '}
-                  {new Date(report.submittedAt ?? report.startedAt).toLocaleString(i18n.language, {
-                    dateStyle: 'medium',
-                    timeStyle: 'short',
-                  })}{' '}
+                  {t(`driver.reportStatus.${report.status}`)} · {dates.dateTime(report.submittedAt ?? report.startedAt)}{' '}
                   · {t('driver.defects', { count: report.defectCount })}
                 </p>
               </Card>

@@ -1,11 +1,12 @@
 import { useTranslation } from 'react-i18next';
+import { useOfficeDates } from '@/lib/format-date';
 import type { InspectionResponse } from '@yardcall/shared';
-import { formatDateTime } from '../utils/format';
 
 // Defects the driver corrected during the walk-around (the shared summary's list), apart from the
 // defects sent to the shop.
 export function FixedOnTheSpot({ inspection }: { inspection: Pick<InspectionResponse, 'summary'> }) {
-  const { t, i18n } = useTranslation();
+  const { t } = useTranslation();
+  const dates = useOfficeDates();
   const fixed = inspection.summary.fixedOnTheSpot;
   if (fixed.length === 0) return <p data-testid="no-fixes">{t('inspections.detail.noFixes')}</p>;
   return (
@@ -32,7 +33,7 @@ export function FixedOnTheSpot({ inspection }: { inspection: Pick<InspectionResp
             ) : null}
             <p className="font-bold">
               {t('inspections.items.fixedAction', { action: fix.action })}{' '}
-              <span className="font-normal text-muted">{formatDateTime(fix.fixedAt, i18n.language)}</span>
+              <span className="font-normal text-muted">{dates.dateTime(fix.fixedAt)}</span>
             </p>
             {fix.newMeasurement ? (
               <p>

@@ -1,8 +1,9 @@
 import type { ReactNode } from 'react';
 import { useTranslation } from 'react-i18next';
+import { useOfficeDates } from '@/lib/format-date';
 import { Link } from 'react-router';
 import type { InspectionResponse } from '@yardcall/shared';
-import { formatDateTime, formatSeconds, unitsLabel } from '../utils/format';
+import { formatSeconds, unitsLabel } from '../utils/format';
 import { inspectionPath } from '../utils/paths';
 
 function Fact({ term, children, testId }: { term: string; children: ReactNode; testId?: string }) {
@@ -16,6 +17,7 @@ function Fact({ term, children, testId }: { term: string; children: ReactNode; t
 
 export function InspectionFacts({ inspection }: { inspection: InspectionResponse }) {
   const { t, i18n } = useTranslation();
+  const dates = useOfficeDates();
   const locale = i18n.language;
   return (
     <dl className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4" data-testid="inspection-facts">
@@ -30,9 +32,9 @@ export function InspectionFacts({ inspection }: { inspection: InspectionResponse
         <span aria-hidden="true">{inspection.status === 'submitted' ? '✔ ' : '… '}</span>
         {t(`inspections.statuses.${inspection.status}`)}
       </Fact>
-      <Fact term={t('inspections.detail.started')}>{formatDateTime(inspection.startedAt, locale)}</Fact>
+      <Fact term={t('inspections.detail.started')}>{dates.dateTime(inspection.startedAt)}</Fact>
       <Fact term={t('inspections.detail.submitted')}>
-        {formatDateTime(inspection.submittedAt, locale) || t('inspections.detail.notYet')}
+        {dates.dateTime(inspection.submittedAt) || t('inspections.detail.notYet')}
       </Fact>
       <Fact term={t('inspections.detail.duration')}>
         {formatSeconds(inspection.durationSeconds) || t('inspections.detail.unknown')}
@@ -49,7 +51,8 @@ export function InspectionFacts({ inspection }: { inspection: InspectionResponse
 
 // Why the review flagged this walk-around: said in words, with the figures behind it.
 export function InspectionFlags({ inspection }: { inspection: InspectionResponse }) {
-  const { t, i18n } = useTranslation();
+  const { t } = useTranslation();
+  const dates = useOfficeDates();
   const { rushed, recurring } = inspection.flags;
   if (!rushed && recurring.length === 0) {
     return (
@@ -100,7 +103,7 @@ export function InspectionFlags({ inspection }: { inspection: InspectionResponse
             {t('inspections.detail.recurringBefore', { count: defect.earlierCount })}{' '}
             <Link to={inspectionPath(defect.earlier.inspectionId)} data-testid="recurring-earlier-link">
               {t('inspections.detail.recurringEarlier', {
-                date: formatDateTime(defect.earlier.reportedAt, i18n.language),
+                date: dates.dateTime(defect.earlier.reportedAt),
               })}
             </Link>{' '}
             ({t(`inspections.earlierStates.${defect.earlier.state}`)})

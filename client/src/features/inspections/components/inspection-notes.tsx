@@ -1,8 +1,8 @@
 import { useTranslation } from 'react-i18next';
+import { useOfficeDates } from '@/lib/format-date';
 import type { ChecklistItem, VoiceNoteResponse } from '@yardcall/shared';
 import { NotePlayer } from '@/lib/audio/note-player';
 import type { WaveformHandle } from '@/lib/audio/waveform-player';
-import { formatDateTime } from '../utils/format';
 
 export interface InspectionNotesProps {
   notes: VoiceNoteResponse[];
@@ -12,7 +12,8 @@ export interface InspectionNotesProps {
 }
 
 export function InspectionNotes({ notes, items, registerPlayer }: InspectionNotesProps) {
-  const { t, i18n } = useTranslation();
+  const { t } = useTranslation();
+  const dates = useOfficeDates();
   if (notes.length === 0) return <p>{t('inspections.detail.noNotes')}</p>;
   const itemsByKey = new Map(items.map((item) => [item.key, item]));
   return (
@@ -33,7 +34,7 @@ export function InspectionNotes({ notes, items, registerPlayer }: InspectionNote
               <h3 id={headingId} className="text-lg font-bold">
                 {t('inspections.detail.noteAt', { where })}
               </h3>
-              <p className="text-muted">{formatDateTime(note.createdAt, i18n.language)}</p>
+              <p className="text-muted">{dates.dateTime(note.createdAt)}</p>
               {note.heard ? (
                 <p>
                   <span className="font-bold">{t('inspections.items.heard')}</span> “{note.heard}”

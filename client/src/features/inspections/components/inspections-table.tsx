@@ -7,9 +7,10 @@ import {
   type SortingState,
 } from '@tanstack/react-table';
 import { useTranslation } from 'react-i18next';
+import { useOfficeDates } from '@/lib/format-date';
 import { Link } from 'react-router';
 import type { InspectionListItem, InspectionSortField, SortDirection } from '@yardcall/shared';
-import { formatDateTime, formatSeconds, unitsLabel } from '../utils/format';
+import { formatSeconds, unitsLabel } from '../utils/format';
 import { inspectionPath } from '../utils/paths';
 
 export interface TableSort {
@@ -27,8 +28,8 @@ const column = createColumnHelper<InspectionListItem>();
 
 // The server sorts and pages (cursor); the table shows the rows and asks for another order.
 export function InspectionsTable({ rows, sort, onSortChange }: InspectionsTableProps) {
-  const { t, i18n } = useTranslation();
-  const locale = i18n.language;
+  const { t } = useTranslation();
+  const dates = useOfficeDates();
 
   const columns = useMemo(
     () => [
@@ -37,14 +38,14 @@ export function InspectionsTable({ rows, sort, onSortChange }: InspectionsTableP
         enableSorting: true,
         cell: (info) => (
           <Link to={inspectionPath(info.row.original.id)} className="font-bold underline" data-testid="inspection-link">
-            {formatDateTime(info.getValue(), locale)}
+            {dates.dateTime(info.getValue())}
           </Link>
         ),
       }),
       column.accessor('submittedAt', {
         header: () => t('inspections.columns.submitted'),
         enableSorting: true,
-        cell: (info) => formatDateTime(info.getValue(), locale) || t('inspections.statuses.in_progress'),
+        cell: (info) => dates.dateTime(info.getValue()) || t('inspections.statuses.in_progress'),
       }),
       column.accessor((row) => unitsLabel(row.vehicles), {
         id: 'units',
@@ -105,7 +106,7 @@ export function InspectionsTable({ rows, sort, onSortChange }: InspectionsTableP
         },
       }),
     ],
-    [t, locale],
+    [t, dates],
   );
 
   const sorting: SortingState = [{ id: sort.field, desc: sort.order === 'desc' }];

@@ -1,11 +1,11 @@
 import { Fragment, useState } from 'react';
 import { Description, Dialog, DialogBackdrop, DialogPanel, DialogTitle } from '@headlessui/react';
 import { useTranslation } from 'react-i18next';
+import { useOfficeDates } from '@/lib/format-date';
 import type { RetentionPurgeResult, RetentionSettings } from '@yardcall/shared';
 import { ErrorAlert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { describeError } from '@/lib/errors';
-import { isLocale } from '@/lib/i18n';
 import { usePurgeRetention } from '@/lib/api/organizations';
 
 const COUNTS = [
@@ -21,11 +21,10 @@ const COUNTS = [
 
 // "Purge now" asks first, then shows what was removed.
 export function PurgeRecords({ settings }: { settings: RetentionSettings }) {
-  const { t, i18n } = useTranslation();
-  const locale = isLocale(i18n.language) ? i18n.language : 'en';
+  const { t } = useTranslation();
   const purge = usePurgeRetention();
   const [open, setOpen] = useState(false);
-  const date = (iso: string) => new Date(iso).toLocaleDateString(locale);
+  const date = useOfficeDates().date;
   const result = purge.data;
 
   const close = () => {

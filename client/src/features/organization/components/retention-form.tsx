@@ -1,11 +1,11 @@
 import { useState, type FormEvent } from 'react';
 import { useTranslation } from 'react-i18next';
+import { useOfficeDates } from '@/lib/format-date';
 import { RETENTION_MAX_MONTHS, RETENTION_MIN_MONTHS, type RetentionSettings } from '@yardcall/shared';
 import { ErrorAlert, Notice } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { describeError, fieldErrors } from '@/lib/errors';
-import { isLocale } from '@/lib/i18n';
 import { useUpdateRetention } from '@/lib/api/organizations';
 
 export type MonthsProblem = 'monthsWhole' | 'monthsTooFew' | 'monthsTooMany';
@@ -21,8 +21,8 @@ export function retentionMonthsProblem(text: string): MonthsProblem | null {
 }
 
 export function RetentionForm({ settings }: { settings: RetentionSettings }) {
-  const { t, i18n } = useTranslation();
-  const locale = isLocale(i18n.language) ? i18n.language : 'en';
+  const { t } = useTranslation();
+  const dates = useOfficeDates();
   const update = useUpdateRetention();
   const [months, setMonths] = useState(String(settings.months));
   const [problem, setProblem] = useState<MonthsProblem | null>(null);
@@ -47,7 +47,7 @@ export function RetentionForm({ settings }: { settings: RetentionSettings }) {
       <p data-testid="retention-current">
         {t('retention.current', {
           months: settings.months,
-          cutoff: new Date(settings.cutoff).toLocaleDateString(locale),
+          cutoff: dates.date(settings.cutoff),
         })}
       </p>
       <TextField

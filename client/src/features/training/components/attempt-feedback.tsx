@@ -1,17 +1,19 @@
 import { useTranslation } from 'react-i18next';
+import { useOfficeDates } from '@/lib/format-date';
 import type { TrainingAttemptResponse } from '@yardcall/shared';
 import { Card, Section } from '@/components/ui/layout';
 import { AttemptAudio } from './attempt-audio';
 import { AttemptChecklist } from './attempt-checklist';
 import { useSeekableAudio } from './attempt-review';
 import { AttemptSummary } from './attempt-summary';
-import { formatClock, formatDateTime } from './format';
+import { formatClock } from './format';
 import { GradeBadge } from './mark-badge';
 import { SafetyCaution } from '@/components/ui/safety-caution';
 
 // The student's view of one attempt: the trainer's grade and words, then each item with both marks.
 export function AttemptFeedback({ attempt }: { attempt: TrainingAttemptResponse }) {
-  const { t, i18n } = useTranslation();
+  const { t } = useTranslation();
+  const dates = useOfficeDates();
   const { audioRef, playingFrom, seek } = useSeekableAudio();
   const review = attempt.review;
   return (
@@ -25,7 +27,7 @@ export function AttemptFeedback({ attempt }: { attempt: TrainingAttemptResponse 
               <span className="text-muted">
                 {t('training.feedback.reviewedBy', {
                   name: review.trainer.name,
-                  date: formatDateTime(review.reviewedAt, i18n.language),
+                  date: dates.dateTime(review.reviewedAt),
                 })}
               </span>
             </p>

@@ -1,11 +1,12 @@
 import { useTranslation } from 'react-i18next';
+import { useOfficeDates } from '@/lib/format-date';
 import { Link } from 'react-router';
 import type { TrainingAttemptListItem } from '@yardcall/shared';
 import { ErrorAlert, Loading } from '@/components/ui/alert';
 import { EmptyState } from '@/components/ui/layout';
 import { describeError } from '@/lib/errors';
 import { type AttemptFilters, useAttempts } from '@/lib/api/training';
-import { formatDateTime, formatPercent } from './format';
+import { formatPercent } from './format';
 import { GradeBadge } from './mark-badge';
 
 export function AttemptRow({
@@ -17,9 +18,10 @@ export function AttemptRow({
   to: string;
   showStudent: boolean;
 }) {
-  const { t, i18n } = useTranslation();
+  const { t } = useTranslation();
+  const dates = useOfficeDates();
   const units = attempt.vehicles.map((v) => v.unitNumber).join(' + ');
-  const when = formatDateTime(attempt.finishedAt ?? attempt.startedAt, i18n.language);
+  const when = dates.dateTime(attempt.finishedAt ?? attempt.startedAt);
   return (
     <li
       className="rounded-xl border-2 border-line bg-surface p-4"

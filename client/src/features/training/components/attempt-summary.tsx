@@ -1,11 +1,13 @@
 import { useTranslation } from 'react-i18next';
+import { useOfficeDates } from '@/lib/format-date';
 import type { TrainingAttemptListItem } from '@yardcall/shared';
-import { formatClock, formatDateTime, formatPercent } from './format';
+import { formatClock, formatPercent } from './format';
 import { GradeBadge } from './mark-badge';
 
 // Who, which units, when, how long, how much was named and the grade.
 export function AttemptSummary({ attempt }: { attempt: TrainingAttemptListItem }) {
-  const { t, i18n } = useTranslation();
+  const { t } = useTranslation();
+  const dates = useOfficeDates();
   const units = attempt.vehicles.map((v) => v.unitNumber).join(' + ');
   return (
     <dl className="mb-6 grid gap-x-6 gap-y-1 sm:grid-cols-[max-content_1fr]" data-testid="attempt-summary">
@@ -14,7 +16,7 @@ export function AttemptSummary({ attempt }: { attempt: TrainingAttemptListItem }
       <dt className="font-bold">{t('training.attempt.units')}</dt>
       <dd>{units}</dd>
       <dt className="font-bold">{t('training.attempt.started')}</dt>
-      <dd>{formatDateTime(attempt.startedAt, i18n.language)}</dd>
+      <dd>{dates.dateTime(attempt.startedAt)}</dd>
       {attempt.durationMs !== null ? (
         <>
           <dt className="font-bold">{t('training.attempt.duration')}</dt>

@@ -9,7 +9,3 @@ export function formatClock(ms: number): string {
 export function formatPercent(fraction: number): number {
   return Math.round(fraction * 100);
 }
-
-export function formatDateTime(iso: string, locale: string): string {
-  return new Intl.DateTimeFormat(locale, { dateStyle: 'medium', timeStyle: 'short' }).format(new Date(iso));
-}

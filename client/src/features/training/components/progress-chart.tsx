@@ -1,12 +1,14 @@
 import { useTranslation } from 'react-i18next';
+import { useOfficeDates } from '@/lib/format-date';
 import type { TrainingProgress } from '@yardcall/shared';
 import { EmptyState } from '@/components/ui/layout';
-import { formatDateTime } from './format';
+
 import { GradeBadge } from './mark-badge';
 
 // Items named per finished attempt, oldest first, as bars with their numbers written out.
 export function ProgressChart({ progress }: { progress: TrainingProgress }) {
-  const { t, i18n } = useTranslation();
+  const { t } = useTranslation();
+  const dates = useOfficeDates();
   if (progress.attempts.length === 0) return <EmptyState title={t('training.progress.none')} />;
   const first = progress.attempts[0]!;
   const last = progress.attempts[progress.attempts.length - 1]!;
@@ -22,7 +24,7 @@ export function ProgressChart({ progress }: { progress: TrainingProgress }) {
           <li key={point.attemptId} data-testid="progress-point">
             <div className="flex flex-wrap items-center justify-between gap-2">
               <span>
-                {t('training.progress.attempt', { number: index + 1 })} · {formatDateTime(point.date, i18n.language)}
+                {t('training.progress.attempt', { number: index + 1 })} · {dates.dateTime(point.date)}
               </span>
               <span className="flex items-center gap-2">
                 <span className="font-bold">{t('training.progress.named', { percent: point.coveragePercent })}</span>

@@ -1,4 +1,5 @@
 import { useTranslation } from 'react-i18next';
+import { useOfficeDates } from '@/lib/format-date';
 import type { CaughtMail } from '@yardcall/shared';
 import { EmptyState } from '@/components/ui/layout';
 
@@ -32,7 +33,8 @@ function MailText({ text }: { text: string }) {
 }
 
 export function OutboxList({ mails }: { mails: CaughtMail[] }) {
-  const { t, i18n } = useTranslation();
+  const { t } = useTranslation();
+  const dates = useOfficeDates();
   if (mails.length === 0) return <EmptyState title={t('outbox.empty')} />;
   const sorted = [...mails].sort((a, b) => b.receivedAt.localeCompare(a.receivedAt));
   return (
@@ -41,7 +43,7 @@ export function OutboxList({ mails }: { mails: CaughtMail[] }) {
         <li key={mail.id} className="min-w-0 rounded-xl border-2 border-line bg-surface p-4" data-testid="caught-mail">
           <h2 className="text-xl font-bold">{mail.subject}</h2>
           <p className="text-muted">
-            {t('outbox.to', { to: mail.to.join(', ') })} · {new Date(mail.receivedAt).toLocaleString(i18n.language)}
+            {t('outbox.to', { to: mail.to.join(', ') })} · {dates.dateTime(mail.receivedAt)}
           </p>
           <div className="mt-2">
             <MailText text={mail.text} />

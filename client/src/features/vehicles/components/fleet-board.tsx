@@ -1,4 +1,5 @@
 import { useTranslation } from 'react-i18next';
+import { dateFormats, type DateFormats } from '@/lib/format-date';
 import { Link } from 'react-router';
 import type { FleetBoard as FleetBoardData, FleetBoardVehicle } from '@yardcall/shared';
 import { ErrorAlert, Loading } from '@/components/ui/alert';
@@ -18,21 +19,7 @@ function byUrgency(a: FleetBoardVehicle, b: FleetBoardVehicle): number {
   );
 }
 
-// Times read in the organisation's zone, as the board's "today" is.
-function zonedFormat(locale: string, timeZone: string) {
-  const dateTime = new Intl.DateTimeFormat(locale, { timeZone, dateStyle: 'medium', timeStyle: 'short' });
-  const date = new Intl.DateTimeFormat(locale, { timeZone, dateStyle: 'medium' });
-  const time = new Intl.DateTimeFormat(locale, { timeZone, timeStyle: 'short' });
-  return {
-    dateTime: (iso: string) => dateTime.format(new Date(iso)),
-    date: (iso: string) => date.format(new Date(iso)),
-    time: (iso: string) => time.format(new Date(iso)),
-  };
-}
-
-type ZonedFormat = ReturnType<typeof zonedFormat>;
-
-function TodayLine({ vehicle, format }: { vehicle: FleetBoardVehicle; format: ZonedFormat }) {
+function TodayLine({ vehicle, format }: { vehicle: FleetBoardVehicle; format: DateFormats }) {
   const { t } = useTranslation();
   const { preTrip, usedWithoutPreTrip } = vehicle.today;
   if (usedWithoutPreTrip) {
@@ -68,12 +55,12 @@ function TodayLine({ vehicle, format }: { vehicle: FleetBoardVehicle; format: Zo
 }
 
 // The supervisor's day at a glance: pre-trips done, units used without one, units out of service.
-function TodaySummary({ board, format }: { board: FleetBoardData; format: ZonedFormat }) {
+function TodaySummary({ board, format }: { board: FleetBoardData; format: DateFormats }) {
   const { t } = useTranslation();
   const preTrip = board.vehicles.filter((v) => v.today.preTrip !== null).length;
   const used = board.vehicles.filter((v) => v.today.usedWithoutPreTrip !== null).length;
   // Noon of the board's day, so the date reads the same in any zone.
-  const day = format.date(`${board.day}T12:00:00Z`);
+  const day = format.calendarDate(board.day);
   return (
     <Panel title={t('board.todayTitle', { day })} level={3} data-testid="board-today-summary">
       <p className="text-lg">
@@ -90,7 +77,7 @@ function TodaySummary({ board, format }: { board: FleetBoardData; format: ZonedF
   );
 }
 
-function BoardUnit({ vehicle, format }: { vehicle: FleetBoardVehicle; format: ZonedFormat }) {
+function BoardUnit({ vehicle, format }: { vehicle: FleetBoardVehicle; format: DateFormats }) {
   const { t } = useTranslation();
   const out = vehicle.status === 'out_of_service';
   const headingId = `board-unit-${vehicle.id}`;
@@ -168,7 +155,8 @@ export function FleetBoard() {
   if (board.isPending) return <Loading label={t('common.loading')} />;
   if (board.isError) return <ErrorAlert>{describeError(board.error)}</ErrorAlert>;
   const vehicles = [...board.data.vehicles].sort(byUrgency);
-  const format = zonedFormat(i18n.language, board.data.timeZone);
+  // Times read in the organisation's zone, as the board's "today" is.
+  const format = dateFormats(i18n.language, board.data.timeZone);
   return (
     <div className="flex flex-col gap-4" data-testid="fleet-board">
       <TodaySummary board={board.data} format={format} />

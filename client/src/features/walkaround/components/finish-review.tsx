@@ -1,6 +1,7 @@
 import { useEffect, useState, type FormEvent } from 'react';
 import { useQueryClient } from '@tanstack/react-query';
 import { useTranslation } from 'react-i18next';
+import { usePhoneDates } from '@/lib/format-date';
 import { formatMeasure, summarizeInspection, type ItemResult, type Locale } from '@yardcall/shared';
 import { ErrorAlert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
@@ -21,7 +22,7 @@ const UNANSWERED_SHOWN = 10;
 // Signed on this phone: the report waits in the outbox until the server has it. The driver may
 // close the app; the screen turns into the report once the server acknowledges it.
 function SignedWaiting({ inspection }: { inspection: LocalInspection }) {
-  const { t, i18n } = useTranslation();
+  const { t } = useTranslation();
   const queryClient = useQueryClient();
   const status = useSyncStatus();
   useEffect(() => {
@@ -31,10 +32,7 @@ function SignedWaiting({ inspection }: { inspection: LocalInspection }) {
       void queryClient.invalidateQueries({ queryKey: inspectionKeys.detail(inspection.serverId) });
     }
   }, [status.lastSyncedAt, queryClient, inspection.clientId, inspection.serverId]);
-  const signedAt = new Date(inspection.signed?.signedAt ?? inspection.updatedAt).toLocaleString(i18n.language, {
-    dateStyle: 'medium',
-    timeStyle: 'short',
-  });
+  const signedAt = usePhoneDates().dateTime(inspection.signed?.signedAt ?? inspection.updatedAt);
   return (
     <div data-testid="signed-waiting" data-sent={inspection.submittedAt ? 'yes' : 'no'}>
       <PageHeading

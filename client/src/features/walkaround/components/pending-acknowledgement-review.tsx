@@ -1,5 +1,6 @@
 import { useState, type FormEvent } from 'react';
 import { useTranslation } from 'react-i18next';
+import { usePhoneDates } from '@/lib/format-date';
 import type { DefectResponse, PendingAcknowledgement } from '@yardcall/shared';
 import { ErrorAlert, Notice } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
@@ -7,14 +8,13 @@ import { TextField } from '@/components/ui/field';
 import { Card } from '@/components/ui/layout';
 import { SignaturePad } from '@/components/ui/signature-pad';
 import { describeError } from '@/lib/errors';
-import { isLocale } from '@/lib/i18n';
 import { useAcknowledgeInspection } from '@/lib/api/inspections';
 import { SafetyCaution } from '@/components/ui/safety-caution';
 
 // What was found and what the shop did about it, said plainly: action, note, who and when.
 function CertifiedDefect({ defect, driver }: { defect: DefectResponse; driver: string }) {
-  const { t, i18n } = useTranslation();
-  const locale = isLocale(i18n.language) ? i18n.language : 'en';
+  const { t } = useTranslation();
+  const dates = usePhoneDates();
   const repair = defect.repair;
   return (
     <Card>
@@ -32,14 +32,14 @@ function CertifiedDefect({ defect, driver }: { defect: DefectResponse; driver: s
             {repair.deferredUntil ? (
               <>
                 <dt className="font-bold">{t('start.ack.deferredUntil')}</dt>
-                <dd>{new Date(repair.deferredUntil).toLocaleDateString(locale)}</dd>
+                <dd>{dates.calendarDate(repair.deferredUntil)}</dd>
               </>
             ) : null}
             <dt className="font-bold">{t('start.ack.signedBy')}</dt>
             <dd>
               {t('start.ack.whoWhen', {
                 mechanic: repair.mechanic.name,
-                date: new Date(repair.signedAt).toLocaleString(locale),
+                date: dates.dateTime(repair.signedAt),
               })}
             </dd>
           </dl>
@@ -62,8 +62,8 @@ export function PendingAcknowledgementReview({
   onSigned: () => void;
   onCancel?: () => void;
 }) {
-  const { t, i18n } = useTranslation();
-  const locale = isLocale(i18n.language) ? i18n.language : 'en';
+  const { t } = useTranslation();
+  const dates = usePhoneDates();
   const [name, setName] = useState('');
   const [drawing, setDrawing] = useState<string | null>(null);
   const [nameError, setNameError] = useState<string | undefined>();
@@ -99,7 +99,7 @@ export function PendingAcknowledgementReview({
       <p className="mb-4">
         {t('walkaround.ack.lead', {
           driver: pending.driver.name,
-          date: new Date(pending.submittedAt).toLocaleDateString(locale),
+          date: dates.date(pending.submittedAt),
         })}
       </p>
       <h3 className="mb-2 text-xl font-bold">{t('start.ack.repairsTitle', { count: pending.defects.length })}</h3>
