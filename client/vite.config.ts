@@ -67,6 +67,12 @@ export default defineConfig({
           groups: [
             { name: 'react', test: /node_modules[\\/](react|react-dom|scheduler|i18next|react-i18next)[\\/]/ },
             { name: 'app-libs', test: /node_modules[\\/](react-router|@tanstack[\\/](query-core|react-query))[\\/]/ },
+            // The small pieces every driver screen shows (alerts, buttons, page layout, paths, how old a
+            // copy is) in one file instead of seven, each of which would compress apart.
+            {
+              name: 'driver-common',
+              test: /src[\\/](components[\\/]ui[\\/](alert|button|layout)\.tsx|lib[\\/](sign-in|display-settings|offline[\\/](copy-age|app-update))\.ts|features[\\/]walkaround[\\/](walkaround-paths|api[\\/]walkaround-keys)\.ts)$/,
+            },
           ],
         },
       },

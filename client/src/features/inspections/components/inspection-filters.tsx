@@ -1,7 +1,8 @@
 import { useTranslation } from 'react-i18next';
 import { INSPECTION_KINDS, type InspectionListFilters } from '@yardcall/shared';
 import { Button } from '@/components/ui/button';
-import { CheckboxField, ChoiceField, TextField } from '@/components/ui/field';
+import { ChoiceField } from '@/components/ui/choice-field';
+import { CheckboxField, TextField } from '@/components/ui/field';
 import { driversOf, useUsers } from '@/lib/api/users';
 import { byUnitNumber, useVehicles } from '@/lib/api/vehicles';
 

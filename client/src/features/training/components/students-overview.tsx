@@ -1,7 +1,8 @@
 import { useTranslation } from 'react-i18next';
 import { Link } from 'react-router';
 import { ErrorAlert, Loading } from '@/components/ui/alert';
-import { EmptyState, PersonItem } from '@/components/ui/layout';
+import { EmptyState } from '@/components/ui/layout';
+import { PersonItem } from '@/components/ui/person-item';
 import { describeError } from '@/lib/errors';
 import { useAttempts } from '@/lib/api/training';
 import { formatPercent } from './format';

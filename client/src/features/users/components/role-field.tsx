@@ -1,6 +1,6 @@
 import { useTranslation } from 'react-i18next';
 import { ROLES, type Role } from '@yardcall/shared';
-import { ChoiceField } from '@/components/ui/field';
+import { ChoiceField } from '@/components/ui/choice-field';
 
 // A person's role, picked from the roles there are.
 export function RoleField({
