@@ -42,6 +42,8 @@ describe('users and invitations', () => {
 
     const mail = await caughtFor(email);
     expect(mail.subject).toBe('You are invited to Yardcall at Kestrel Valley Freight');
+    // The link's end in the organisation's zone (the demo organisation keeps UTC).
+    expect(mail.text).toMatch(/The link works until \d{4}-\d{2}-\d{2} \d{2}:\d{2} UTC and only once\./);
     const token = linkToken(mail);
 
     const summary = await request(t.url).get(`/api/invitations/${token}`);

@@ -1,6 +1,6 @@
 import { GoneException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
-import type { InvitationSummary, LoginResponse } from '@yardcall/shared';
+import { DEFAULT_TIME_ZONE, formatZonedTime, type InvitationSummary, type LoginResponse } from '@yardcall/shared';
 import { DataSource, type EntityManager } from 'typeorm';
 import { AuthService } from '../auth/auth.service';
 import { hashPassword } from '../auth/password';
@@ -56,7 +56,7 @@ export class InvitationsService {
     }
     if (invitation.expiresAt.getTime() <= Date.now()) {
       throw new GoneException(
-        `This invitation expired on ${invitation.expiresAt.toUTCString()}: ask your administrator to send a new one.`,
+        `This invitation expired on ${formatZonedTime(invitation.expiresAt, invitation.user?.organization?.timeZone ?? DEFAULT_TIME_ZONE)}: ask your administrator to send a new one.`,
       );
     }
     return invitation;

@@ -1,7 +1,7 @@
 import { ConflictException, Injectable, NotFoundException, ServiceUnavailableException } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
-import type { UserSummary } from '@yardcall/shared';
+import { DEFAULT_TIME_ZONE, formatZonedTime, type UserSummary } from '@yardcall/shared';
 import { DataSource, Repository } from 'typeorm';
 import type { AuthUser } from '../auth/auth-user';
 import { isUniqueViolation } from '../common/database-errors';
@@ -117,7 +117,8 @@ export class UsersService {
           `${organizationName} invited you to Yardcall as ${user.role}${user.isStudent ? ' (student)' : ''}.`,
           `Open this link to choose your password: ${link}`,
           '',
-          `The link works until ${expiresAt.toUTCString()} and only once.`,
+          // In the organisation's zone, as its other e-mails are.
+          `The link works until ${formatZonedTime(expiresAt, user.organization?.timeZone ?? DEFAULT_TIME_ZONE)} and only once.`,
         ].join('\n'),
       });
     } catch {
