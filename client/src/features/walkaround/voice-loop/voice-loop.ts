@@ -55,12 +55,14 @@ export const VOICE_LOOP_VERSION = 2;
 
 export const VOICE_LOOP_PHASES = [
   'idle',
+  // A question is out: a stop or an item, a value to keep, which item was meant, what was skipped.
   'asking',
   'confirming',
   'choosing',
+  'offering',
+  // The loop waits: for "resume", for the end of a note, after speech failed.
   'paused',
   'noting',
-  'offering',
   'stalled',
   'finished',
 ] as const;
