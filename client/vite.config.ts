@@ -71,7 +71,7 @@ export default defineConfig({
             // copy is) in one file instead of seven, each of which would compress apart.
             {
               name: 'driver-common',
-              test: /src[\\/](components[\\/]ui[\\/](alert|button|layout)\.tsx|lib[\\/](sign-in|display-settings|offline[\\/](copy-age|app-update))\.ts|features[\\/]walkaround[\\/](walkaround-paths|api[\\/]walkaround-keys)\.ts)$/,
+              test: /src[\\/](components[\\/]ui[\\/](alert|button|layout)\.tsx|lib[\\/](sign-in|display-settings|format-date|offline[\\/](copy-age|app-update))\.ts|features[\\/]walkaround[\\/](walkaround-paths|api[\\/]walkaround-keys)\.ts)$/,
             },
           ],
         },

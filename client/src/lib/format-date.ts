@@ -1,6 +1,5 @@
 import { useMemo } from 'react';
 import { useTranslation } from 'react-i18next';
-import { useTimeZone } from '@/lib/api/organizations';
 
 // How a moment reads on a screen: in the screen's language, and in one time zone. Office screens
 // read times in the organisation's zone (a report list, a defect, a repair), so a supervisor away
@@ -28,13 +27,6 @@ export function dateFormats(locale: string, timeZone?: string): DateFormats {
     time: formatter(new Intl.DateTimeFormat(locale, { timeZone, timeStyle: 'short' })),
     calendarDate: formatter(new Intl.DateTimeFormat(locale, { timeZone: 'UTC', dateStyle: 'medium' })),
   };
-}
-
-// Times on the office's screens, in the organisation's zone (the phone's own until the zone is known).
-export function useOfficeDates(): DateFormats {
-  const { i18n } = useTranslation();
-  const timeZone = useTimeZone().data?.timeZone;
-  return useMemo(() => dateFormats(i18n.language, timeZone), [i18n.language, timeZone]);
 }
 
 // Times on the driver's own screens, in the phone's zone.

@@ -1,5 +1,5 @@
 import { useTranslation } from 'react-i18next';
-import { useOfficeDates } from '@/lib/format-date';
+import { useOfficeDates } from '@/lib/office-dates';
 import { formatMeasure, type DefectResponse } from '@yardcall/shared';
 import { isLocale } from '@/lib/i18n';
 

@@ -1,5 +1,5 @@
 import { useTranslation } from 'react-i18next';
-import { useOfficeDates } from '@/lib/format-date';
+import { useOfficeDates } from '@/lib/office-dates';
 import type { DefectResponse } from '@yardcall/shared';
 import { ErrorAlert, Loading } from '@/components/ui/alert';
 import { Card, EmptyState } from '@/components/ui/layout';

@@ -1,5 +1,5 @@
 import { useTranslation } from 'react-i18next';
-import { useOfficeDates } from '@/lib/format-date';
+import { useOfficeDates } from '@/lib/office-dates';
 import type { InspectionResponse } from '@yardcall/shared';
 
 // Defects the driver corrected during the walk-around (the shared summary's list), apart from the

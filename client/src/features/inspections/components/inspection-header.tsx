@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import { useTranslation } from 'react-i18next';
-import { useOfficeDates } from '@/lib/format-date';
+import { useOfficeDates } from '@/lib/office-dates';
 import { Link } from 'react-router';
 import type { InspectionResponse } from '@yardcall/shared';
 import { formatSeconds, unitsLabel } from '../utils/format';

@@ -1,5 +1,5 @@
 import { useTranslation } from 'react-i18next';
-import { useOfficeDates } from '@/lib/format-date';
+import { useOfficeDates } from '@/lib/office-dates';
 import type { ChecklistItem, VoiceNoteResponse } from '@yardcall/shared';
 import { NotePlayer } from '@/lib/audio/note-player';
 import type { WaveformHandle } from '@/lib/audio/waveform-player';

@@ -7,7 +7,7 @@ import {
   type SortingState,
 } from '@tanstack/react-table';
 import { useTranslation } from 'react-i18next';
-import { useOfficeDates } from '@/lib/format-date';
+import { useOfficeDates } from '@/lib/office-dates';
 import { Link } from 'react-router';
 import type { InspectionListItem, InspectionSortField, SortDirection } from '@yardcall/shared';
 import { formatSeconds, unitsLabel } from '../utils/format';

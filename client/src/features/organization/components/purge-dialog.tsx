@@ -1,7 +1,7 @@
 import { Fragment, useState } from 'react';
 import { Description, Dialog, DialogBackdrop, DialogPanel, DialogTitle } from '@headlessui/react';
 import { useTranslation } from 'react-i18next';
-import { useOfficeDates } from '@/lib/format-date';
+import { useOfficeDates } from '@/lib/office-dates';
 import type { RetentionPurgeResult, RetentionSettings } from '@yardcall/shared';
 import { ErrorAlert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';

@@ -1,6 +1,6 @@
 import { useState, type FormEvent } from 'react';
 import { useTranslation } from 'react-i18next';
-import { useOfficeDates } from '@/lib/format-date';
+import { useOfficeDates } from '@/lib/office-dates';
 import { RETENTION_MAX_MONTHS, RETENTION_MIN_MONTHS, type RetentionSettings } from '@yardcall/shared';
 import { ErrorAlert, Notice } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';

@@ -1,5 +1,5 @@
 import { useTranslation } from 'react-i18next';
-import { useOfficeDates } from '@/lib/format-date';
+import { useOfficeDates } from '@/lib/office-dates';
 import type { TrainingAttemptResponse } from '@yardcall/shared';
 import { Card, Section } from '@/components/ui/layout';
 import { AttemptAudio } from './attempt-audio';

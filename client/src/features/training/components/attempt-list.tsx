@@ -1,5 +1,5 @@
 import { useTranslation } from 'react-i18next';
-import { useOfficeDates } from '@/lib/format-date';
+import { useOfficeDates } from '@/lib/office-dates';
 import { Link } from 'react-router';
 import type { TrainingAttemptListItem } from '@yardcall/shared';
 import { ErrorAlert, Loading } from '@/components/ui/alert';

@@ -1,5 +1,5 @@
 import { useTranslation } from 'react-i18next';
-import { useOfficeDates } from '@/lib/format-date';
+import { useOfficeDates } from '@/lib/office-dates';
 import type { TrainingProgress } from '@yardcall/shared';
 import { EmptyState } from '@/components/ui/layout';
 
