@@ -53,23 +53,15 @@ import { VOICE_LOOP_WORDS, fillWords } from './voice-loop-words';
 
 export const VOICE_LOOP_VERSION = 2;
 
-export const VOICE_LOOP_PHASES = [
-  'idle',
-  // A question is out: a stop or an item, a value to keep, which item was meant, what was skipped.
-  'asking',
-  'confirming',
-  'choosing',
-  'offering',
-  // The loop waits: for "resume", for the end of a note, after speech failed.
-  'paused',
-  'noting',
-  'stalled',
-  'finished',
-] as const;
+// A question is out: a stop or an item, a value to keep, which item was meant, what was skipped.
+const QUESTION_PHASES = ['asking', 'confirming', 'choosing', 'offering'] as const;
+// The loop waits: for "resume", for the end of a note, after speech failed.
+const WAITING_PHASES = ['paused', 'noting', 'stalled'] as const;
+export const VOICE_LOOP_PHASES = ['idle', ...QUESTION_PHASES, ...WAITING_PHASES, 'finished'] as const;
 export type VoiceLoopPhase = (typeof VOICE_LOOP_PHASES)[number];
 
-// Where to return after a pause, a wait, a note or a speech failure.
-type ReturnPhase = 'asking' | 'confirming' | 'choosing' | 'offering';
+// Where to return after a pause, a wait, a note or a speech failure: the question that was out.
+type ReturnPhase = (typeof QUESTION_PHASES)[number];
 
 // What a "yes" keeps: one value past its limit or heard with low confidence, or a whole stop's answer
 // heard with low confidence.
