@@ -18,7 +18,6 @@ export {
   confirmKeptPrompt,
   confirmOutOfLimitPrompt,
   languageSwitchedPrompt,
-  measurementToWords,
   readBackMeasurement,
   unclearPrompt,
 } from './read-back.js';

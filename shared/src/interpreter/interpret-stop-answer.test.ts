@@ -4,7 +4,7 @@ import { noise } from './corpus/noise.js';
 import { buildChecklist, type Checklist, type Locale } from '../checklist/index.js';
 import { sampleCombination } from '../testing.js';
 import { interpretStopAnswer, itemsNamedIn } from './interpret-stop-answer.js';
-import { measurementToWords } from './read-back.js';
+import { measurementToWords } from '../numbers/index.js';
 import type { Alternative, StopInterpretation, StopItemRef } from './types.js';
 
 // Recogniser hypotheses, each with its confidence.

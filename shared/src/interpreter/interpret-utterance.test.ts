@@ -5,7 +5,8 @@ import { QUANTITIES, type Quantity } from '../units/index.js';
 import { interpretFix, interpretUtterance } from './interpret-utterance.js';
 import { interpretConfirmation } from './interpret-confirmation.js';
 import { noise } from './corpus/noise.js';
-import { confirmOutOfLimitPrompt, measurementToWords, readBackMeasurement, unclearPrompt } from './read-back.js';
+import { measurementToWords } from '../numbers/index.js';
+import { confirmOutOfLimitPrompt, readBackMeasurement, unclearPrompt } from './read-back.js';
 import { UNCLEAR_REASONS, type Alternative, type Interpretation, type SpokenMeasurement } from './types.js';
 
 const check: Expectation = { type: 'check' };

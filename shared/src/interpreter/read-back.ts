@@ -5,9 +5,6 @@ import type { Locale } from '../checklist/index.js';
 import { measurementToWords } from '../numbers/index.js';
 import type { SpokenMeasurement, UnclearReason } from './types.js';
 
-// The value with its unit alone, which the voice loop puts in sentences of its own.
-export { measurementToWords };
-
 type InterpreterPrompts = typeof en;
 const PROMPTS: Record<Locale, InterpreterPrompts> = { en, es };
 
